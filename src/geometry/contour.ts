@@ -1,0 +1,253 @@
+/**
+ * Contours and regions: the exact boundary representation every engine module shares.
+ *
+ * Conventions (fixed, tested in tests/geometry.test.ts):
+ * - World space is y up; counter-clockwise (CCW) is positive.
+ * - A contour is a closed loop of n vertices `xy = [x0, y0, x1, y1, ...]`; segment i runs from
+ *   vertex i to vertex (i + 1) % n. The closing vertex is NOT repeated.
+ * - `bulge[i]` describes segment i: 0 is a straight line; otherwise the segment is the circular
+ *   arc whose signed sweep is phi = 4 * atan(bulge[i]) (phi > 0 turns CCW about the arc centre).
+ *   `bulge` may be null when every segment is straight. |bulge| <= 1 (sweep at most 180 deg) is
+ *   kept by every constructor in this module, which keeps the radius well conditioned.
+ * - A region is a list of contours whose signed moments add: an outer boundary runs CCW and a
+ *   hole runs CW. Regions produced by the boolean module never overlap themselves.
+ */
+
+export interface Contour {
+  readonly xy: Float64Array;
+  readonly bulge: Float64Array | null;
+}
+
+export type Region = readonly Contour[];
+
+export type Vec2 = readonly [number, number];
+
+/** Build a contour from interleaved vertices and optional per-segment bulges. */
+export function contourFrom(xy: ArrayLike<number>, bulge?: ArrayLike<number> | null): Contour {
+  const pts = Float64Array.from(xy);
+  let b: Float64Array | null = null;
+  if (bulge) {
+    b = Float64Array.from(bulge);
+    if (b.length * 2 !== pts.length) throw new Error('contourFrom: bulge length must equal vertex count');
+    if (b.every((v) => v === 0)) b = null;
+  }
+  return { xy: pts, bulge: b };
+}
+
+export function contourVertexCount(c: Contour): number {
+  return c.xy.length >> 1;
+}
+
+/** The sweep angle (radians, signed) of segment i; 0 for a line. */
+export function segmentSweep(c: Contour, i: number): number {
+  const b = c.bulge ? c.bulge[i] : 0;
+  return b === 0 ? 0 : 4 * Math.atan(b);
+}
+
+/** Bulge for a signed sweep angle. */
+export function bulgeFromSweep(phi: number): number {
+  return Math.tan(phi / 4);
+}
+
+/** Centre and radius of arc segment i (throws for a line). */
+export function segmentArc(c: Contour, i: number): { cx: number; cy: number; r: number; sweep: number } {
+  const n = c.xy.length >> 1;
+  const j = (i + 1) % n;
+  const ax = c.xy[2 * i], ay = c.xy[2 * i + 1];
+  const bx = c.xy[2 * j], by = c.xy[2 * j + 1];
+  const phi = segmentSweep(c, i);
+  if (phi === 0) throw new Error('segmentArc: segment is a line');
+  return arcFromChord(ax, ay, bx, by, phi);
+}
+
+/** Centre and radius of the arc from a to b with signed sweep phi. */
+export function arcFromChord(ax: number, ay: number, bx: number, by: number, phi: number) {
+  const dx = bx - ax, dy = by - ay;
+  const L = Math.hypot(dx, dy);
+  const alpha = Math.abs(phi) / 2;
+  const r = L / (2 * Math.sin(alpha));
+  // Unit vector from the centre towards the arc's midpoint: the chord's right normal for phi > 0.
+  const s = phi > 0 ? 1 : -1;
+  const ux = (s * dy) / L, uy = (-s * dx) / L;
+  const d = r * Math.cos(alpha);
+  const cx = (ax + bx) / 2 - ux * d;
+  const cy = (ay + by) / 2 - uy * d;
+  return { cx, cy, r, sweep: phi };
+}
+
+/** Signed sweep of the arc that starts at a, passes through m and ends at b; NaN if collinear. */
+export function sweepThrough(ax: number, ay: number, mx: number, my: number, bx: number, by: number): number {
+  // The inscribed-angle theorem: the sweep is twice the angle between the chords at the middle
+  // point, measured so that a CCW arc (m to the right of a->b) is positive.
+  const cross = (mx - ax) * (by - ay) - (my - ay) * (bx - ax);
+  const scale = Math.hypot(mx - ax, my - ay) * Math.hypot(bx - ax, by - ay);
+  if (!(Math.abs(cross) > 1e-12 * scale)) return NaN;
+  // Angle a-m-b at m; the arc through m subtends 2*(pi - angle) on the far side.
+  const v1x = ax - mx, v1y = ay - my, v2x = bx - mx, v2y = by - my;
+  const angM = Math.atan2(Math.abs(v1x * v2y - v1y * v2x), v1x * v2x + v1y * v2y);
+  const sweep = 2 * (Math.PI - angM);
+  return cross > 0 ? sweep : -sweep;
+}
+
+/**
+ * Append an arc from the last pushed vertex (ax, ay) to b with signed sweep phi, splitting it so
+ * that no piece sweeps more than 180 degrees. Pushes the interior vertices and the bulges; the end
+ * vertex b itself is not pushed (the caller pushes it as the start of the next segment).
+ */
+export function pushArc(xy: number[], bulge: number[], ax: number, ay: number, bx: number, by: number, phi: number): void {
+  const pieces = Math.max(1, Math.ceil(Math.abs(phi) / Math.PI - 1e-12));
+  if (pieces === 1) {
+    bulge.push(bulgeFromSweep(phi));
+    return;
+  }
+  const { cx, cy, r } = arcFromChord(ax, ay, bx, by, phi);
+  const t0 = Math.atan2(ay - cy, ax - cx);
+  const step = phi / pieces;
+  bulge.push(bulgeFromSweep(step));
+  for (let k = 1; k < pieces; k++) {
+    const t = t0 + step * k;
+    xy.push(cx + r * Math.cos(t), cy + r * Math.sin(t));
+    bulge.push(bulgeFromSweep(step));
+  }
+}
+
+/** A full circle as two CCW half-circle arcs starting at angle 0. */
+export function circleContour(cx: number, cy: number, r: number): Contour {
+  return { xy: Float64Array.of(cx + r, cy, cx - r, cy), bulge: Float64Array.of(1, 1) };
+}
+
+/** Polygon contour from points (no arcs). */
+export function polygonContour(points: readonly Vec2[]): Contour {
+  const xy = new Float64Array(points.length * 2);
+  points.forEach((p, i) => {
+    xy[2 * i] = p[0];
+    xy[2 * i + 1] = p[1];
+  });
+  return { xy, bulge: null };
+}
+
+/** The same loop traversed the other way (every moment changes sign). */
+export function reverseContour(c: Contour): Contour {
+  const n = c.xy.length >> 1;
+  const xy = new Float64Array(2 * n);
+  for (let i = 0; i < n; i++) {
+    xy[2 * i] = c.xy[2 * (n - 1 - i)];
+    xy[2 * i + 1] = c.xy[2 * (n - 1 - i) + 1];
+  }
+  let bulge: Float64Array | null = null;
+  if (c.bulge) {
+    bulge = new Float64Array(n);
+    // Old segment k runs v_k -> v_{k+1}; in the reversed loop it runs from new index n-2-k.
+    for (let k = 0; k < n; k++) bulge[(2 * n - 2 - k) % n] = -c.bulge[k];
+  }
+  return { xy, bulge };
+}
+
+/** Apply the affine map p -> (a*x + b*y + e, c*x + d*y + f). A reflection flips each bulge. */
+export function transformContour(c: Contour, a: number, b: number, cc: number, d: number, e: number, f: number): Contour {
+  const n = c.xy.length >> 1;
+  const xy = new Float64Array(2 * n);
+  for (let i = 0; i < n; i++) {
+    const x = c.xy[2 * i], y = c.xy[2 * i + 1];
+    xy[2 * i] = a * x + b * y + e;
+    xy[2 * i + 1] = cc * x + d * y + f;
+  }
+  const det = a * d - b * cc;
+  const bulge = c.bulge ? (det < 0 ? c.bulge.map((v) => -v) : Float64Array.from(c.bulge)) : null;
+  return { xy, bulge };
+}
+
+export function translateRegion(r: Region, dx: number, dy: number): Region {
+  return r.map((c) => transformContour(c, 1, 0, 0, 1, dx, dy));
+}
+
+export function rotateRegion(r: Region, theta: number, ox = 0, oy = 0): Region {
+  const cs = Math.cos(theta), sn = Math.sin(theta);
+  return r.map((c) => transformContour(c, cs, -sn, sn, cs, ox - cs * ox + sn * oy, oy - sn * ox - cs * oy));
+}
+
+export interface Bounds {
+  xmin: number;
+  xmax: number;
+  ymin: number;
+  ymax: number;
+}
+
+/** Exact bounds: vertices plus the axis extremes of every arc that lies within its sweep. */
+export function regionBounds(r: Region): Bounds | null {
+  let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
+  for (const c of r) {
+    const n = c.xy.length >> 1;
+    for (let i = 0; i < n; i++) {
+      const x = c.xy[2 * i], y = c.xy[2 * i + 1];
+      if (x < xmin) xmin = x;
+      if (x > xmax) xmax = x;
+      if (y < ymin) ymin = y;
+      if (y > ymax) ymax = y;
+      if (c.bulge && c.bulge[i] !== 0) {
+        const { cx, cy, r: rad, sweep } = segmentArc(c, i);
+        const t0 = Math.atan2(y - cy, x - cx);
+        for (let k = 0; k < 4; k++) {
+          const t = (k * Math.PI) / 2;
+          if (!angleInSweep(t, t0, sweep)) continue;
+          if (k === 0) xmax = Math.max(xmax, cx + rad);
+          else if (k === 1) ymax = Math.max(ymax, cy + rad);
+          else if (k === 2) xmin = Math.min(xmin, cx - rad);
+          else ymin = Math.min(ymin, cy - rad);
+        }
+      }
+    }
+  }
+  if (xmin > xmax) return null;
+  return { xmin, xmax, ymin, ymax };
+}
+
+/** True when angle t lies strictly inside the sweep that starts at t0 (either direction). */
+export function angleInSweep(t: number, t0: number, sweep: number): boolean {
+  const TWO_PI = 2 * Math.PI;
+  let d = sweep >= 0 ? t - t0 : t0 - t;
+  d = ((d % TWO_PI) + TWO_PI) % TWO_PI;
+  return d > 0 && d < Math.abs(sweep);
+}
+
+/** Boundary length: chords for lines, r*|phi| for arcs. */
+export function contourLength(c: Contour): number {
+  const n = c.xy.length >> 1;
+  let sum = 0;
+  for (let i = 0; i < n; i++) {
+    const j = (i + 1) % n;
+    const L = Math.hypot(c.xy[2 * j] - c.xy[2 * i], c.xy[2 * j + 1] - c.xy[2 * i + 1]);
+    const phi = c.bulge ? 4 * Math.atan(c.bulge[i]) : 0;
+    if (phi === 0) sum += L;
+    else {
+      const half = Math.abs(phi) / 2;
+      sum += (L / (2 * Math.sin(half))) * Math.abs(phi);
+    }
+  }
+  return sum;
+}
+
+/**
+ * Points along the boundary for drawing and hit-testing only (never for the numbers): arcs are
+ * split so that no chord deviates from the arc by more than `tol`.
+ */
+export function contourPolyline(c: Contour, tol: number): number[] {
+  const n = c.xy.length >> 1;
+  const out: number[] = [];
+  for (let i = 0; i < n; i++) {
+    const ax = c.xy[2 * i], ay = c.xy[2 * i + 1];
+    out.push(ax, ay);
+    const phi = c.bulge ? 4 * Math.atan(c.bulge[i]) : 0;
+    if (phi === 0) continue;
+    const j = (i + 1) % n;
+    const { cx, cy, r } = arcFromChord(ax, ay, c.xy[2 * j], c.xy[2 * j + 1], phi);
+    const maxStep = tol >= r ? Math.PI / 2 : 2 * Math.acos(1 - tol / r);
+    const k = Math.max(1, Math.ceil(Math.abs(phi) / Math.max(maxStep, 1e-3)));
+    const t0 = Math.atan2(ay - cy, ax - cx);
+    for (let s = 1; s < k; s++) {
+      const t = t0 + (phi * s) / k;
+      out.push(cx + r * Math.cos(t), cy + r * Math.sin(t));
+    }
+  }
+  return out;
+}

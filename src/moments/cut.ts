@@ -1,0 +1,153 @@
+/**
+ * Moments of the part of a region on one side of a horizontal line y = c, exactly.
+ *
+ * Each boundary segment is split where it crosses the line and only the pieces above it are
+ * integrated. The region above is closed by pieces of the cut line itself. With Green's theorem in
+ * the dx-only form (∫f dA = −∮ G dx with ∂G/∂y = f) and coordinates taken relative to the cut
+ * line, every G (y, xy, y²/2, x²y, y³/3, xy²/2) vanishes on y = 0, so the closing pieces add
+ * nothing and their pairing never matters: holes, several loops and tangencies need no special
+ * case. The cut width is the summed length of the closing pieces, Σ x_entry − Σ x_exit.
+ */
+import type { Contour, Region } from '../geometry/contour';
+import { arcFromChord, translateRegion } from '../geometry/contour';
+import { regionMomentsAbout, regionReference, shiftMoments, type RawMoments } from './kernel';
+
+export interface HalfPlaneMoments extends RawMoments {
+  /** Total length of the cut line inside the region (the width b at the cut). */
+  width: number;
+}
+
+interface Piece {
+  // Sub-segment [t0, t1] of a segment; arcs keep their circle, lines their endpoints.
+  above: boolean;
+  x0: number;
+  y0: number;
+  x1: number;
+  y1: number;
+  sweep: number;
+}
+
+/** Split segment i of contour c at the crossings of y = yc and push the pieces. */
+function splitSegment(c: Contour, i: number, yc: number, out: Piece[]): void {
+  const n = c.xy.length >> 1;
+  const j = i + 1 === n ? 0 : i + 1;
+  const ax = c.xy[2 * i], ay = c.xy[2 * i + 1], bx = c.xy[2 * j], by = c.xy[2 * j + 1];
+  const b = c.bulge ? c.bulge[i] : 0;
+  if (b === 0) {
+    if ((ay - yc) * (by - yc) < 0) {
+      const t = (yc - ay) / (by - ay);
+      const xm = ax + t * (bx - ax);
+      out.push({ above: ay > yc, x0: ax, y0: ay, x1: xm, y1: yc, sweep: 0 });
+      out.push({ above: by > yc, x0: xm, y0: yc, x1: bx, y1: by, sweep: 0 });
+    } else {
+      const above = (ay + by) / 2 > yc;
+      out.push({ above, x0: ax, y0: ay, x1: bx, y1: by, sweep: 0 });
+    }
+    return;
+  }
+  const phi = 4 * Math.atan(b);
+  const { cx, cy, r } = arcFromChord(ax, ay, bx, by, phi);
+  const t0 = Math.atan2(ay - cy, ax - cx);
+  // Parameters (fractions of the sweep) where the arc meets y = yc.
+  const cuts: number[] = [];
+  const sy = (yc - cy) / r;
+  if (Math.abs(sy) < 1) {
+    const base = Math.asin(sy);
+    for (const ang of [base, Math.PI - base]) {
+      let d = phi > 0 ? ang - t0 : t0 - ang;
+      d = ((d % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI);
+      const f = d / Math.abs(phi);
+      if (f > 1e-12 && f < 1 - 1e-12) cuts.push(f);
+    }
+    cuts.sort((p, q) => p - q);
+  }
+  let px = ax, py = ay, pf = 0;
+  const ends = [...cuts, 1];
+  for (const f of ends) {
+    let qx: number, qy: number;
+    if (f === 1) {
+      qx = bx;
+      qy = by;
+    } else {
+      const t = t0 + phi * f;
+      qx = cx + r * Math.cos(t);
+      qy = yc;
+    }
+    const mid = t0 + phi * ((pf + f) / 2);
+    const above = cy + r * Math.sin(mid) > yc;
+    out.push({ above, x0: px, y0: py, x1: qx, y1: qy, sweep: phi * (f - pf) });
+    px = qx;
+    py = qy;
+    pf = f;
+  }
+}
+
+/**
+ * Moments (about the origin) of the part of the region where y > yc, and the cut width b.
+ * The work is done relative to a reference point on the cut line to keep sums well conditioned.
+ */
+export function momentsAbove(region: Region, yc: number): HalfPlaneMoments {
+  const [ox] = regionReference(region);
+  const local = translateRegion(region, -ox, -yc);
+  const acc = new Float64Array(6);
+  let width = 0;
+  const pieces: Piece[] = [];
+  for (const c of local) {
+    const n = c.xy.length >> 1;
+    if (n < 2) continue;
+    pieces.length = 0;
+    for (let i = 0; i < n; i++) splitSegment(c, i, 0, pieces);
+    const m = pieces.length;
+    for (let k = 0; k < m; k++) {
+      const p = pieces[k];
+      const prev = pieces[(k + m - 1) % m];
+      // Where the boundary enters the upper side a closing piece of the cut line ends; where it
+      // leaves, one starts. On the local cut line y = 0 every F_k above vanishes except F for
+      // nothing: all six G carry a factor y, so closing pieces add no moment, only width.
+      if (p.above && !prev.above) width += p.x0;
+      else if (!p.above && prev.above) width -= p.x0;
+      if (!p.above) continue;
+      if (p.sweep === 0) lineDx(p.x0, p.y0, p.x1, p.y1, acc);
+      else arcDx(p.x0, p.y0, p.x1, p.y1, p.sweep, acc);
+    }
+  }
+  const local6 = { m00: acc[0], m10: acc[1], m01: acc[2], m20: acc[3], m02: acc[4], m11: acc[5] };
+  return { ...shiftMoments(local6, ox, yc), width };
+}
+
+/** −∫ G dx along the straight piece, for each of the six G. Exact (Gauss–Legendre, 3 nodes, degree ≤ 5). */
+function lineDx(x0: number, y0: number, x1: number, y1: number, acc: Float64Array): void {
+  const dx = x1 - x0;
+  if (dx === 0) return;
+  const dy = y1 - y0;
+  // G is a polynomial of degree ≤ 3 along the line: 3-point Gauss–Legendre is exact to degree 5.
+  for (let q = 0; q < 3; q++) {
+    const t = GL_T[q], w = GL_W[q] * dx;
+    const x = x0 + t * dx, y = y0 + t * dy;
+    acc[0] -= w * y;
+    acc[1] -= w * x * y;
+    acc[2] -= (w * y * y) / 2;
+    acc[3] -= w * x * x * y;
+    acc[4] -= (w * y * y * y) / 3;
+    acc[5] -= (w * x * y * y) / 2;
+  }
+}
+const GL_T = [0.5 - Math.sqrt(15) / 10, 0.5, 0.5 + Math.sqrt(15) / 10];
+const GL_W = [5 / 18, 8 / 18, 5 / 18];
+
+/**
+ * −∫ G dx along an arc piece: the chord in dx form plus the circular segment between chord and
+ * arc (the closed segment loop arc + reversed chord has −∮G dx = its area moments, which the
+ * kernel's closed forms give exactly).
+ */
+function arcDx(x0: number, y0: number, x1: number, y1: number, phi: number, acc: Float64Array): void {
+  lineDx(x0, y0, x1, y1, acc);
+  // Segment loop: arc a->b then chord b->a. Its exact area moments:
+  const seg = regionMomentsAbout([{ xy: Float64Array.of(x0, y0, x1, y1), bulge: Float64Array.of(Math.tan(phi / 4), 0) }], 0, 0);
+  acc[0] += seg.m00;
+  acc[1] += seg.m10;
+  acc[2] += seg.m01;
+  acc[3] += seg.m20;
+  acc[4] += seg.m02;
+  acc[5] += seg.m11;
+}
