@@ -1,0 +1,513 @@
+/**
+ * Parametric profiles: each profile type of types.ts becomes exact path geometry (lines and
+ * circular arcs), placed in world coordinates.
+ *
+ * Each outline is first built in the profile's local frame, as described beside its type in
+ * types.ts, as a loop of corners with an optional fillet radius per corner. A rounded corner
+ * becomes the tangent circular arc of that radius; its `via` point is the arc's midpoint,
+ * computed from the arc centre. The placement is applied after that: mirror about the local y axis
+ * (x -> -x), rotate `rotation` degrees CCW about the local origin, then translate by `at`.
+ *
+ * Orientation: the outer boundary always runs CCW and holes run CW (a mirror reverses the
+ * traversal, so mirrored paths are written backwards). Every path ends exactly at its start.
+ *
+ * This module holds no state and imports nothing outside the document types.
+ */
+import type { PathSegment, PathShape, Point, ProfileShape } from './types';
+
+export type ProfileType = ProfileShape['type'];
+type ProfileOf<T extends ProfileType> = Extract<ProfileShape, { type: T }>;
+type NonDimensionKey = 'id' | 'type' | 'name' | 'op' | 'material' | 'at' | 'rotation' | 'mirror';
+
+/** The numeric dimension fields of one profile type (everything except identity and placement). */
+export type ProfileDimensions<T extends ProfileType> = Omit<ProfileOf<T>, NonDimensionKey>;
+export type ProfileDimensionKey<T extends ProfileType> = keyof ProfileDimensions<T> & string;
+
+export interface ProfileField<T extends ProfileType> {
+  key: ProfileDimensionKey<T>;
+  /** Plain-language label for the editor's side panel; messages use it in lower case. */
+  label: string;
+  /** True for radii, which may be 0 (a sharp corner); every other dimension must be > 0. */
+  allowZero: boolean;
+  /** True when the field may be left out of the document (treated as 0). */
+  optional?: boolean;
+}
+
+export interface ProfileIssue {
+  /** Field name relative to the shape (the caller prefixes the shape's own path). */
+  path: string;
+  message: string;
+}
+
+export interface ProfilePaths {
+  /** The outer boundary, CCW, carrying the profile's id, op, name and material. */
+  outer: PathShape;
+  /** Holes, CW, with ids `<id>:hole<k>` and the same op, name and material as the outer path. */
+  holes: PathShape[];
+}
+
+/** Thrown by profileToPaths for a profile that fails validateProfile. */
+export class ProfileError extends Error {
+  readonly issues: ProfileIssue[];
+  constructor(issues: ProfileIssue[]) {
+    super(`invalid profile: ${issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`);
+    this.name = 'ProfileError';
+    this.issues = issues;
+  }
+}
+
+/** Numeric fields of each profile type, in side-panel order. */
+export const PROFILE_FIELDS: { readonly [T in ProfileType]: readonly ProfileField<T>[] } = {
+  rectangle: [
+    { key: 'width', label: 'Width', allowZero: false },
+    { key: 'height', label: 'Height', allowZero: false },
+    { key: 'cornerRadius', label: 'Corner radius', allowZero: true, optional: true },
+  ],
+  'i-beam': [
+    { key: 'depth', label: 'Depth', allowZero: false },
+    { key: 'flangeWidth', label: 'Flange width', allowZero: false },
+    { key: 'flangeThickness', label: 'Flange thickness', allowZero: false },
+    { key: 'webThickness', label: 'Web thickness', allowZero: false },
+    { key: 'rootRadius', label: 'Root radius', allowZero: true },
+  ],
+  channel: [
+    { key: 'depth', label: 'Depth', allowZero: false },
+    { key: 'flangeWidth', label: 'Flange width', allowZero: false },
+    { key: 'flangeThickness', label: 'Flange thickness', allowZero: false },
+    { key: 'webThickness', label: 'Web thickness', allowZero: false },
+    { key: 'rootRadius', label: 'Root radius', allowZero: true },
+  ],
+  angle: [
+    { key: 'legVertical', label: 'Vertical leg', allowZero: false },
+    { key: 'legHorizontal', label: 'Horizontal leg', allowZero: false },
+    { key: 'thickness', label: 'Thickness', allowZero: false },
+    { key: 'rootRadius', label: 'Root radius', allowZero: true },
+  ],
+  tee: [
+    { key: 'depth', label: 'Depth', allowZero: false },
+    { key: 'flangeWidth', label: 'Flange width', allowZero: false },
+    { key: 'flangeThickness', label: 'Flange thickness', allowZero: false },
+    { key: 'stemThickness', label: 'Stem thickness', allowZero: false },
+    { key: 'rootRadius', label: 'Root radius', allowZero: true },
+  ],
+  'rect-tube': [
+    { key: 'width', label: 'Width', allowZero: false },
+    { key: 'height', label: 'Height', allowZero: false },
+    { key: 'wall', label: 'Wall thickness', allowZero: false },
+    { key: 'outerRadius', label: 'Outside corner radius', allowZero: true },
+  ],
+  'round-tube': [
+    { key: 'outerDiameter', label: 'Outside diameter', allowZero: false },
+    { key: 'wall', label: 'Wall thickness', allowZero: false },
+  ],
+  'bent-plate': [
+    { key: 'legHorizontal', label: 'Horizontal leg', allowZero: false },
+    { key: 'legVertical', label: 'Vertical leg', allowZero: false },
+    { key: 'thickness', label: 'Thickness', allowZero: false },
+    { key: 'insideRadius', label: 'Inside bend radius', allowZero: true },
+  ],
+};
+
+/** Default dimensions (mm) for a newly placed profile: round numbers, not a catalogue size. */
+export const PROFILE_DEFAULTS: { readonly [T in ProfileType]: Readonly<Required<ProfileDimensions<T>>> } = {
+  rectangle: { width: 100, height: 50, cornerRadius: 0 },
+  'i-beam': { depth: 200, flangeWidth: 100, flangeThickness: 8, webThickness: 6, rootRadius: 10 },
+  channel: { depth: 200, flangeWidth: 75, flangeThickness: 10, webThickness: 6, rootRadius: 10 },
+  angle: { legVertical: 100, legHorizontal: 100, thickness: 10, rootRadius: 10 },
+  tee: { depth: 100, flangeWidth: 100, flangeThickness: 10, stemThickness: 8, rootRadius: 8 },
+  'rect-tube': { width: 100, height: 50, wall: 5, outerRadius: 10 },
+  'round-tube': { outerDiameter: 100, wall: 5 },
+  'bent-plate': { legHorizontal: 100, legVertical: 100, thickness: 5, insideRadius: 5 },
+};
+
+/** Largest accepted dimension or coordinate magnitude: keeps every later moment finite. */
+export const PROFILE_MAX_SIZE = 1e12;
+
+// ---------------------------------------------------------------------------------------------
+// Validation
+
+function fmt(v: number): string {
+  return String(Number(v.toPrecision(12)));
+}
+
+function describe(v: unknown): string {
+  if (typeof v === 'number') return String(v);
+  if (v === undefined) return 'nothing';
+  if (v === null) return 'null';
+  if (typeof v === 'string') return `the text ${JSON.stringify(v.length > 20 ? v.slice(0, 20) + '…' : v)}`;
+  return `a value of type ${typeof v}`;
+}
+
+/**
+ * Check that a profile's dimensions and placement make geometric sense. Returns an empty list
+ * when the profile can be built; otherwise one entry per problem, naming the field.
+ */
+export function validateProfile(shape: ProfileShape): ProfileIssue[] {
+  const issues: ProfileIssue[] = [];
+  const s = shape as unknown as Record<string, unknown>;
+  if (s === null || typeof s !== 'object') return [{ path: '', message: 'profile must be an object' }];
+
+  const at = s.at;
+  if (!Array.isArray(at) || at.length !== 2 || !at.every((v) => typeof v === 'number' && Number.isFinite(v)))
+    issues.push({ path: 'at', message: 'position must be two finite numbers [x, y]' });
+  else if (at.some((v: number) => Math.abs(v) > PROFILE_MAX_SIZE))
+    issues.push({ path: 'at', message: `position [${at.map(fmt).join(', ')}] is too far out (limit ${PROFILE_MAX_SIZE})` });
+  if (s.rotation !== undefined && !(typeof s.rotation === 'number' && Number.isFinite(s.rotation)))
+    issues.push({ path: 'rotation', message: `rotation must be a finite number of degrees (got ${describe(s.rotation)})` });
+  if (s.mirror !== undefined && typeof s.mirror !== 'boolean')
+    issues.push({ path: 'mirror', message: `mirror must be true or false (got ${describe(s.mirror)})` });
+
+  const type = s.type as ProfileType;
+  const fields = (PROFILE_FIELDS as Record<string, readonly ProfileField<ProfileType>[] | undefined>)[type as string];
+  if (!Object.prototype.hasOwnProperty.call(PROFILE_FIELDS, type as string) || !fields) {
+    issues.push({ path: 'type', message: `unknown profile type ${describe(s.type)}` });
+    return issues;
+  }
+
+  // Each field on its own: present, finite, positive (radii: not negative), not absurdly large.
+  let fieldsOk = true;
+  for (const f of fields) {
+    const v = s[f.key];
+    const name = f.label.toLowerCase();
+    if (v === undefined && f.optional) continue;
+    if (typeof v !== 'number' || !Number.isFinite(v)) {
+      issues.push({ path: f.key, message: `${name} must be a finite number (got ${describe(v)})` });
+      fieldsOk = false;
+    } else if (f.allowZero ? v < 0 : v <= 0) {
+      issues.push({ path: f.key, message: `${name} ${fmt(v)} must be ${f.allowZero ? 'zero or more' : 'greater than zero'}` });
+      fieldsOk = false;
+    } else if (v > PROFILE_MAX_SIZE) {
+      issues.push({ path: f.key, message: `${name} ${fmt(v)} is too large (limit ${PROFILE_MAX_SIZE})` });
+      fieldsOk = false;
+    }
+  }
+  if (!fieldsOk) return issues;
+
+  // Fields relative to each other. `less` demands a < b, `atMost` a <= b.
+  const less = (path: string, a: number, b: number, what: string) => {
+    if (!(a < b)) issues.push({ path, message: `${label(type, path)} ${fmt(a)} must be less than ${what} ${fmt(b)}` });
+  };
+  const atMost = (path: string, a: number, b: number, what: string) => {
+    if (!(a <= b)) issues.push({ path, message: `${label(type, path)} ${fmt(a)} must be at most ${what} ${fmt(b)}` });
+  };
+  const p = shape;
+  switch (p.type) {
+    case 'rectangle': {
+      atMost('cornerRadius', p.cornerRadius ?? 0, Math.min(p.width, p.height) / 2, 'half the smaller side');
+      break;
+    }
+    case 'i-beam': {
+      less('flangeThickness', p.flangeThickness, p.depth / 2, 'half the depth');
+      less('webThickness', p.webThickness, p.flangeWidth, 'the flange width');
+      if (issues.length) break;
+      atMost('rootRadius', p.rootRadius, (p.flangeWidth - p.webThickness) / 2, 'the flange outstand (flange width − web thickness)/2 =');
+      atMost('rootRadius', p.rootRadius, (p.depth - 2 * p.flangeThickness) / 2, 'half the clear web depth (depth − 2 × flange thickness)/2 =');
+      break;
+    }
+    case 'channel': {
+      less('flangeThickness', p.flangeThickness, p.depth / 2, 'half the depth');
+      less('webThickness', p.webThickness, p.flangeWidth, 'the flange width');
+      if (issues.length) break;
+      atMost('rootRadius', p.rootRadius, p.flangeWidth - p.webThickness, 'the flange outstand (flange width − web thickness) =');
+      atMost('rootRadius', p.rootRadius, (p.depth - 2 * p.flangeThickness) / 2, 'half the clear web depth (depth − 2 × flange thickness)/2 =');
+      break;
+    }
+    case 'angle': {
+      less('thickness', p.thickness, p.legHorizontal, 'the horizontal leg');
+      less('thickness', p.thickness, p.legVertical, 'the vertical leg');
+      if (issues.length) break;
+      atMost('rootRadius', p.rootRadius, p.legHorizontal - p.thickness, 'the horizontal leg less the thickness,');
+      atMost('rootRadius', p.rootRadius, p.legVertical - p.thickness, 'the vertical leg less the thickness,');
+      break;
+    }
+    case 'tee': {
+      less('flangeThickness', p.flangeThickness, p.depth, 'the depth');
+      less('stemThickness', p.stemThickness, p.flangeWidth, 'the flange width');
+      if (issues.length) break;
+      atMost('rootRadius', p.rootRadius, (p.flangeWidth - p.stemThickness) / 2, 'the flange outstand (flange width − stem thickness)/2 =');
+      atMost('rootRadius', p.rootRadius, p.depth - p.flangeThickness, 'the clear stem length (depth − flange thickness) =');
+      break;
+    }
+    case 'rect-tube': {
+      const half = Math.min(p.width, p.height) / 2;
+      less('wall', p.wall, half, 'half the smaller side');
+      atMost('outerRadius', p.outerRadius, half, 'half the smaller side');
+      break;
+    }
+    case 'round-tube': {
+      less('wall', p.wall, p.outerDiameter / 2, 'half the outside diameter');
+      break;
+    }
+    case 'bent-plate': {
+      const ro = p.insideRadius + p.thickness;
+      atMost('thickness', p.thickness, Math.min(p.legHorizontal, p.legVertical), 'the shorter leg');
+      if (issues.length) break;
+      if (!(p.legHorizontal >= ro))
+        issues.push({ path: 'legHorizontal', message: `horizontal leg ${fmt(p.legHorizontal)} must be at least the outside bend radius (inside radius + thickness) ${fmt(ro)}` });
+      if (!(p.legVertical >= ro))
+        issues.push({ path: 'legVertical', message: `vertical leg ${fmt(p.legVertical)} must be at least the outside bend radius (inside radius + thickness) ${fmt(ro)}` });
+      break;
+    }
+  }
+  return issues;
+}
+
+function label(type: ProfileType, key: string): string {
+  const f = (PROFILE_FIELDS[type] as readonly ProfileField<ProfileType>[]).find((x) => x.key === key);
+  return (f ? f.label : key).toLowerCase();
+}
+
+// ---------------------------------------------------------------------------------------------
+// Local outlines
+
+/** A polygon corner; r > 0 rounds it with the tangent arc of that radius. */
+interface Corner {
+  x: number;
+  y: number;
+  r: number;
+}
+
+/** A closed loop in local coordinates: start point and segments, the last ending at start. */
+interface Loop {
+  start: Point;
+  segments: PathSegment[];
+}
+
+/**
+ * Round the corners of a polygon (given CCW or CW) with tangent arcs. Radii at or below
+ * `1e-9 * scale` count as sharp corners; straight pieces shorter than `1e-12 * scale` (where two
+ * fillets or a fillet and a corner meet) are dropped. Radii must already be known to fit.
+ */
+function roundedLoop(corners: readonly Corner[], scale: number): Loop {
+  const n = corners.length;
+  const minRadius = 1e-9 * scale;
+  const minLength = 1e-12 * scale;
+  type Rounded = { tin: Point; tout: Point; via?: Point };
+  const rounded: Rounded[] = corners.map((c, i) => {
+    const prev = corners[(i + n - 1) % n], next = corners[(i + 1) % n];
+    const p: Point = [c.x, c.y];
+    if (!(c.r > minRadius)) return { tin: p, tout: p };
+    const [d1x, d1y] = unit(c.x - prev.x, c.y - prev.y);
+    const [d2x, d2y] = unit(next.x - c.x, next.y - c.y);
+    const cross = d1x * d2y - d1y * d2x;
+    const dot = d1x * d2x + d1y * d2y;
+    if (cross === 0) return { tin: p, tout: p };
+    // Tangent length r·tan(θ/2) with θ the turn angle; exactly r for a right angle.
+    const t = (c.r * Math.abs(cross)) / (1 + dot);
+    const tin: Point = [c.x - d1x * t, c.y - d1y * t];
+    const tout: Point = [c.x + d2x * t, c.y + d2y * t];
+    // Centre: from the entry tangent point, r along the normal on the side the loop turns to.
+    const nx = cross > 0 ? -d1y : d1y, ny = cross > 0 ? d1x : -d1x;
+    const cx = tin[0] + nx * c.r, cy = tin[1] + ny * c.r;
+    const [ux, uy] = unit(c.x - cx, c.y - cy);
+    return { tin, tout, via: [cx + ux * c.r, cy + uy * c.r] };
+  });
+  const start = rounded[0].tout;
+  const segments: PathSegment[] = [];
+  let cur = start;
+  const lineTo = (q: Point) => {
+    if (Math.hypot(q[0] - cur[0], q[1] - cur[1]) <= minLength) return;
+    segments.push({ to: q });
+    cur = q;
+  };
+  for (let k = 1; k <= n; k++) {
+    const r = rounded[k % n];
+    lineTo(r.tin);
+    if (r.via) {
+      segments.push({ to: r.tout, via: r.via });
+      cur = r.tout;
+    }
+  }
+  // Close exactly on the start point (a dropped tiny piece may leave `cur` a rounding error off).
+  if (segments.length > 0) segments[segments.length - 1].to = start;
+  return { start, segments };
+}
+
+function unit(x: number, y: number): [number, number] {
+  const L = Math.hypot(x, y);
+  return [x / L, y / L];
+}
+
+/** Axis-aligned rectangle [x0, x0+w] × [y0, y0+h] with all four corners rounded by r, CCW. */
+function rectCorners(x0: number, y0: number, w: number, h: number, r: number): Corner[] {
+  return [
+    { x: x0, y: y0, r },
+    { x: x0 + w, y: y0, r },
+    { x: x0 + w, y: y0 + h, r },
+    { x: x0, y: y0 + h, r },
+  ];
+}
+
+/** Full circle about (cx, cy) as two half arcs, CCW (or CW), starting on the +x side. */
+function circleLoop(cx: number, cy: number, r: number, ccw: boolean): Loop {
+  const s = ccw ? 1 : -1;
+  const start: Point = [cx + r, cy];
+  return {
+    start,
+    segments: [
+      { to: [cx - r, cy], via: [cx, cy + s * r] },
+      { to: start, via: [cx, cy - s * r] },
+    ],
+  };
+}
+
+function reverseLoop(loop: Loop): Loop {
+  // Points P0 = start, P1..Pn = segment ends (Pn = P0). Segment k runs P(k-1) -> Pk via Vk.
+  const pts: Point[] = [loop.start, ...loop.segments.map((s) => s.to)];
+  const segments: PathSegment[] = [];
+  for (let k = loop.segments.length; k >= 1; k--) {
+    const via = loop.segments[k - 1].via;
+    segments.push(via ? { to: pts[k - 1], via } : { to: pts[k - 1] });
+  }
+  return { start: pts[pts.length - 1], segments };
+}
+
+/** The local outline: outer loop CCW, holes CCW as well (reversed later). */
+function localOutline(p: ProfileShape): { outer: Loop; holes: Loop[] } {
+  switch (p.type) {
+    case 'rectangle': {
+      const s = Math.max(p.width, p.height);
+      return { outer: roundedLoop(rectCorners(0, 0, p.width, p.height, p.cornerRadius ?? 0), s), holes: [] };
+    }
+    case 'i-beam': {
+      const { depth: d, flangeWidth: b, flangeThickness: tf, webThickness: tw, rootRadius: r } = p;
+      const xl = b / 2 - tw / 2, xr = b / 2 + tw / 2;
+      const corners: Corner[] = [
+        { x: 0, y: 0, r: 0 },
+        { x: b, y: 0, r: 0 },
+        { x: b, y: tf, r: 0 },
+        { x: xr, y: tf, r },
+        { x: xr, y: d - tf, r },
+        { x: b, y: d - tf, r: 0 },
+        { x: b, y: d, r: 0 },
+        { x: 0, y: d, r: 0 },
+        { x: 0, y: d - tf, r: 0 },
+        { x: xl, y: d - tf, r },
+        { x: xl, y: tf, r },
+        { x: 0, y: tf, r: 0 },
+      ];
+      return { outer: roundedLoop(corners, Math.max(b, d)), holes: [] };
+    }
+    case 'channel': {
+      const { depth: d, flangeWidth: b, flangeThickness: tf, webThickness: tw, rootRadius: r } = p;
+      const corners: Corner[] = [
+        { x: 0, y: 0, r: 0 },
+        { x: b, y: 0, r: 0 },
+        { x: b, y: tf, r: 0 },
+        { x: tw, y: tf, r },
+        { x: tw, y: d - tf, r },
+        { x: b, y: d - tf, r: 0 },
+        { x: b, y: d, r: 0 },
+        { x: 0, y: d, r: 0 },
+      ];
+      return { outer: roundedLoop(corners, Math.max(b, d)), holes: [] };
+    }
+    case 'angle': {
+      const { legVertical: lv, legHorizontal: lh, thickness: t, rootRadius: r } = p;
+      const corners: Corner[] = [
+        { x: 0, y: 0, r: 0 },
+        { x: lh, y: 0, r: 0 },
+        { x: lh, y: t, r: 0 },
+        { x: t, y: t, r },
+        { x: t, y: lv, r: 0 },
+        { x: 0, y: lv, r: 0 },
+      ];
+      return { outer: roundedLoop(corners, Math.max(lh, lv)), holes: [] };
+    }
+    case 'tee': {
+      const { depth: d, flangeWidth: b, flangeThickness: tf, stemThickness: ts, rootRadius: r } = p;
+      const xl = b / 2 - ts / 2, xr = b / 2 + ts / 2;
+      const corners: Corner[] = [
+        { x: xl, y: 0, r: 0 },
+        { x: xr, y: 0, r: 0 },
+        { x: xr, y: d - tf, r },
+        { x: b, y: d - tf, r: 0 },
+        { x: b, y: d, r: 0 },
+        { x: 0, y: d, r: 0 },
+        { x: 0, y: d - tf, r: 0 },
+        { x: xl, y: d - tf, r },
+      ];
+      return { outer: roundedLoop(corners, Math.max(b, d)), holes: [] };
+    }
+    case 'rect-tube': {
+      const { width: w, height: h, wall: t, outerRadius: ro } = p;
+      const s = Math.max(w, h);
+      const ri = Math.max(ro - t, 0);
+      return {
+        outer: roundedLoop(rectCorners(0, 0, w, h, ro), s),
+        holes: [roundedLoop(rectCorners(t, t, w - 2 * t, h - 2 * t, ri), s)],
+      };
+    }
+    case 'round-tube': {
+      const R = p.outerDiameter / 2;
+      return { outer: circleLoop(0, 0, R, true), holes: [circleLoop(0, 0, R - p.wall, true)] };
+    }
+    case 'bent-plate': {
+      const { legHorizontal: lh, legVertical: lv, thickness: t, insideRadius: ri } = p;
+      const corners: Corner[] = [
+        { x: 0, y: 0, r: ri + t },
+        { x: lh, y: 0, r: 0 },
+        { x: lh, y: t, r: 0 },
+        { x: t, y: t, r: ri },
+        { x: t, y: lv, r: 0 },
+        { x: 0, y: lv, r: 0 },
+      ];
+      return { outer: roundedLoop(corners, Math.max(lh, lv)), holes: [] };
+    }
+  }
+}
+
+// ---------------------------------------------------------------------------------------------
+// Placement
+
+/** cos and sin of an angle in degrees, exact for multiples of 90. */
+function cosSinDegrees(deg: number): [number, number] {
+  const q = deg / 90;
+  if (Number.isInteger(q)) {
+    const k = ((q % 4) + 4) % 4;
+    return ([[1, 0], [0, 1], [-1, 0], [0, -1]] as const)[k] as [number, number];
+  }
+  const t = (deg * Math.PI) / 180;
+  return [Math.cos(t), Math.sin(t)];
+}
+
+function placeLoop(loop: Loop, mirror: boolean, cs: number, sn: number, ax: number, ay: number): Loop {
+  const f = (q: Point): Point => {
+    const x = mirror ? -q[0] : q[0], y = q[1];
+    return [cs * x - sn * y + ax, sn * x + cs * y + ay];
+  };
+  const placed: Loop = {
+    start: f(loop.start),
+    segments: loop.segments.map((s) => (s.via ? { to: f(s.to), via: f(s.via) } : { to: f(s.to) })),
+  };
+  // A mirror reverses the traversal; write it backwards so the orientation is kept.
+  return mirror ? reverseLoop(placed) : placed;
+}
+
+function toPathShape(p: ProfileShape, id: string, loop: Loop): PathShape {
+  const out: PathShape = { id, type: 'path', start: loop.start, segments: loop.segments };
+  if (p.name !== undefined) out.name = p.name;
+  if (p.op !== undefined) out.op = p.op;
+  if (p.material !== undefined) out.material = p.material;
+  return out;
+}
+
+/**
+ * The exact boundary of a profile in world coordinates: the outer path (CCW) and its holes (CW;
+ * only rect-tube and round-tube have one). Throws ProfileError when validateProfile finds
+ * problems, so a caller that validates first never sees an exception.
+ */
+export function profileToPaths(shape: ProfileShape): ProfilePaths {
+  const issues = validateProfile(shape);
+  if (issues.length > 0) throw new ProfileError(issues);
+  const local = localOutline(shape);
+  const [cs, sn] = cosSinDegrees(shape.rotation ?? 0);
+  const mirror = shape.mirror === true;
+  const [ax, ay] = shape.at;
+  const outer = placeLoop(local.outer, mirror, cs, sn, ax, ay);
+  const holes = local.holes.map((h) => placeLoop(reverseLoop(h), mirror, cs, sn, ax, ay));
+  return {
+    outer: toPathShape(shape, shape.id, outer),
+    holes: holes.map((h, k) => toPathShape(shape, `${shape.id}:hole${k}`, h)),
+  };
+}
