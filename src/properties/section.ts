@@ -192,3 +192,20 @@ export function cutSection(region: Region, axis: 'x' | 'y', at: number, whole: {
     Q: h.m01 - A * whole.centroid.x,
   };
 }
+
+/**
+ * Width b and first moment Q of the part beyond the cut, sampled across the depth (axis 'y':
+ * horizontal cuts from ymin to ymax) or the width (axis 'x'), for the Q/b diagram.
+ */
+export function cutDiagram(region: Region, axis: 'x' | 'y', whole: SectionProperties, samples = 101): { at: number; width: number; Q: number }[] {
+  const lo = axis === 'y' ? whole.bounds.ymin : whole.bounds.xmin;
+  const hi = axis === 'y' ? whole.bounds.ymax : whole.bounds.xmax;
+  const n = Math.max(2, Math.floor(samples));
+  const out: { at: number; width: number; Q: number }[] = [];
+  for (let k = 0; k < n; k++) {
+    const at = lo + ((hi - lo) * k) / (n - 1);
+    const c = cutSection(region, axis, at, whole);
+    out.push({ at, width: c.width, Q: c.Q });
+  }
+  return out;
+}
