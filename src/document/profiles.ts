@@ -11,8 +11,9 @@
  * Orientation: the outer boundary always runs CCW and holes run CW (a mirror reverses the
  * traversal, so mirrored paths are written backwards). Every path ends exactly at its start.
  *
- * This module holds no state and imports nothing outside the document types.
+ * This module holds no state; it uses only the document types and the contour helpers.
  */
+import { sweepThrough } from '../geometry/contour';
 import type { PathSegment, PathShape, Point, ProfileShape } from './types';
 
 export type ProfileType = ProfileShape['type'];
@@ -122,6 +123,12 @@ export const PROFILE_DEFAULTS: { readonly [T in ProfileType]: Readonly<Required<
 
 /** Largest accepted dimension or coordinate magnitude: keeps every later moment finite. */
 export const PROFILE_MAX_SIZE = 1e12;
+/** Smallest accepted non-zero dimension: keeps every later moment (up to size⁴) clear of underflow. */
+export const PROFILE_MIN_SIZE = 1e-12;
+/** A thickness or length may not be smaller than this fraction of the profile's largest dimension. */
+export const PROFILE_MIN_RATIO = 1e-6;
+/** The position may be at most this many times the largest dimension away from the origin. */
+export const PROFILE_MAX_OFFSET_RATIO = 1e9;
 
 // ---------------------------------------------------------------------------------------------
 // Validation
@@ -179,73 +186,86 @@ export function validateProfile(shape: ProfileShape): ProfileIssue[] {
     } else if (v > PROFILE_MAX_SIZE) {
       issues.push({ path: f.key, message: `${name} ${fmt(v)} is too large (limit ${PROFILE_MAX_SIZE})` });
       fieldsOk = false;
+    } else if (v > 0 && v < PROFILE_MIN_SIZE) {
+      issues.push({ path: f.key, message: `${name} ${fmt(v)} is too small (at least ${PROFILE_MIN_SIZE}, or 0 where allowed)` });
+      fieldsOk = false;
     }
   }
   if (!fieldsOk) return issues;
 
-  // Fields relative to each other. `less` demands a < b, `atMost` a <= b.
-  const less = (path: string, a: number, b: number, what: string) => {
-    if (!(a < b)) issues.push({ path, message: `${label(type, path)} ${fmt(a)} must be less than ${what} ${fmt(b)}` });
+  // Sizes relative to each other and to the position: beyond these ratios double precision can
+  // no longer tell the faces apart, and the area could come out as zero.
+  const size = Math.max(...fields.map((f) => (s[f.key] as number | undefined) ?? 0));
+  for (const f of fields) {
+    const v = s[f.key] as number | undefined;
+    if (f.allowZero || v === undefined || v >= PROFILE_MIN_RATIO * size) continue;
+    issues.push({ path: f.key, message: `${f.label.toLowerCase()} ${fmt(v)} is too small next to the largest dimension ${fmt(size)} (at least a millionth of it)` });
+  }
+  if (Array.isArray(at) && at.length === 2 && at.every((v) => Number.isFinite(v)) && Math.max(Math.abs(at[0]), Math.abs(at[1])) > PROFILE_MAX_OFFSET_RATIO * size)
+    issues.push({ path: 'at', message: `position [${at.map(fmt).join(', ')}] is too far from the origin for a profile this small (largest dimension ${fmt(size)})` });
+  if (issues.length) return issues;
+
+  // Fields relative to each other: `less` demands a < limit, `atMost` a <= limit; `what`
+  // names the limit in words, with the number a reader can check against the drawing.
+  const less = (path: string, a: number, limit: number, what: string) => {
+    if (!(a < limit)) issues.push({ path, message: `${label(type, path)} ${fmt(a)} must be less than ${what}` });
   };
-  const atMost = (path: string, a: number, b: number, what: string) => {
-    if (!(a <= b)) issues.push({ path, message: `${label(type, path)} ${fmt(a)} must be at most ${what} ${fmt(b)}` });
+  const atMost = (path: string, a: number, limit: number, what: string) => {
+    if (!(a <= limit)) issues.push({ path, message: `${label(type, path)} ${fmt(a)} must be at most ${what}` });
   };
   const p = shape;
   switch (p.type) {
     case 'rectangle': {
-      atMost('cornerRadius', p.cornerRadius ?? 0, Math.min(p.width, p.height) / 2, 'half the smaller side');
+      const m = Math.min(p.width, p.height);
+      atMost('cornerRadius', p.cornerRadius ?? 0, m / 2, `half the smaller side ${fmt(m)}`);
       break;
     }
-    case 'i-beam': {
-      less('flangeThickness', p.flangeThickness, p.depth / 2, 'half the depth');
-      less('webThickness', p.webThickness, p.flangeWidth, 'the flange width');
-      if (issues.length) break;
-      atMost('rootRadius', p.rootRadius, (p.flangeWidth - p.webThickness) / 2, 'the flange outstand (flange width − web thickness)/2 =');
-      atMost('rootRadius', p.rootRadius, (p.depth - 2 * p.flangeThickness) / 2, 'half the clear web depth (depth − 2 × flange thickness)/2 =');
-      break;
-    }
+    case 'i-beam':
     case 'channel': {
-      less('flangeThickness', p.flangeThickness, p.depth / 2, 'half the depth');
-      less('webThickness', p.webThickness, p.flangeWidth, 'the flange width');
+      const { depth: d, flangeWidth: b, flangeThickness: tf, webThickness: tw, rootRadius: r } = p;
+      less('flangeThickness', tf, d / 2, `half the depth ${fmt(d)}`);
+      less('webThickness', tw, b, `the flange width ${fmt(b)}`);
       if (issues.length) break;
-      atMost('rootRadius', p.rootRadius, p.flangeWidth - p.webThickness, 'the flange outstand (flange width − web thickness) =');
-      atMost('rootRadius', p.rootRadius, (p.depth - 2 * p.flangeThickness) / 2, 'half the clear web depth (depth − 2 × flange thickness)/2 =');
+      if (p.type === 'i-beam')
+        atMost('rootRadius', r, (b - tw) / 2, `the flange outstand (flange width − web thickness)/2 = ${fmt((b - tw) / 2)}`);
+      else atMost('rootRadius', r, b - tw, `the flange outstand (flange width − web thickness) = ${fmt(b - tw)}`);
+      atMost('rootRadius', r, (d - 2 * tf) / 2, `half the clear web depth (depth − 2 × flange thickness) ${fmt(d - 2 * tf)}`);
       break;
     }
     case 'angle': {
-      less('thickness', p.thickness, p.legHorizontal, 'the horizontal leg');
-      less('thickness', p.thickness, p.legVertical, 'the vertical leg');
+      const { legVertical: lv, legHorizontal: lh, thickness: t, rootRadius: r } = p;
+      less('thickness', t, lh, `the horizontal leg ${fmt(lh)}`);
+      less('thickness', t, lv, `the vertical leg ${fmt(lv)}`);
       if (issues.length) break;
-      atMost('rootRadius', p.rootRadius, p.legHorizontal - p.thickness, 'the horizontal leg less the thickness,');
-      atMost('rootRadius', p.rootRadius, p.legVertical - p.thickness, 'the vertical leg less the thickness,');
+      atMost('rootRadius', r, lh - t, `the horizontal leg less the thickness, ${fmt(lh - t)}`);
+      atMost('rootRadius', r, lv - t, `the vertical leg less the thickness, ${fmt(lv - t)}`);
       break;
     }
     case 'tee': {
-      less('flangeThickness', p.flangeThickness, p.depth, 'the depth');
-      less('stemThickness', p.stemThickness, p.flangeWidth, 'the flange width');
+      const { depth: d, flangeWidth: b, flangeThickness: tf, stemThickness: ts, rootRadius: r } = p;
+      less('flangeThickness', tf, d, `the depth ${fmt(d)}`);
+      less('stemThickness', ts, b, `the flange width ${fmt(b)}`);
       if (issues.length) break;
-      atMost('rootRadius', p.rootRadius, (p.flangeWidth - p.stemThickness) / 2, 'the flange outstand (flange width − stem thickness)/2 =');
-      atMost('rootRadius', p.rootRadius, p.depth - p.flangeThickness, 'the clear stem length (depth − flange thickness) =');
+      atMost('rootRadius', r, (b - ts) / 2, `the flange outstand (flange width − stem thickness)/2 = ${fmt((b - ts) / 2)}`);
+      atMost('rootRadius', r, d - tf, `the clear stem length (depth − flange thickness) ${fmt(d - tf)}`);
       break;
     }
     case 'rect-tube': {
-      const half = Math.min(p.width, p.height) / 2;
-      less('wall', p.wall, half, 'half the smaller side');
-      atMost('outerRadius', p.outerRadius, half, 'half the smaller side');
+      const m = Math.min(p.width, p.height);
+      less('wall', p.wall, m / 2, `half the smaller side ${fmt(m)}`);
+      atMost('outerRadius', p.outerRadius, m / 2, `half the smaller side ${fmt(m)}`);
       break;
     }
     case 'round-tube': {
-      less('wall', p.wall, p.outerDiameter / 2, 'half the outside diameter');
+      less('wall', p.wall, p.outerDiameter / 2, `half the outside diameter ${fmt(p.outerDiameter)}`);
       break;
     }
     case 'bent-plate': {
-      const ro = p.insideRadius + p.thickness;
-      atMost('thickness', p.thickness, Math.min(p.legHorizontal, p.legVertical), 'the shorter leg');
-      if (issues.length) break;
-      if (!(p.legHorizontal >= ro))
-        issues.push({ path: 'legHorizontal', message: `horizontal leg ${fmt(p.legHorizontal)} must be at least the outside bend radius (inside radius + thickness) ${fmt(ro)}` });
-      if (!(p.legVertical >= ro))
-        issues.push({ path: 'legVertical', message: `vertical leg ${fmt(p.legVertical)} must be at least the outside bend radius (inside radius + thickness) ${fmt(ro)}` });
+      const { legHorizontal: lh, legVertical: lv, thickness: t, insideRadius: ri } = p;
+      const ro = ri + t;
+      const what = `the outside bend radius (inside bend radius + thickness) ${fmt(ro)}`;
+      if (!(lh >= ro)) issues.push({ path: 'legHorizontal', message: `horizontal leg ${fmt(lh)} must be at least ${what}` });
+      if (!(lv >= ro)) issues.push({ path: 'legVertical', message: `vertical leg ${fmt(lv)} must be at least ${what}` });
       break;
     }
   }
@@ -476,12 +496,24 @@ function placeLoop(loop: Loop, mirror: boolean, cs: number, sn: number, ax: numb
     const x = mirror ? -q[0] : q[0], y = q[1];
     return [cs * x - sn * y + ax, sn * x + cs * y + ay];
   };
-  const placed: Loop = {
-    start: f(loop.start),
-    segments: loop.segments.map((s) => (s.via ? { to: f(s.to), via: f(s.via) } : { to: f(s.to) })),
-  };
+  const start = f(loop.start);
+  const segments: PathSegment[] = [];
+  let lp = loop.start, wp = start;
+  for (const g of loop.segments) {
+    const to = f(g.to);
+    if (g.via) {
+      // Far from the origin a tiny arc may lose its shape in rounding; then a chord is as exact
+      // as the coordinates allow. The placed arc must keep the local sweep (sign flipped by a mirror).
+      const want = sweepThrough(lp[0], lp[1], g.via[0], g.via[1], g.to[0], g.to[1]) * (mirror ? -1 : 1);
+      const via = f(g.via);
+      const got = sweepThrough(wp[0], wp[1], via[0], via[1], to[0], to[1]);
+      segments.push(Math.abs(got - want) <= 1e-6 ? { to, via } : { to });
+    } else segments.push({ to });
+    lp = g.to;
+    wp = to;
+  }
   // A mirror reverses the traversal; write it backwards so the orientation is kept.
-  return mirror ? reverseLoop(placed) : placed;
+  return mirror ? reverseLoop({ start, segments }) : { start, segments };
 }
 
 function toPathShape(p: ProfileShape, id: string, loop: Loop): PathShape {
