@@ -236,7 +236,8 @@ describe('i-beam', () => {
   // EN 10365 dimensions; tabulated properties as printed in European section tables (e.g. the
   // ArcelorMittal sales programme), which include the root fillets. Values from memory, checked
   // against the steelcalculator.app IPE reference page (A 53.8 cm², Iy 8356 cm⁴, iz 3.35 cm).
-  // Tolerance 1 %: the tables are rounded to four significant figures.
+  // Tolerance 0.1 %: the tables are rounded to four significant figures (at most 0.05 %); the
+  // root fillets alone add 3.6 % to the area of an IPE 300, so leaving them out would fail.
   const tables = [
     // name, h, b, tw, tf, r (mm); A (cm²), Iy (cm⁴), Iz (cm⁴)
     ['IPE 300', 300, 150, 7.1, 10.7, 15, 53.81, 8356, 603.8],
@@ -245,12 +246,12 @@ describe('i-beam', () => {
     ['HEA 300', 290, 300, 8.5, 14, 27, 112.5, 18260, 6310],
   ] as const;
   for (const [name, h, b, tw, tf, r, A, Iy, Iz] of tables) {
-    it(`${name} matches its tabulated A, Iy, Iz within 1 % (EN 10365 dimensions, r = ${r} mm)`, () => {
+    it(`${name} matches its tabulated A, Iy, Iz within 0.1 % (EN 10365 dimensions, r = ${r} mm)`, () => {
       const c = centroidal(profileMoments(ibeam(h, b, tf, tw, r)));
       // Tabulated Iy is about the strong axis (our horizontal x axis), Iz about the web axis.
-      expect(rel(c.A / 1e2, A)).toBeLessThan(0.01);
-      expect(rel(c.Ix / 1e4, Iy)).toBeLessThan(0.01);
-      expect(rel(c.Iy / 1e4, Iz)).toBeLessThan(0.01);
+      expect(rel(c.A / 1e2, A)).toBeLessThan(1e-3);
+      expect(rel(c.Ix / 1e4, Iy)).toBeLessThan(1e-3);
+      expect(rel(c.Iy / 1e4, Iz)).toBeLessThan(1e-3);
     });
   }
 });
@@ -514,11 +515,16 @@ describe('validateProfile', () => {
 
   it('fuzzed dimensions: never throws while validating; valid ones give finite, positive areas', () => {
     // Property test (fast-check): any accepted profile yields finite geometry of positive area.
-    const num = fc.oneof(fc.double({ min: -10, max: 400, noNaN: false }), fc.constantFrom(0, 1e-300, Infinity));
+    // Mostly plausible sizes (0.1 mm steps up to 400), some edge values, some arbitrary doubles.
+    const num = fc.oneof(
+      { arbitrary: fc.integer({ min: -10, max: 4000 }).map((v) => v / 10), weight: 12 },
+      { arbitrary: fc.constantFrom(0, 1e-300, 1e-13, 1e13, Infinity, NaN), weight: 1 },
+      { arbitrary: fc.double(), weight: 1 },
+    );
     const types = Object.keys(PROFILE_FIELDS) as ProfileType[];
     fc.assert(
-      fc.property(fc.constantFrom(...types), fc.array(num, { minLength: 5, maxLength: 5 }), fc.double({ min: -720, max: 720 }), fc.boolean(), (type, vals, rotation, mirror) => {
-        const shape: Record<string, unknown> = { id: 'f', type, at: [3, 4], rotation, mirror };
+      fc.property(fc.constantFrom(...types), fc.array(num, { minLength: 5, maxLength: 5 }), fc.double({ min: -720, max: 720 }), fc.boolean(), fc.tuple(fc.double({ min: -1e7, max: 1e7 }), fc.double({ min: -1e7, max: 1e7 })), (type, vals, rotation, mirror, at) => {
+        const shape: Record<string, unknown> = { id: 'f', type, at, rotation, mirror };
         PROFILE_FIELDS[type].forEach((f, k) => (shape[f.key] = vals[k]));
         const issues = validateProfile(shape as unknown as ProfileShape);
         if (issues.length > 0) {
@@ -534,6 +540,81 @@ describe('validateProfile', () => {
         for (const v of Object.values(m)) expect(Number.isFinite(v)).toBe(true);
       }),
       { numRuns: 3000 },
+    );
+  });
+});
+
+describe('generated valid profiles', () => {
+  const sp = (r: number) => (1 - Math.PI / 4) * r * r; // spandrel area (Gere & Goodno, App. E)
+  /** Dimensions inside every limit, built from fractions; radii may sit exactly on their limit. */
+  function build(type: ProfileType, L: number[], f: number[], g: number[]): { shape: ProfileShape; area: number } {
+    const [a, b] = L;
+    const strict = (x: number) => 1e-3 + x * (1 - 2e-3); // strictly inside (0, 1)
+    const base = { id: 'g', at: [0, 0] as [number, number] };
+    switch (type) {
+      case 'rectangle': {
+        const r = g[0] * Math.min(a, b) / 2;
+        return { shape: { ...base, type, width: a, height: b, cornerRadius: r }, area: a * b - 4 * sp(r) };
+      }
+      case 'i-beam':
+      case 'channel': {
+        const tf = strict(f[0]) * a / 2, tw = strict(f[1]) * b;
+        const r = g[0] * Math.min(type === 'i-beam' ? (b - tw) / 2 : b - tw, (a - 2 * tf) / 2);
+        const n = type === 'i-beam' ? 4 : 2;
+        const shape = { ...base, type, depth: a, flangeWidth: b, flangeThickness: tf, webThickness: tw, rootRadius: r };
+        return { shape, area: 2 * b * tf + tw * (a - 2 * tf) + n * sp(r) };
+      }
+      case 'angle': {
+        const t = strict(f[0]) * Math.min(a, b), r = g[0] * (Math.min(a, b) - t);
+        return { shape: { ...base, type, legHorizontal: a, legVertical: b, thickness: t, rootRadius: r }, area: a * t + t * (b - t) + sp(r) };
+      }
+      case 'tee': {
+        const tf = strict(f[0]) * a, ts = strict(f[1]) * b, r = g[0] * Math.min((b - ts) / 2, a - tf);
+        return { shape: { ...base, type, depth: a, flangeWidth: b, flangeThickness: tf, stemThickness: ts, rootRadius: r }, area: b * tf + ts * (a - tf) + 2 * sp(r) };
+      }
+      case 'rect-tube': {
+        const m = Math.min(a, b), t = strict(f[0]) * m / 2, ro = g[0] * m / 2, ri = Math.max(ro - t, 0);
+        const area = a * b - 4 * sp(ro) - ((a - 2 * t) * (b - 2 * t) - 4 * sp(ri));
+        return { shape: { ...base, type, width: a, height: b, wall: t, outerRadius: ro }, area };
+      }
+      case 'round-tube': {
+        const t = strict(f[0]) * a / 2, d = a - 2 * t;
+        return { shape: { ...base, type, outerDiameter: a, wall: t }, area: (Math.PI * (a * a - d * d)) / 4 };
+      }
+      case 'bent-plate': {
+        const m = Math.min(a, b), t = strict(f[0]) * m, ri = g[0] * (m - t), ro = ri + t;
+        const area = t * (a - ro) + t * (b - ro) + (Math.PI / 4) * (ro * ro - ri * ri);
+        return { shape: { ...base, type, legHorizontal: a, legVertical: b, thickness: t, insideRadius: ri }, area };
+      }
+    }
+  }
+
+  it('are all accepted, build without degenerate arcs and have the composite area', () => {
+    // Areas: composite method (Hibbeler) with spandrels / quarter circles (Gere & Goodno,
+    // App. E) and the hollow circle (Roark, Table A.1), as in the fixed cases above.
+    const frac = fc.oneof(fc.constantFrom(0, 1), fc.double({ min: 0, max: 1, noNaN: true }));
+    const len = fc.integer({ min: 10, max: 5000 }).map((v) => v / 10);
+    fc.assert(
+      fc.property(
+        fc.constantFrom(...(Object.keys(PROFILE_FIELDS) as ProfileType[])),
+        fc.tuple(len, len),
+        fc.tuple(frac, frac),
+        fc.tuple(frac),
+        fc.integer({ min: -720, max: 720 }),
+        fc.boolean(),
+        fc.tuple(fc.integer({ min: -1000, max: 1000 }), fc.integer({ min: -1000, max: 1000 })),
+        (type, L, f, g, rotation, mirror, at) => {
+          const { shape, area } = build(type, L, f, g);
+          const placed = { ...shape, rotation: rotation / 2, mirror, at } as ProfileShape;
+          expect(validateProfile(placed)).toEqual([]);
+          const { outer, holes } = profileToPaths(placed);
+          expect(signedArea(outer)).toBeGreaterThan(0);
+          for (const h of holes) expect(signedArea(h)).toBeLessThan(0);
+          const A = regionMoments([outer, ...holes].map(pathToContour)).m00;
+          expect(Math.abs(A - area)).toBeLessThan(1e-9 * area + 1e-12 * Math.max(...L) ** 2);
+        },
+      ),
+      { numRuns: 2000 },
     );
   });
 });

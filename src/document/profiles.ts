@@ -186,8 +186,9 @@ export function validateProfile(shape: ProfileShape): ProfileIssue[] {
     } else if (v > PROFILE_MAX_SIZE) {
       issues.push({ path: f.key, message: `${name} ${fmt(v)} is too large (limit ${PROFILE_MAX_SIZE})` });
       fieldsOk = false;
-    } else if (v > 0 && v < PROFILE_MIN_SIZE) {
-      issues.push({ path: f.key, message: `${name} ${fmt(v)} is too small (at least ${PROFILE_MIN_SIZE}, or 0 where allowed)` });
+    } else if (!f.allowZero && v < PROFILE_MIN_SIZE) {
+      // (A radius below a billionth of the profile size is built as a sharp corner instead.)
+      issues.push({ path: f.key, message: `${name} ${fmt(v)} is too small (at least ${PROFILE_MIN_SIZE})` });
       fieldsOk = false;
     }
   }
