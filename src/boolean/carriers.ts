@@ -1,0 +1,218 @@
+/**
+ * Carriers: the exact source edges (straight segments and circular arcs of at most 180 degrees)
+ * that every boolean output edge is traced back to, with parameters, distances, exact
+ * intersections and the exact point classification used to settle ties.
+ */
+
+export const LINE = 0;
+export const ARC = 1;
+
+export interface Carrier {
+  readonly id: number;
+  readonly kind: 0 | 1;
+  /** 0 = subject / outline, 1 = clip. */
+  readonly group: number;
+  /** Exact source endpoints. */
+  readonly ax: number;
+  readonly ay: number;
+  readonly bx: number;
+  readonly by: number;
+  /** Arc only: centre, radius, signed sweep (at most pi in size), start and middle angles. */
+  readonly cx: number;
+  readonly cy: number;
+  readonly r: number;
+  readonly phi: number;
+  readonly t0: number;
+  readonly tm: number;
+  /** Length of the carrier (chord for a line, r*|phi| for an arc). */
+  readonly len: number;
+  /** Node ids of the start and end vertices. */
+  n0: number;
+  n1: number;
+  xmin: number;
+  xmax: number;
+  ymin: number;
+  ymax: number;
+}
+
+const TWO_PI = 2 * Math.PI;
+
+/** Wrap an angle difference into (-pi, pi]. */
+export function wrapAngle(d: number): number {
+  d = d % TWO_PI;
+  if (d > Math.PI) d -= TWO_PI;
+  else if (d <= -Math.PI) d += TWO_PI;
+  return d;
+}
+
+export function makeLine(id: number, group: number, ax: number, ay: number, bx: number, by: number): Carrier {
+  return {
+    id, kind: LINE, group, ax, ay, bx, by, cx: 0, cy: 0, r: 0, phi: 0, t0: 0, tm: 0,
+    len: Math.hypot(bx - ax, by - ay), n0: -1, n1: -1,
+    xmin: Math.min(ax, bx), xmax: Math.max(ax, bx), ymin: Math.min(ay, by), ymax: Math.max(ay, by),
+  };
+}
+
+export function makeArc(
+  id: number, group: number, ax: number, ay: number, bx: number, by: number,
+  cx: number, cy: number, r: number, phi: number,
+): Carrier {
+  const t0 = Math.atan2(ay - cy, ax - cx);
+  const c: Carrier = {
+    id, kind: ARC, group, ax, ay, bx, by, cx, cy, r, phi, t0, tm: t0 + phi / 2,
+    len: r * Math.abs(phi), n0: -1, n1: -1,
+    xmin: Math.min(ax, bx), xmax: Math.max(ax, bx), ymin: Math.min(ay, by), ymax: Math.max(ay, by),
+  };
+  // Axis extremes inside the sweep.
+  for (let k = 0; k < 4; k++) {
+    const t = (k * Math.PI) / 2;
+    if (Math.abs(wrapAngle(t - c.tm)) >= Math.abs(phi) / 2) continue;
+    if (k === 0) c.xmax = cx + r;
+    else if (k === 1) c.ymax = cy + r;
+    else if (k === 2) c.xmin = cx - r;
+    else c.ymin = cy - r;
+  }
+  return c;
+}
+
+/** Parameter of (x, y) along c: 0 at the start, 1 at the end (not clamped). */
+export function paramOf(c: Carrier, x: number, y: number): number {
+  if (c.kind === LINE) {
+    const dx = c.bx - c.ax, dy = c.by - c.ay;
+    const L2 = dx * dx + dy * dy;
+    return L2 === 0 ? 0 : ((x - c.ax) * dx + (y - c.ay) * dy) / L2;
+  }
+  const d = wrapAngle(Math.atan2(y - c.cy, x - c.cx) - c.tm);
+  return 0.5 + d / c.phi;
+}
+
+/** Point at parameter u; the exact endpoints at 0 and 1. */
+export function pointAt(c: Carrier, u: number): [number, number] {
+  if (u <= 0) return [c.ax, c.ay];
+  if (u >= 1) return [c.bx, c.by];
+  if (c.kind === LINE) return [c.ax + u * (c.bx - c.ax), c.ay + u * (c.by - c.ay)];
+  const t = c.t0 + c.phi * u;
+  return [c.cx + c.r * Math.cos(t), c.cy + c.r * Math.sin(t)];
+}
+
+/** Distance from (x, y) to the carrier's full line or full circle. */
+export function distToCurve(c: Carrier, x: number, y: number): number {
+  if (c.kind === LINE) {
+    const dx = c.bx - c.ax, dy = c.by - c.ay;
+    const L = c.len;
+    if (L === 0) return Math.hypot(x - c.ax, y - c.ay);
+    return Math.abs((x - c.ax) * dy - (y - c.ay) * dx) / L;
+  }
+  return Math.abs(Math.hypot(x - c.cx, y - c.cy) - c.r);
+}
+
+/** Distance from (x, y) to the carrier itself (its finite range). */
+export function distToCarrier(c: Carrier, x: number, y: number): number {
+  const u = paramOf(c, x, y);
+  if (u >= 0 && u <= 1) return distToCurve(c, x, y);
+  return Math.min(Math.hypot(x - c.ax, y - c.ay), Math.hypot(x - c.bx, y - c.by));
+}
+
+/** True when two carriers lie on the same line or the same circle (within tol). */
+export function sameCurve(a: Carrier, b: Carrier, tol: number): boolean {
+  if (a.kind !== b.kind) return false;
+  if (a.kind === ARC) return Math.abs(a.r - b.r) <= tol && Math.hypot(a.cx - b.cx, a.cy - b.cy) <= tol;
+  return distToCurve(a, b.ax, b.ay) <= tol && distToCurve(a, b.bx, b.by) <= tol;
+}
+
+/**
+ * Intersections of the full curves of a and b (lines extended, full circles). Near-tangent
+ * configurations (gap or overlap within tanTol) give the single tangent point, so the result is
+ * never NaN. Parallel lines and concentric circles give no points.
+ */
+export function curveIntersections(a: Carrier, b: Carrier, tanTol: number): number[] {
+  if (a.kind === LINE && b.kind === LINE) return lineLine(a, b);
+  if (a.kind === LINE) return lineCircle(a, b.cx, b.cy, b.r, tanTol);
+  if (b.kind === LINE) return lineCircle(b, a.cx, a.cy, a.r, tanTol);
+  return circleCircle(a.cx, a.cy, a.r, b.cx, b.cy, b.r, tanTol);
+}
+
+function lineLine(a: Carrier, b: Carrier): number[] {
+  const d1x = a.bx - a.ax, d1y = a.by - a.ay;
+  const d2x = b.bx - b.ax, d2y = b.by - b.ay;
+  const den = d1x * d2y - d1y * d2x;
+  if (!(Math.abs(den) > 1e-14 * a.len * b.len)) return [];
+  const ex = b.ax - a.ax, ey = b.ay - a.ay;
+  const t = (ex * d2y - ey * d2x) / den;
+  const s = (ex * d1y - ey * d1x) / den;
+  // Evaluate from the nearer end of each segment and average, which halves the round-off.
+  const p1x = t < 0.5 ? a.ax + t * d1x : a.bx + (t - 1) * d1x;
+  const p1y = t < 0.5 ? a.ay + t * d1y : a.by + (t - 1) * d1y;
+  const p2x = s < 0.5 ? b.ax + s * d2x : b.bx + (s - 1) * d2x;
+  const p2y = s < 0.5 ? b.ay + s * d2y : b.by + (s - 1) * d2y;
+  return [(p1x + p2x) / 2, (p1y + p2y) / 2];
+}
+
+function lineCircle(l: Carrier, cx: number, cy: number, r: number, tanTol: number): number[] {
+  const dx = l.bx - l.ax, dy = l.by - l.ay;
+  const L = l.len;
+  if (L === 0) return [];
+  const ux = dx / L, uy = dy / L;
+  // Foot of the perpendicular from the centre, measured from the nearer endpoint.
+  const useA = Math.hypot(cx - l.ax, cy - l.ay) <= Math.hypot(cx - l.bx, cy - l.by);
+  const ox = useA ? l.ax : l.bx, oy = useA ? l.ay : l.by;
+  const t0 = (cx - ox) * ux + (cy - oy) * uy;
+  const fx = ox + t0 * ux, fy = oy + t0 * uy;
+  const h = (cx - ox) * uy - (cy - oy) * ux; // signed distance centre -> line
+  const ah = Math.abs(h);
+  if (ah > r + tanTol) return [];
+  if (ah >= r - tanTol) return [fx, fy];
+  const w = Math.sqrt((r - ah) * (r + ah));
+  return [fx - w * ux, fy - w * uy, fx + w * ux, fy + w * uy];
+}
+
+function circleCircle(x1: number, y1: number, r1: number, x2: number, y2: number, r2: number, tanTol: number): number[] {
+  const dx = x2 - x1, dy = y2 - y1;
+  const D = Math.hypot(dx, dy);
+  if (D <= tanTol) return [];
+  if (D > r1 + r2 + tanTol) return [];
+  if (D < Math.abs(r1 - r2) - tanTol) return [];
+  const ex = dx / D, ey = dy / D;
+  const a = (D * D + (r1 - r2) * (r1 + r2)) / (2 * D);
+  // h^2 = r1^2 - a^2, clamped for near-tangent circles.
+  const h2 = (r1 - a) * (r1 + a);
+  const tangent = Math.abs(D - (r1 + r2)) <= tanTol || Math.abs(D - Math.abs(r1 - r2)) <= tanTol || h2 <= 0;
+  const mx = x1 + a * ex, my = y1 + a * ey;
+  if (tangent) return [mx, my];
+  const h = Math.sqrt(h2);
+  return [mx - h * ey, my + h * ex, mx + h * ey, my - h * ex];
+}
+
+/** Index (into pts, pairs) of the point nearest (x, y), or -1. */
+export function nearestPoint(pts: number[], x: number, y: number): number {
+  let best = -1, bd = Infinity;
+  for (let k = 0; k < pts.length; k += 2) {
+    const d = Math.hypot(pts[k] - x, pts[k + 1] - y);
+    if (d < bd) {
+      bd = d;
+      best = k;
+    }
+  }
+  return best;
+}
+
+/**
+ * Winding contribution of carrier c about point (x, y): the crossing rule for its chord plus the
+ * circular segment between chord and arc (+1 or -1 when the point lies inside it).
+ */
+export function windingOf(c: Carrier, x: number, y: number): number {
+  let w = 0;
+  const { ax, ay, bx, by } = c;
+  if (ay <= y) {
+    if (by > y && (bx - ax) * (y - ay) - (x - ax) * (by - ay) > 0) w++;
+  } else if (by <= y && (bx - ax) * (y - ay) - (x - ax) * (by - ay) < 0) w--;
+  if (c.kind === ARC) {
+    if (Math.hypot(x - c.cx, y - c.cy) < c.r) {
+      // Inside the circle and on the arc's side of the chord: inside the circular segment.
+      const side = (bx - ax) * (y - ay) - (by - ay) * (x - ax);
+      // For phi > 0 the arc bulges to the right of a->b.
+      if ((c.phi > 0 && side < 0) || (c.phi < 0 && side > 0)) w += c.phi > 0 ? 1 : -1;
+    }
+  }
+  return w;
+}

@@ -1,0 +1,601 @@
+/**
+ * The boolean pipeline. Clipper decides topology only; exact geometry gives the numbers.
+ *
+ *   1. Carriers: every source segment becomes an exact line or arc (arcs over 180 degrees are split).
+ *   2. Arrangement: exact intersections, touches and overlaps between carriers are computed once and
+ *      shared as nodes, so both operands pass through the same exact point.
+ *   3. Chording: each carrier is cut at its nodes; arc pieces become short chords; all points are
+ *      scaled to integers around the inputs' centre and tagged (Z) with their vertex record.
+ *   4. Clipper runs; new crossings get Z through ZFillFunction (side table of crossing edges).
+ *   5. Tracing: each output edge is traced to its carrier; runs on one carrier become one exact
+ *      segment; run ends are placed on exact nodes or exact carrier intersections.
+ */
+import ClipperLib from 'clipper-lib';
+import type { IntPoint } from 'clipper-lib';
+import { arcFromChord, pushArc, regionBounds, type Contour, type Region } from '../geometry/contour';
+import { regionMomentsAbout } from '../moments/kernel';
+import {
+  ARC, LINE, curveIntersections, distToCarrier, distToCurve, makeArc, makeLine, nearestPoint,
+  paramOf, pointAt, sameCurve, windingOf, wrapAngle, type Carrier,
+} from './carriers';
+
+ClipperLib.use_xyz = true;
+
+export type Mode = 'union' | 'difference' | 'intersection' | 'evenodd';
+
+/** Largest integer coordinate used (clipper JS leaves its fast path above 47453132). */
+const INT_RANGE = 4e7;
+/** Largest angle (radians) spanned by one chord: sagitta <= (1 - cos(0.0625)) r ~ 2e-3 r. */
+const MAX_STEP = 0.125;
+const SAG_MAX = 1 - Math.cos(MAX_STEP / 2);
+/** Exact-geometry tolerance relative to the extent: points closer than this are one point. */
+const REL_EPS = 1e-10;
+
+export interface SourceGroup {
+  contours: readonly Contour[];
+  group: number;
+}
+
+interface Ctx {
+  mode: Mode;
+  eps: number;
+  unit: number;
+  ox: number;
+  oy: number;
+  scale: number;
+  carriers: Carrier[];
+  /** Per contour: the carrier ids in order. */
+  loops: { group: number; ids: number[] }[];
+  nx: number[];
+  ny: number[];
+  ncar: number[][];
+  parent: number[];
+  splits: number[][];
+  contact: boolean;
+  // Vertex records (one per clipper input point); Z = index + 1.
+  rx: number[];
+  ry: number[];
+  rX: number[];
+  rY: number[];
+  rExact: boolean[];
+  rCar: number[][];
+  // ZFill records: four vertex Zs per crossing.
+  zf: number[];
+}
+
+function find(ctx: Ctx, n: number): number {
+  const p = ctx.parent;
+  while (p[n] !== n) {
+    p[n] = p[p[n]];
+    n = p[n];
+  }
+  return n;
+}
+
+function union(ctx: Ctx, a: number, b: number): void {
+  a = find(ctx, a);
+  b = find(ctx, b);
+  if (a === b) return;
+  if (a < b) ctx.parent[b] = a;
+  else ctx.parent[a] = b;
+}
+
+function newNode(ctx: Ctx, x: number, y: number): number {
+  const id = ctx.nx.length;
+  ctx.nx.push(x);
+  ctx.ny.push(y);
+  ctx.ncar.push([]);
+  ctx.parent.push(id);
+  return id;
+}
+
+/** Step 1: carriers and vertex nodes from the source contours. */
+function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
+  const eps = ctx.eps;
+  for (const g of groups) {
+    for (const c of g.contours) {
+      const n = c.xy.length >> 1;
+      if (n < 2) continue;
+      // Expand arcs over 180 degrees, then drop repeated vertices (zero-length edges).
+      const xy: number[] = [], bl: number[] = [];
+      for (let i = 0; i < n; i++) {
+        const ax = c.xy[2 * i], ay = c.xy[2 * i + 1];
+        const j = (i + 1) % n;
+        const bx = c.xy[2 * j], by = c.xy[2 * j + 1];
+        const b = c.bulge ? c.bulge[i] : 0;
+        if (!Number.isFinite(ax) || !Number.isFinite(ay)) continue;
+        xy.push(ax, ay);
+        if (Number.isFinite(b) && b !== 0 && Math.abs(b) > 1) pushArc(xy, bl, ax, ay, bx, by, 4 * Math.atan(b));
+        else bl.push(Number.isFinite(b) ? b : 0);
+      }
+      const vx: number[] = [], vy: number[] = [], vb: number[] = [];
+      const m0 = xy.length >> 1;
+      for (let i = 0; i < m0; i++) {
+        const x = xy[2 * i], y = xy[2 * i + 1];
+        const k = vx.length;
+        if (k > 0 && Math.hypot(x - vx[k - 1], y - vy[k - 1]) <= eps) {
+          vb[k - 1] = bl[i]; // the zero-length edge goes; the next edge starts at the kept vertex
+          continue;
+        }
+        vx.push(x);
+        vy.push(y);
+        vb.push(bl[i]);
+      }
+      // Closing duplicates; the surviving last vertex keeps its own outgoing bulge only if distinct.
+      while (vx.length > 1 && Math.hypot(vx[vx.length - 1] - vx[0], vy[vy.length - 1] - vy[0]) <= eps) {
+        vx.pop();
+        vy.pop();
+        vb.pop();
+      }
+      const m = vx.length;
+      if (m < 2) continue;
+      const nodes: number[] = [];
+      for (let i = 0; i < m; i++) nodes.push(newNode(ctx, vx[i], vy[i]));
+      const ids: number[] = [];
+      for (let i = 0; i < m; i++) {
+        const j = (i + 1) % m;
+        const ax = vx[i], ay = vy[i], bx = vx[j], by = vy[j];
+        const L = Math.hypot(bx - ax, by - ay);
+        const b = vb[i];
+        const id = ctx.carriers.length;
+        let car: Carrier;
+        // An arc whose sagitta is below the tolerance is a line.
+        if (b !== 0 && Math.abs(b) * L * 0.5 > eps) {
+          const phi = 4 * Math.atan(b);
+          const { cx, cy, r } = arcFromChord(ax, ay, bx, by, phi);
+          car = makeArc(id, g.group, ax, ay, bx, by, cx, cy, r, phi);
+        } else car = makeLine(id, g.group, ax, ay, bx, by);
+        car.n0 = nodes[i];
+        car.n1 = nodes[j];
+        ctx.carriers.push(car);
+        ctx.splits.push([]);
+        ctx.ncar[nodes[i]].push(id);
+        ctx.ncar[nodes[j]].push(id);
+        ids.push(id);
+      }
+      ctx.loops.push({ group: g.group, ids });
+    }
+  }
+}
+
+function endpointNode(ctx: Ctx, c: Carrier, x: number, y: number): number {
+  const d0 = Math.hypot(x - c.ax, y - c.ay), d1 = Math.hypot(x - c.bx, y - c.by);
+  if (d0 <= ctx.eps && d0 <= d1) return c.n0;
+  if (d1 <= ctx.eps) return c.n1;
+  return -1;
+}
+
+function addSplit(ctx: Ctx, c: Carrier, node: number): void {
+  ctx.splits[c.id].push(node);
+  ctx.ncar[node].push(c.id);
+}
+
+/** A common point p of carriers a and b: share it as one exact node. */
+function sharePoint(ctx: Ctx, a: Carrier, b: Carrier, x: number, y: number): void {
+  const ea = endpointNode(ctx, a, x, y), eb = endpointNode(ctx, b, x, y);
+  if (ea >= 0 && eb >= 0) {
+    if (find(ctx, ea) !== find(ctx, eb)) {
+      union(ctx, ea, eb);
+      ctx.contact = true;
+    }
+    return;
+  }
+  ctx.contact = true;
+  if (ea >= 0) addSplit(ctx, b, ea);
+  else if (eb >= 0) addSplit(ctx, a, eb);
+  else {
+    const n = newNode(ctx, x, y);
+    addSplit(ctx, a, n);
+    addSplit(ctx, b, n);
+  }
+}
+
+function intersectPair(ctx: Ctx, a: Carrier, b: Carrier): void {
+  const eps = ctx.eps;
+  if (sameCurve(a, b, eps)) {
+    // Overlapping collinear lines or co-circular arcs: each one's ends split the other.
+    if (distToCarrier(a, b.ax, b.ay) <= eps) sharePoint(ctx, a, b, b.ax, b.ay);
+    if (distToCarrier(a, b.bx, b.by) <= eps) sharePoint(ctx, a, b, b.bx, b.by);
+    if (distToCarrier(b, a.ax, a.ay) <= eps) sharePoint(ctx, a, b, a.ax, a.ay);
+    if (distToCarrier(b, a.bx, a.by) <= eps) sharePoint(ctx, a, b, a.bx, a.by);
+    return;
+  }
+  const pts = curveIntersections(a, b, eps);
+  for (let k = 0; k < pts.length; k += 2) {
+    let x = pts[k], y = pts[k + 1];
+    // Prefer an exact source vertex that lies on the other carrier (touching vertex).
+    const ea = endpointNode(ctx, a, x, y), eb = endpointNode(ctx, b, x, y);
+    if (ea >= 0) {
+      x = ctx.nx[ea];
+      y = ctx.ny[ea];
+    } else if (eb >= 0) {
+      x = ctx.nx[eb];
+      y = ctx.ny[eb];
+    }
+    if (distToCarrier(a, x, y) <= eps && distToCarrier(b, x, y) <= eps) sharePoint(ctx, a, b, x, y);
+  }
+}
+
+/** Step 2: all pairwise contacts, with a sweep over x as the broad phase. */
+function buildArrangement(ctx: Ctx): void {
+  const cs = ctx.carriers;
+  const order = cs.map((_, i) => i).sort((i, j) => cs[i].xmin - cs[j].xmin);
+  const eps = ctx.eps;
+  for (let p = 0; p < order.length; p++) {
+    const a = cs[order[p]];
+    for (let q = p + 1; q < order.length; q++) {
+      const b = cs[order[q]];
+      if (b.xmin > a.xmax + eps) break;
+      if (b.ymin > a.ymax + eps || b.ymax < a.ymin - eps) continue;
+      intersectPair(ctx, a, b);
+    }
+  }
+  // Merged nodes: the representative carries every member's carriers.
+  const nn = ctx.nx.length;
+  for (let i = 0; i < nn; i++) {
+    const r = find(ctx, i);
+    if (r !== i) {
+      for (const c of ctx.ncar[i]) if (!ctx.ncar[r].includes(c)) ctx.ncar[r].push(c);
+      ctx.ncar[i] = [];
+    }
+  }
+}
+
+function pushVertex(ctx: Ctx, path: IntPoint[], x: number, y: number, exact: boolean, car: number[]): void {
+  const X = Math.round((x - ctx.ox) * ctx.scale), Y = Math.round((y - ctx.oy) * ctx.scale);
+  const last = path.length ? path[path.length - 1] : null;
+  if (last && last.X === X && last.Y === Y) {
+    mergeRecord(ctx, (last.Z as number) - 1, x, y, exact, car);
+    return;
+  }
+  const id = ctx.rx.length;
+  ctx.rx.push(x);
+  ctx.ry.push(y);
+  ctx.rX.push(X);
+  ctx.rY.push(Y);
+  ctx.rExact.push(exact);
+  ctx.rCar.push(car);
+  path.push({ X, Y, Z: id + 1 });
+}
+
+function mergeRecord(ctx: Ctx, id: number, x: number, y: number, exact: boolean, car: number[]): void {
+  if (exact && !ctx.rExact[id]) {
+    ctx.rx[id] = x;
+    ctx.ry[id] = y;
+    ctx.rExact[id] = true;
+  }
+  const merged = ctx.rCar[id].slice();
+  for (const c of car) if (!merged.includes(c)) merged.push(c);
+  ctx.rCar[id] = merged;
+}
+
+/** Step 3: integer chord paths, one per source contour. */
+function buildPaths(ctx: Ctx): { subj: IntPoint[][]; clip: IntPoint[][] } {
+  const subj: IntPoint[][] = [], clip: IntPoint[][] = [];
+  const cs = ctx.carriers;
+  for (const loop of ctx.loops) {
+    const path: IntPoint[] = [];
+    for (const id of loop.ids) {
+      const c = cs[id];
+      const r0 = find(ctx, c.n0), r1 = find(ctx, c.n1);
+      if (r0 === r1) continue; // collapsed by merging
+      const inner: { u: number; n: number }[] = [];
+      for (const s of ctx.splits[id]) {
+        const rs = find(ctx, s);
+        if (rs === r0 || rs === r1) continue;
+        const u = paramOf(c, ctx.nx[rs], ctx.ny[rs]);
+        inner.push({ u: Math.min(1, Math.max(0, u)), n: rs });
+      }
+      inner.sort((p, q) => p.u - q.u);
+      const seq: { u: number; n: number }[] = [{ u: 0, n: r0 }];
+      for (const s of inner) if (s.n !== seq[seq.length - 1].n) seq.push(s);
+      seq.push({ u: 1, n: r1 });
+      for (let k = 0; k + 1 < seq.length; k++) {
+        const nd = seq[k].n;
+        pushVertex(ctx, path, ctx.nx[nd], ctx.ny[nd], true, ctx.ncar[nd]);
+        if (c.kind !== ARC) continue;
+        const ua = seq[k].u, ub = seq[k + 1].u;
+        const dphi = Math.abs(c.phi) * (ub - ua);
+        let cnt = Math.ceil(dphi / MAX_STEP);
+        // At least two chords while the piece is visibly curved at the integer scale.
+        if (cnt < 2 && c.r * (1 - Math.cos(dphi / 2)) * ctx.scale > 0.5) cnt = 2;
+        for (let j = 1; j < cnt; j++) {
+          const [x, y] = pointAt(c, ua + ((ub - ua) * j) / cnt);
+          pushVertex(ctx, path, x, y, false, [id]);
+        }
+      }
+    }
+    // Close: a last vertex equal to the first merges into it.
+    while (path.length > 1) {
+      const a = path[path.length - 1], b = path[0];
+      if (a.X !== b.X || a.Y !== b.Y) break;
+      const ra = (a.Z as number) - 1;
+      mergeRecord(ctx, (b.Z as number) - 1, ctx.rx[ra], ctx.ry[ra], ctx.rExact[ra], ctx.rCar[ra]);
+      path.pop();
+    }
+    if (path.length < 3) continue;
+    (loop.group === 0 ? subj : clip).push(path);
+  }
+  return { subj, clip };
+}
+
+function intersectLists(a: number[], b: number[]): number[] {
+  const out: number[] = [];
+  for (const x of a) if (b.includes(x)) out.push(x);
+  return out;
+}
+
+function unionLists(a: number[], b: number[]): number[] {
+  const out = a.slice();
+  for (const x of b) if (!out.includes(x)) out.push(x);
+  return out;
+}
+
+function recCarriers(ctx: Ctx, z: number | undefined): number[] {
+  if (!z || z <= 0 || z > ctx.rCar.length) return [];
+  return ctx.rCar[z - 1];
+}
+
+function edgeCarriers(ctx: Ctx, zb: number | undefined, zt: number | undefined): number[] {
+  const a = recCarriers(ctx, zb), b = recCarriers(ctx, zt);
+  const common = intersectLists(a, b);
+  return common.length ? common : unionLists(a, b);
+}
+
+/** Exact classification of a point against the operation's result. */
+function classify(ctx: Ctx, x: number, y: number): boolean {
+  let w0 = 0, w1 = 0;
+  for (const c of ctx.carriers) {
+    if (c.group === 0) w0 += windingOf(c, x, y);
+    else w1 += windingOf(c, x, y);
+  }
+  switch (ctx.mode) {
+    case 'union': return w0 !== 0 || w1 !== 0;
+    case 'difference': return w0 !== 0 && w1 === 0;
+    case 'intersection': return w0 !== 0 && w1 !== 0;
+    default: return (w0 & 1) === 1;
+  }
+}
+
+/** Midpoint of carrier c between the points p and q that lie on it. */
+function pieceMid(c: Carrier, px: number, py: number, qx: number, qy: number): [number, number] {
+  if (c.kind === LINE) return [(px + qx) / 2, (py + qy) / 2];
+  const tp = Math.atan2(py - c.cy, px - c.cx);
+  const d = wrapAngle(Math.atan2(qy - c.cy, qx - c.cx) - tp);
+  // The piece lies inside the carrier's sweep: choose the direction that keeps it there.
+  const up = paramOf(c, px, py), uq = paramOf(c, qx, qy);
+  let dd = d;
+  const want = Math.sign(c.phi) * Math.sign(uq - up);
+  if (want > 0 && dd < 0) dd += 2 * Math.PI;
+  else if (want < 0 && dd > 0) dd -= 2 * Math.PI;
+  const t = tp + dd / 2;
+  return [c.cx + c.r * Math.cos(t), c.cy + c.r * Math.sin(t)];
+}
+
+/**
+ * Several carriers join p and q (a sliver thinner than a chord, or coincident edges): the true
+ * boundary has the result on its left. Compare each pair at the middle of the sliver between them.
+ */
+function resolveTie(ctx: Ctx, cands: number[], px: number, py: number, qx: number, qy: number): number {
+  const cs = ctx.carriers;
+  let best = cands[0];
+  let [bx, by] = pieceMid(cs[best], px, py, qx, qy);
+  for (let k = 1; k < cands.length; k++) {
+    const c = cands[k];
+    const [mx, my] = pieceMid(cs[c], px, py, qx, qy);
+    if (Math.hypot(mx - bx, my - by) <= 100 * ctx.eps) continue; // same geometry
+    const sx = (bx + mx) / 2, sy = (by + my) / 2;
+    const inside = classify(ctx, sx, sy);
+    const leftOfBest = (qx - px) * (sy - by) - (qy - py) * (sx - bx) > 0;
+    if (inside !== leftOfBest) {
+      best = c;
+      bx = mx;
+      by = my;
+    }
+  }
+  return best;
+}
+
+function carrierTol(ctx: Ctx, c: Carrier): number {
+  return 3 * ctx.unit + (c.kind === ARC ? SAG_MAX * c.r * 1.5 : 0) + ctx.eps;
+}
+
+function assignEdge(ctx: Ctx, si: number[], sj: number[], px: number, py: number, qx: number, qy: number): number {
+  const cs = ctx.carriers;
+  const common = intersectLists(si, sj);
+  if (common.length === 1) return common[0];
+  const pool = common.length ? common : unionLists(si, sj);
+  const fit = pool.filter((c) => {
+    const t = carrierTol(ctx, cs[c]);
+    return distToCarrier(cs[c], px, py) <= t && distToCarrier(cs[c], qx, qy) <= t;
+  });
+  if (fit.length === 1) return fit[0];
+  if (fit.length > 1) return resolveTie(ctx, fit, px, py, qx, qy);
+  // Nothing fits within tolerance: the carrier nearest to both ends (all carriers if no tags).
+  const search = pool.length ? pool : cs.map((c) => c.id);
+  let best = search[0], bd = Infinity;
+  for (const c of search) {
+    const d = Math.max(distToCurve(cs[c], px, py), distToCurve(cs[c], qx, qy));
+    if (d < bd) {
+      bd = d;
+      best = c;
+    }
+  }
+  return best;
+}
+
+/** Exact position of the vertex where carrier a hands over to carrier b. */
+function placeVertex(ctx: Ctx, a: number, b: number, px: number, py: number, exact: boolean, car: number[]): [number, number] {
+  if (exact && car.includes(a) && car.includes(b)) return [px, py];
+  const ca = ctx.carriers[a], cb = ctx.carriers[b];
+  if (!sameCurve(ca, cb, ctx.eps)) {
+    const pts = curveIntersections(ca, cb, 1e3 * ctx.eps);
+    const k = nearestPoint(pts, px, py);
+    if (k >= 0) {
+      const x = pts[k], y = pts[k + 1];
+      let lim = 8 * ctx.unit;
+      if (ca.kind === ARC) lim += 0.2 * ca.r;
+      if (cb.kind === ARC) lim += 0.2 * cb.r;
+      if (Math.hypot(x - px, y - py) <= lim) return [x, y];
+    }
+    // Near-tangent circles with no common point: the point of closest approach.
+    if (ca.kind === ARC && cb.kind === ARC) {
+      const d = Math.hypot(cb.cx - ca.cx, cb.cy - ca.cy);
+      if (d > 0) {
+        const sgn = d > ca.r ? 1 : ca.r >= cb.r ? 1 : -1;
+        const ux = (cb.cx - ca.cx) / d, uy = (cb.cy - ca.cy) / d;
+        const x = ca.cx + sgn * ca.r * ux, y = ca.cy + sgn * ca.r * uy;
+        if (Math.hypot(x - px, y - py) <= 0.2 * Math.min(ca.r, cb.r) + 8 * ctx.unit) return [x, y];
+      }
+    }
+  }
+  if (exact) return [px, py];
+  return projectOnto(ca, px, py);
+}
+
+function projectOnto(c: Carrier, x: number, y: number): [number, number] {
+  if (c.kind === LINE) {
+    const u = paramOf(c, x, y);
+    return [c.ax + u * (c.bx - c.ax), c.ay + u * (c.by - c.ay)];
+  }
+  const d = Math.hypot(x - c.cx, y - c.cy);
+  if (d === 0) return [c.ax, c.ay];
+  return [c.cx + ((x - c.cx) * c.r) / d, c.cy + ((y - c.cy) * c.r) / d];
+}
+
+/** Step 5: one clipper output path back to an exact contour (or null when degenerate). */
+function tracePath(ctx: Ctx, path: IntPoint[]): Contour | null {
+  const m = path.length;
+  if (m < 3) return null;
+  const px = new Float64Array(m), py = new Float64Array(m);
+  const ex: boolean[] = new Array(m);
+  const sets: number[][] = new Array(m);
+  for (let i = 0; i < m; i++) {
+    const p = path[i];
+    const z = p.Z ?? 0;
+    px[i] = p.X / ctx.scale + ctx.ox;
+    py[i] = p.Y / ctx.scale + ctx.oy;
+    ex[i] = false;
+    if (z > 0 && z <= ctx.rx.length) {
+      const r = z - 1;
+      if (ctx.rX[r] === p.X && ctx.rY[r] === p.Y) {
+        px[i] = ctx.rx[r];
+        py[i] = ctx.ry[r];
+        ex[i] = ctx.rExact[r];
+      }
+      sets[i] = ctx.rCar[r];
+    } else if (z < 0 && -z * 4 <= ctx.zf.length) {
+      const k = (-z - 1) * 4;
+      sets[i] = unionLists(edgeCarriers(ctx, ctx.zf[k], ctx.zf[k + 1]), edgeCarriers(ctx, ctx.zf[k + 2], ctx.zf[k + 3]));
+    } else sets[i] = [];
+  }
+  const edge = new Int32Array(m);
+  for (let i = 0; i < m; i++) {
+    const j = i + 1 === m ? 0 : i + 1;
+    edge[i] = assignEdge(ctx, sets[i], sets[j], px[i], py[i], px[j], py[j]);
+  }
+  let start = -1;
+  for (let i = 0; i < m; i++) {
+    if (edge[i] !== edge[(i + m - 1) % m]) {
+      start = i;
+      break;
+    }
+  }
+  if (start < 0) return null; // one carrier cannot close a loop
+  // Run starts (vertex indices) and their carriers.
+  const runV: number[] = [], runC: number[] = [];
+  for (let k = 0; k < m; k++) {
+    const i = (start + k) % m;
+    if (k === 0 || edge[i] !== edge[(i + m - 1) % m]) {
+      runV.push(i);
+      runC.push(edge[i]);
+    }
+  }
+  const R = runV.length;
+  const vx: number[] = [], vy: number[] = [];
+  for (let k = 0; k < R; k++) {
+    const i = runV[k];
+    const prev = runC[(k + R - 1) % R];
+    const [x, y] = placeVertex(ctx, prev, runC[k], px[i], py[i], ex[i], sets[i]);
+    vx.push(x);
+    vy.push(y);
+  }
+  // Segments; zero-length ones are dropped.
+  const oxy: number[] = [], ob: number[] = [];
+  for (let k = 0; k < R; k++) {
+    const k2 = (k + 1) % R;
+    const ax = vx[k], ay = vy[k], bx = vx[k2], by = vy[k2];
+    if (Math.hypot(bx - ax, by - ay) <= ctx.eps) continue;
+    const c = ctx.carriers[runC[k]];
+    oxy.push(ax, ay);
+    if (c.kind === LINE) {
+      ob.push(0);
+      continue;
+    }
+    const u0 = paramOf(c, ax, ay), u1 = paramOf(c, bx, by);
+    let d = wrapAngle(Math.atan2(by - c.cy, bx - c.cx) - Math.atan2(ay - c.cy, ax - c.cx));
+    const want = Math.sign(c.phi) * Math.sign(u1 - u0);
+    if (want > 0 && d < 0) d += 2 * Math.PI;
+    else if (want < 0 && d > 0) d -= 2 * Math.PI;
+    if (Math.abs(d) > Math.PI * (1 + 1e-12)) pushArc(oxy, ob, ax, ay, bx, by, d);
+    else ob.push(Math.tan(d / 4));
+  }
+  const n = ob.length;
+  if (n < 2) return null;
+  let anyArc = false;
+  for (const b of ob) if (b !== 0 && Number.isFinite(b)) anyArc = true;
+  if (n === 2 && !anyArc) return null;
+  const ct: Contour = { xy: Float64Array.from(oxy), bulge: anyArc ? Float64Array.from(ob) : null };
+  for (const v of ct.xy) if (!Number.isFinite(v)) return null;
+  if (ct.bulge) for (const v of ct.bulge) if (!Number.isFinite(v)) return null;
+  const A = regionMomentsAbout([ct], ct.xy[0], ct.xy[1]).m00;
+  if (!(Math.abs(A) > 4 * ctx.unit * ctx.unit)) return null; // zero-area sliver
+  return ct;
+}
+
+/** Run the pipeline on source groups (group 0 = subject, group 1 = clips). */
+export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region: Region; contact: boolean } {
+  let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
+  for (const g of groups) {
+    for (const c of g.contours) {
+      let ok = true;
+      for (const v of c.xy) if (!Number.isFinite(v)) ok = false;
+      if (!ok || c.xy.length < 4) continue;
+      const b = regionBounds([c]);
+      if (!b) continue;
+      xmin = Math.min(xmin, b.xmin);
+      xmax = Math.max(xmax, b.xmax);
+      ymin = Math.min(ymin, b.ymin);
+      ymax = Math.max(ymax, b.ymax);
+    }
+  }
+  const ext = Math.max(xmax - xmin, ymax - ymin) / 2;
+  if (!(ext > 0) || !Number.isFinite(ext)) return { region: [], contact: false };
+  const scale = INT_RANGE / ext;
+  const ctx: Ctx = {
+    mode, eps: REL_EPS * ext, unit: 1 / scale, ox: (xmin + xmax) / 2, oy: (ymin + ymax) / 2, scale,
+    carriers: [], loops: [], nx: [], ny: [], ncar: [], parent: [], splits: [], contact: false,
+    rx: [], ry: [], rX: [], rY: [], rExact: [], rCar: [], zf: [],
+  };
+  buildCarriers(ctx, groups);
+  buildArrangement(ctx);
+  const { subj, clip } = buildPaths(ctx);
+  const cpr = new ClipperLib.Clipper();
+  cpr.ZFillFunction = (b1, t1, b2, t2, pt) => {
+    ctx.zf.push(b1.Z ?? 0, t1.Z ?? 0, b2.Z ?? 0, t2.Z ?? 0);
+    pt.Z = -(ctx.zf.length / 4);
+  };
+  const PT = ClipperLib.PolyType, PF = ClipperLib.PolyFillType, CT = ClipperLib.ClipType;
+  if (subj.length) cpr.AddPaths(subj, PT.ptSubject, true);
+  if (clip.length) cpr.AddPaths(clip, PT.ptClip, true);
+  const sol: IntPoint[][] = [];
+  const ct = mode === 'union' || mode === 'evenodd' ? CT.ctUnion : mode === 'difference' ? CT.ctDifference : CT.ctIntersection;
+  const fill = mode === 'evenodd' ? PF.pftEvenOdd : PF.pftNonZero;
+  cpr.Execute(ct, sol, fill, fill);
+  const region: Contour[] = [];
+  for (const p of sol) {
+    const c = tracePath(ctx, p);
+    if (c) region.push(c);
+  }
+  return { region, contact: ctx.contact };
+}

@@ -1,0 +1,42 @@
+/**
+ * Booleans on exact regions bounded by lines and circular arcs.
+ *
+ * clipper-lib decides which pieces of the boundaries survive; every surviving piece is traced back
+ * to its exact source segment, so the output arcs are the source arcs again (same centre and
+ * radius) and every vertex sits on an exact source vertex or an exact analytic intersection.
+ * See engine.ts for the pipeline.
+ */
+import { regionBounds, type Contour, type Region } from '../geometry/contour';
+import { runBoolean } from './engine';
+
+export type BoolOp = 'union' | 'difference' | 'intersection';
+
+function boundsOverlap(a: Region, b: Region): boolean {
+  const ba = regionBounds(a), bb = regionBounds(b);
+  if (!ba || !bb) return false;
+  return !(bb.xmin > ba.xmax || bb.xmax < ba.xmin || bb.ymin > ba.ymax || bb.ymax < ba.ymin);
+}
+
+/** subject OP (union of clips). Inputs: well-formed regions (signed contours). */
+export function booleanRegions(subject: Region, clips: Region[], op: BoolOp): Region {
+  let cl = clips.filter((c) => c.length > 0);
+  if (op !== 'union') {
+    // Clips that cannot touch the subject change nothing.
+    cl = cl.filter((c) => boundsOverlap(subject, c));
+    if (cl.length === 0) return op === 'difference' ? subject.slice() : [];
+    if (subject.length === 0) return [];
+  } else if (cl.length === 0) return subject.slice();
+  const clipContours: Contour[] = [];
+  for (const r of cl) for (const c of r) clipContours.push(c);
+  return runBoolean([{ contours: subject, group: 0 }, { contours: clipContours, group: 1 }], op).region;
+}
+
+/**
+ * Resolve one shape's raw outline (may self-intersect or overlap itself) by the even-odd rule into
+ * a clean region. selfIntersecting=true when the outline crossed itself (the caller reports a
+ * warning). Also normalises orientation (outer CCW, holes CW).
+ */
+export function resolveOutline(contours: Contour[]): { region: Region; selfIntersecting: boolean } {
+  const { region, contact } = runBoolean([{ contours, group: 0 }], 'evenodd');
+  return { region, selfIntersecting: contact };
+}
