@@ -504,6 +504,10 @@ describe('validateProfile', () => {
     expect(paths({ id: 'b', type: 'bent-plate', at: [0, 0], legHorizontal: 14, legVertical: 40, thickness: 5, insideRadius: 10 })).toEqual(['legHorizontal']);
     expect(paths({ id: 'x', type: 'rectangle', at: [0], width: 1, height: 1, rotation: 'a', mirror: 1 })).toEqual(['at', 'rotation', 'mirror']);
     expect(paths({ id: 'x', type: 'hexagon', at: [0, 0] })).toEqual(['type']);
+    // A placement problem does not hide a dimension problem.
+    expect(paths({ id: 'a', type: 'angle', at: [0, 0], rotation: NaN, legVertical: 50, legHorizontal: 50, thickness: 8, rootRadius: 43 })).toEqual(['rotation', 'rootRadius', 'rootRadius']);
+    expect(paths({ id: 'r', type: 'rectangle', at: [1e11, 0], width: 1, height: 1 })).toEqual(['at']);
+    expect(paths({ id: 'r', type: 'rectangle', at: [0, 0], width: 100, height: 1e-5 })).toEqual(['height']);
     expect(paths({ id: 'x', type: 'rectangle', at: [0, 0], width: 1e13, height: 1 })).toEqual(['width']);
   });
 

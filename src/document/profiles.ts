@@ -172,6 +172,7 @@ export function validateProfile(shape: ProfileShape): ProfileIssue[] {
   }
 
   // Each field on its own: present, finite, positive (radii: not negative), not absurdly large.
+  const placementIssues = issues.length;
   let fieldsOk = true;
   for (const f of fields) {
     const v = s[f.key];
@@ -202,9 +203,13 @@ export function validateProfile(shape: ProfileShape): ProfileIssue[] {
     if (f.allowZero || v === undefined || v >= PROFILE_MIN_RATIO * size) continue;
     issues.push({ path: f.key, message: `${f.label.toLowerCase()} ${fmt(v)} is too small next to the largest dimension ${fmt(size)} (at least a millionth of it)` });
   }
-  if (Array.isArray(at) && at.length === 2 && at.every((v) => Number.isFinite(v)) && Math.max(Math.abs(at[0]), Math.abs(at[1])) > PROFILE_MAX_OFFSET_RATIO * size)
-    issues.push({ path: 'at', message: `position [${at.map(fmt).join(', ')}] is too far from the origin for a profile this small (largest dimension ${fmt(size)})` });
-  if (issues.length) return issues;
+  const atOk = !issues.some((i) => i.path === 'at');
+  if (atOk && Math.max(Math.abs((at as number[])[0]), Math.abs((at as number[])[1])) > PROFILE_MAX_OFFSET_RATIO * size)
+    issues.push({ path: 'at', message: `position [${(at as number[]).map(fmt).join(', ')}] is too far from the origin for a profile this small (largest dimension ${fmt(size)})` });
+  const sizeIssues = issues.length;
+  if (issues.slice(placementIssues).some((i) => i.path !== 'at')) return issues;
+  /** True once a check below has found a problem with the dimensions. */
+  const dimsBad = () => issues.length > sizeIssues;
 
   // Fields relative to each other: `less` demands a < limit, `atMost` a <= limit; `what`
   // names the limit in words, with the number a reader can check against the drawing.
@@ -226,7 +231,7 @@ export function validateProfile(shape: ProfileShape): ProfileIssue[] {
       const { depth: d, flangeWidth: b, flangeThickness: tf, webThickness: tw, rootRadius: r } = p;
       less('flangeThickness', tf, d / 2, `half the depth ${fmt(d)}`);
       less('webThickness', tw, b, `the flange width ${fmt(b)}`);
-      if (issues.length) break;
+      if (dimsBad()) break;
       if (p.type === 'i-beam')
         atMost('rootRadius', r, (b - tw) / 2, `the flange outstand (flange width − web thickness)/2 = ${fmt((b - tw) / 2)}`);
       else atMost('rootRadius', r, b - tw, `the flange outstand (flange width − web thickness) = ${fmt(b - tw)}`);
@@ -237,7 +242,7 @@ export function validateProfile(shape: ProfileShape): ProfileIssue[] {
       const { legVertical: lv, legHorizontal: lh, thickness: t, rootRadius: r } = p;
       less('thickness', t, lh, `the horizontal leg ${fmt(lh)}`);
       less('thickness', t, lv, `the vertical leg ${fmt(lv)}`);
-      if (issues.length) break;
+      if (dimsBad()) break;
       atMost('rootRadius', r, lh - t, `the horizontal leg less the thickness, ${fmt(lh - t)}`);
       atMost('rootRadius', r, lv - t, `the vertical leg less the thickness, ${fmt(lv - t)}`);
       break;
@@ -246,7 +251,7 @@ export function validateProfile(shape: ProfileShape): ProfileIssue[] {
       const { depth: d, flangeWidth: b, flangeThickness: tf, stemThickness: ts, rootRadius: r } = p;
       less('flangeThickness', tf, d, `the depth ${fmt(d)}`);
       less('stemThickness', ts, b, `the flange width ${fmt(b)}`);
-      if (issues.length) break;
+      if (dimsBad()) break;
       atMost('rootRadius', r, (b - ts) / 2, `the flange outstand (flange width − stem thickness)/2 = ${fmt((b - ts) / 2)}`);
       atMost('rootRadius', r, d - tf, `the clear stem length (depth − flange thickness) ${fmt(d - tf)}`);
       break;
