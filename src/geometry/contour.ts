@@ -44,6 +44,8 @@ export function segmentSweep(c: Contour, i: number): number {
   return b === 0 ? 0 : 4 * Math.atan(b);
 }
 
+
+
 /** Bulge for a signed sweep angle. */
 export function bulgeFromSweep(phi: number): number {
   return Math.tan(phi / 4);
@@ -173,27 +175,57 @@ export interface Bounds {
   ymax: number;
 }
 
-/** Exact bounds: vertices plus the axis extremes of every arc that lies within its sweep. */
+/**
+ * Point of the arc a->b (signed sweep phi) at angle θ ∈ [−α, α] from its midpoint (α = |phi|/2),
+ * in the chord frame: P = M + u h (cosθ − cosα)/sinα + e h sinθ/sinα, with M the chord midpoint,
+ * h the half chord, e the chord direction and u the unit normal towards the bulge. No arc centre
+ * is involved, so arcs of any flatness stay exact.
+ */
+export function arcPointAtAngle(ax: number, ay: number, bx: number, by: number, phi: number, theta: number): [number, number] {
+  const L = Math.hypot(bx - ax, by - ay);
+  if (!(L > 0)) return [ax, ay];
+  const h = L / 2, alpha = Math.abs(phi) / 2;
+  const sa = Math.sin(alpha);
+  const ex = (bx - ax) / L, ey = (by - ay) / L;
+  const sg = phi > 0 ? 1 : -1;
+  const ux = sg * ey, uy = -sg * ex;
+  // cosθ − cosα = 2 sin((α + θ)/2) sin((α − θ)/2), without cancellation.
+  const w = sa > 0 ? (2 * h * Math.sin((alpha + theta) / 2) * Math.sin((alpha - theta) / 2)) / sa : 0;
+  const t = sa > 0 ? (h * Math.sin(theta)) / sa : 0;
+  return [(ax + bx) / 2 + ux * w + ex * t, (ay + by) / 2 + uy * w + ey * t];
+}
+
+/** Exact bounds: vertices plus the points where an arc's outward normal is axis-aligned. */
 export function regionBounds(r: Region): Bounds | null {
   let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
+  const take = (x: number, y: number) => {
+    if (x < xmin) xmin = x;
+    if (x > xmax) xmax = x;
+    if (y < ymin) ymin = y;
+    if (y > ymax) ymax = y;
+  };
   for (const c of r) {
     const n = c.xy.length >> 1;
     for (let i = 0; i < n; i++) {
       const x = c.xy[2 * i], y = c.xy[2 * i + 1];
-      if (x < xmin) xmin = x;
-      if (x > xmax) xmax = x;
-      if (y < ymin) ymin = y;
-      if (y > ymax) ymax = y;
-      if (c.bulge && c.bulge[i] !== 0) {
-        const { cx, cy, r: rad, sweep } = segmentArc(c, i);
-        const t0 = Math.atan2(y - cy, x - cx);
-        for (let k = 0; k < 4; k++) {
-          const t = (k * Math.PI) / 2;
-          if (!angleInSweep(t, t0, sweep)) continue;
-          if (k === 0) xmax = Math.max(xmax, cx + rad);
-          else if (k === 1) ymax = Math.max(ymax, cy + rad);
-          else if (k === 2) xmin = Math.min(xmin, cx - rad);
-          else ymin = Math.min(ymin, cy - rad);
+      take(x, y);
+      const b = c.bulge ? c.bulge[i] : 0;
+      if (b === 0) continue;
+      const j = (i + 1) % n;
+      const bx = c.xy[2 * j], by = c.xy[2 * j + 1];
+      const L = Math.hypot(bx - x, by - y);
+      if (!(L > 0)) continue;
+      const phi = 4 * Math.atan(b), alpha = Math.abs(phi) / 2;
+      const ex = (bx - x) / L, ey = (by - y) / L;
+      const sg = phi > 0 ? 1 : -1;
+      const ux = sg * ey, uy = -sg * ex;
+      // The outward normal at θ is u cosθ + e sinθ; it equals the axis direction d at
+      // θ = atan2(d·e, d·u), an extreme of the arc when |θ| < α.
+      for (const [dx, dy] of AXES) {
+        const th = Math.atan2(dx * ex + dy * ey, dx * ux + dy * uy);
+        if (Math.abs(th) < alpha) {
+          const [px, py] = arcPointAtAngle(x, y, bx, by, phi, th);
+          take(px, py);
         }
       }
     }
@@ -201,6 +233,7 @@ export function regionBounds(r: Region): Bounds | null {
   if (xmin > xmax) return null;
   return { xmin, xmax, ymin, ymax };
 }
+const AXES: readonly (readonly [number, number])[] = [[1, 0], [0, 1], [-1, 0], [0, -1]];
 
 /** True when angle t lies strictly inside the sweep that starts at t0 (either direction). */
 export function angleInSweep(t: number, t0: number, sweep: number): boolean {
@@ -218,11 +251,9 @@ export function contourLength(c: Contour): number {
     const j = (i + 1) % n;
     const L = Math.hypot(c.xy[2 * j] - c.xy[2 * i], c.xy[2 * j + 1] - c.xy[2 * i + 1]);
     const phi = c.bulge ? 4 * Math.atan(c.bulge[i]) : 0;
-    if (phi === 0) sum += L;
-    else {
-      const half = Math.abs(phi) / 2;
-      sum += (L / (2 * Math.sin(half))) * Math.abs(phi);
-    }
+    const half = Math.abs(phi) / 2;
+    // Arc length = L · α / sin α; the series keeps flat arcs finite.
+    sum += half < 1e-6 ? L * (1 + (half * half) / 6) : (L * half) / Math.sin(half);
   }
   return sum;
 }
@@ -240,13 +271,14 @@ export function contourPolyline(c: Contour, tol: number): number[] {
     const phi = c.bulge ? 4 * Math.atan(c.bulge[i]) : 0;
     if (phi === 0) continue;
     const j = (i + 1) % n;
-    const { cx, cy, r } = arcFromChord(ax, ay, c.xy[2 * j], c.xy[2 * j + 1], phi);
+    const bx = c.xy[2 * j], by = c.xy[2 * j + 1];
+    const alpha = Math.abs(phi) / 2;
+    const r = Math.hypot(bx - ax, by - ay) / (2 * Math.sin(alpha));
     const maxStep = tol >= r ? Math.PI / 2 : 2 * Math.acos(1 - tol / r);
-    const k = Math.max(1, Math.ceil(Math.abs(phi) / Math.max(maxStep, 1e-3)));
-    const t0 = Math.atan2(ay - cy, ax - cx);
+    const k = Math.min(4096, Math.max(1, Math.ceil(Math.abs(phi) / Math.max(maxStep, 1e-3))));
     for (let s = 1; s < k; s++) {
-      const t = t0 + (phi * s) / k;
-      out.push(cx + r * Math.cos(t), cy + r * Math.sin(t));
+      const [px, py] = arcPointAtAngle(ax, ay, bx, by, phi, -alpha + (2 * alpha * s) / k);
+      out.push(px, py);
     }
   }
   return out;

@@ -46,6 +46,10 @@ function splitSegment(c: Contour, i: number, yc: number, out: Piece[]): void {
     return;
   }
   const phi = 4 * Math.atan(b);
+  if (Math.abs(phi) < 0.02) {
+    splitFlatArc(ax, ay, bx, by, phi, yc, out);
+    return;
+  }
   const { cx, cy, r } = arcFromChord(ax, ay, bx, by, phi);
   const t0 = Math.atan2(ay - cy, ax - cx);
   // Parameters (fractions of the sweep) where the arc meets y = yc.
@@ -79,6 +83,67 @@ function splitSegment(c: Contour, i: number, yc: number, out: Piece[]): void {
     px = qx;
     py = qy;
     pf = f;
+  }
+}
+
+/**
+ * Splitting a flat arc (|phi| < 0.02), whose centre is too far away to use: parametrise it by the
+ * chord. With half-chord h, half-angle α, chord direction e and unit normal u towards the bulge,
+ * the arc is P(t) = M + e h t + u w(t), t in [−1, 1], where (w + d)² + h² t² = r² (d = r cosα),
+ * i.e. w² + 2dw + h²(t² − 1) = 0, and w(t) = h sinα (1 − t²) / (√(1 − t² sin²α) + cosα) without
+ * cancellation. Meeting y = yc is a line in (t, w); substituting gives a quadratic whose root
+ * near the chord is taken in the stable form C / q.
+ */
+function splitFlatArc(ax: number, ay: number, bx: number, by: number, phi: number, yc: number, out: Piece[]): void {
+  const L = Math.hypot(bx - ax, by - ay);
+  const h = L / 2, alpha = Math.abs(phi) / 2;
+  const sa = Math.sin(alpha), ca = Math.cos(alpha);
+  const sg = phi > 0 ? 1 : -1;
+  const ex = (bx - ax) / L, ey = (by - ay) / L;
+  const ux = sg * ey, uy = -sg * ex;
+  const mx = (ax + bx) / 2, my = (ay + by) / 2;
+  // Every coefficient is divided by d = r cosα = h cosα / sinα, which is huge for flat arcs.
+  const invD = sa / (h * ca);
+  const k = yc - my; // ey h t + uy w = k
+  const wOf = (t: number) => (h * sa * (1 - t * t)) / (Math.sqrt(1 - t * t * sa * sa) + ca);
+  const ts: number[] = [];
+  const smallRoot = (A: number, B: number, C: number): number[] => {
+    const disc = B * B - 4 * A * C;
+    if (disc < 0) return [];
+    const q = -(B + (B >= 0 ? 1 : -1) * Math.sqrt(disc)) / 2;
+    return q === 0 ? [] : A === 0 ? [C / q] : [C / q, q / A];
+  };
+  if (Math.abs(ey) > Math.abs(uy)) {
+    // t = (k − uy w)/(ey h): (1 + uy²/ey²) w² + (2d − 2k uy/ey²) w + (k²/ey² − h²) = 0.
+    for (const w of smallRoot((1 + (uy * uy) / (ey * ey)) * invD, 2 - (2 * k * uy * invD) / (ey * ey), ((k * k) / (ey * ey) - h * h) * invD)) {
+      if (w >= -1e-12 * h && w <= h) ts.push((k - uy * w) / (ey * h));
+    }
+  } else {
+    // w = (k − ey h t)/uy: (ey²h²/uy² + h²) t² + (−2k ey h/uy² − 2d ey h/uy) t + (k²/uy² + 2dk/uy − h²) = 0.
+    const A = ((ey * ey * h * h) / (uy * uy) + h * h) * invD;
+    const B = ((-2 * k * ey * h) / (uy * uy)) * invD - (2 * ey * h) / uy;
+    const C = ((k * k) / (uy * uy) - h * h) * invD + (2 * k) / uy;
+    for (const t of smallRoot(A, B, C)) ts.push(t);
+  }
+  const cuts = ts.filter((t) => t > -1 + 1e-12 && t < 1 - 1e-12).sort((p, q) => p - q);
+  const theta = (t: number) => Math.asin(Math.max(-1, Math.min(1, t * sa)));
+  let px = ax, py = ay, pt = -1;
+  for (const t of [...cuts, 1]) {
+    let qx: number, qy: number;
+    if (t === 1) {
+      qx = bx;
+      qy = by;
+    } else {
+      const w = wOf(t);
+      qx = mx + ex * h * t + ux * w;
+      qy = yc;
+    }
+    const tm = (pt + t) / 2;
+    const above = my + ey * h * tm + uy * wOf(tm) > yc;
+    out.push({ above, x0: px, y0: py, x1: qx, y1: qy, sweep: sg * (theta(t) - theta(pt)) });
+    px = qx;
+    py = qy;
+    pt = t;
   }
 }
 

@@ -84,47 +84,85 @@ function oddSeries(coef: number[], x: number): number {
   return sum * x;
 }
 
+// 8-point Gauss–Legendre nodes and weights on [−1, 1], for flat arcs (see below).
+const GL8_T = [-0.9602898564975363, -0.7966664774136267, -0.525532409916329, -0.1834346424956498, 0.1834346424956498, 0.525532409916329, 0.7966664774136267, 0.9602898564975363];
+const GL8_W = [0.1012285362903763, 0.2223810344533745, 0.3137066458778873, 0.362683783378362, 0.362683783378362, 0.3137066458778873, 0.2223810344533745, 0.1012285362903763];
+
 /**
  * Adds the moments of the signed circular segment between chord a->b and the arc of sweep phi.
- * Local frame: origin at the arc centre, x' towards the arc midpoint. With half-angle α:
+ *
+ * Usual arcs (half-angle α ≥ 0.01): local frame at the arc centre, x' towards the arc midpoint:
  *   A = r²(α − sinα cosα), ∫x' = (2/3) r³ sin³α, ∫y' = 0, ∫x'y' = 0,
- *   ∫x'² = r⁴(α/4 − sin4α/16), ∫y'² = r⁴(α/4 − sin2α/6 + sin4α/48).
+ *   ∫x'² = r⁴(α/4 − sin4α/16), ∫y'² = r⁴(α/4 − sin2α/6 + sin4α/48)
+ * (small α by their Taylor series, which avoid cancellation).
+ *
+ * Flat arcs (α < 0.01): the centre is far away (r = h / sinα for half-chord h), so the frame
+ * moves to the chord midpoint, where the segment is 0 ≤ x' ≤ g(y'), |y'| ≤ h with
+ *   g(y') = (h² − y'²) sinα / (h (√(1 − (y' sinα / h)²) + cosα)),
+ * an analytic function whose nearest singularity lies at |y'| = h / sinα: 8-point Gauss–Legendre
+ * integrates it to an error of order α¹⁶, i.e. to round-off, with nothing that can overflow.
  */
 function addCircularSegment(ax: number, ay: number, bx: number, by: number, phi: number, acc: Float64Array): void {
   const dx = bx - ax, dy = by - ay;
   const L = Math.hypot(dx, dy);
-  if (L === 0) return;
+  if (!(L > 0)) return;
   const alpha = Math.abs(phi) / 2;
   const sa = Math.sin(alpha), ca = Math.cos(alpha);
-  const r = L / (2 * sa);
   const s = phi > 0 ? 1 : -1;
-  const ux = (s * dy) / L, uy = (-s * dx) / L; // centre -> arc midpoint
-  const d = r * ca;
-  const cx = (ax + bx) / 2 - ux * d, cy = (ay + by) / 2 - uy * d;
-  const r2 = r * r, r4 = r2 * r2;
-  let fA: number, fXX: number, fYY: number;
-  if (alpha < 0.25) {
-    fA = oddSeries(SERIES_A, alpha);
-    fXX = oddSeries(SERIES_XX, alpha);
-    fYY = oddSeries(SERIES_YY, alpha);
+  const ux = (s * dy) / L, uy = (-s * dx) / L; // frame origin -> arc midpoint
+  let ox: number, oy: number, A: number, Sx: number, Ixx: number, Iyy: number;
+  if (alpha < 0.01) {
+    const h = L / 2;
+    ox = (ax + bx) / 2;
+    oy = (ay + by) / 2;
+    A = 0;
+    Sx = 0;
+    Ixx = 0;
+    Iyy = 0;
+    for (let k = 0; k < 8; k++) {
+      const t = GL8_T[k], w = GL8_W[k] * h;
+      const q = t * sa;
+      const g = (h * (1 - t * t) * sa) / (Math.sqrt(1 - q * q) + ca);
+      const y = h * t;
+      A += w * g;
+      Sx += (w * g * g) / 2;
+      Ixx += (w * g * g * g) / 3;
+      Iyy += w * y * y * g;
+    }
   } else {
-    const s2 = Math.sin(2 * alpha), s4 = Math.sin(4 * alpha);
-    fA = alpha - s2 / 2;
-    fXX = alpha / 4 - s4 / 16;
-    fYY = alpha / 4 - s2 / 6 + s4 / 48;
+    const r = L / (2 * sa);
+    const d = r * ca;
+    ox = (ax + bx) / 2 - ux * d;
+    oy = (ay + by) / 2 - uy * d;
+    const r2 = r * r, r4 = r2 * r2;
+    let fA: number, fXX: number, fYY: number;
+    if (alpha < 0.25) {
+      fA = oddSeries(SERIES_A, alpha);
+      fXX = oddSeries(SERIES_XX, alpha);
+      fYY = oddSeries(SERIES_YY, alpha);
+    } else {
+      const s2 = Math.sin(2 * alpha), s4 = Math.sin(4 * alpha);
+      fA = alpha - s2 / 2;
+      fXX = alpha / 4 - s4 / 16;
+      fYY = alpha / 4 - s2 / 6 + s4 / 48;
+    }
+    A = r2 * fA;
+    Sx = (2 / 3) * r2 * r * sa * sa * sa;
+    Ixx = r4 * fXX;
+    Iyy = r4 * fYY;
   }
-  const A = s * r2 * fA;
-  const Sx = s * (2 / 3) * r2 * r * sa * sa * sa;
-  const Ixx = s * r4 * fXX; // ∫x'²
-  const Iyy = s * r4 * fYY; // ∫y'²
-  // Global x = cx + x' ux − y' uy, y = cy + x' uy + y' ux (rotation taking x' to u).
-  const mx = ux * Sx, my = uy * Sx; // ∫(x − cx), ∫(y − cy)
+  A *= s;
+  Sx *= s;
+  Ixx *= s; // ∫x'²
+  Iyy *= s; // ∫y'²
+  // Global x = ox + x' ux − y' uy, y = oy + x' uy + y' ux (rotation taking x' to u).
+  const mx = ux * Sx, my = uy * Sx; // ∫(x − ox), ∫(y − oy)
   acc[0] += A;
-  acc[1] += cx * A + mx;
-  acc[2] += cy * A + my;
-  acc[3] += cx * cx * A + 2 * cx * mx + ux * ux * Ixx + uy * uy * Iyy;
-  acc[4] += cy * cy * A + 2 * cy * my + uy * uy * Ixx + ux * ux * Iyy;
-  acc[5] += cx * cy * A + cx * my + cy * mx + ux * uy * (Ixx - Iyy);
+  acc[1] += ox * A + mx;
+  acc[2] += oy * A + my;
+  acc[3] += ox * ox * A + 2 * ox * mx + ux * ux * Ixx + uy * uy * Iyy;
+  acc[4] += oy * oy * A + 2 * oy * my + uy * uy * Ixx + ux * ux * Iyy;
+  acc[5] += ox * oy * A + ox * my + oy * mx + ux * uy * (Ixx - Iyy);
 }
 
 /** Moments about (ox, oy) of a region, without shifting. */

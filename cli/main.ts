@@ -1,0 +1,204 @@
+/**
+ * Kern's command line: `kern props FILE`, `kern cut FILE --y VALUE`, `kern report FILE ...`.
+ * Run with `npm run -s cli -- <command> ...`. Exit codes: 0 ok, 2 bad input or usage, 1 internal.
+ */
+import { readFileSync } from 'node:fs';
+import {
+  cutSection,
+  evaluateDocument,
+  formatIssue,
+  formatProperty,
+  parseDocument,
+  PROPERTY_CATALOG,
+  type Evaluation,
+  type SectionDocument,
+  type SectionProperties,
+} from '../src';
+
+const USAGE = `Usage:
+  kern props FILE [--json]                 section properties of a section document (.json)
+  kern cut FILE (--y VALUE | --x VALUE) [--json]
+                                           width, area, centroid and Q of the part above y = VALUE
+                                           (or right of x = VALUE)
+  kern report FILE --out report.html [--pdf out.pdf]
+Options: --units U  (mm, cm, m, in, ft) for a DXF file that does not state its units`;
+
+export class UsageError extends Error {}
+
+interface Parsed {
+  positional: string[];
+  flags: Map<string, string | true>;
+}
+
+export function parseArgs(args: string[], valued: string[]): Parsed {
+  const positional: string[] = [];
+  const flags = new Map<string, string | true>();
+  for (let i = 0; i < args.length; i++) {
+    const a = args[i];
+    if (a.startsWith('--')) {
+      const eq = a.indexOf('=');
+      const name = eq > 0 ? a.slice(2, eq) : a.slice(2);
+      if (eq > 0) flags.set(name, a.slice(eq + 1));
+      else if (valued.includes(name)) {
+        if (i + 1 >= args.length) throw new UsageError(`--${name} needs a value`);
+        flags.set(name, args[++i]);
+      } else flags.set(name, true);
+    } else positional.push(a);
+  }
+  return { positional, flags };
+}
+
+export type Loaded = { ok: true; doc: SectionDocument; warnings: string[] } | { ok: false; messages: string[] };
+
+/** Read and validate a section file. DXF files are handled by the exchange module when present. */
+export async function loadFile(path: string, units?: string): Promise<Loaded> {
+  if (/\.dxf$/i.test(path)) {
+    const mod = await import('./dxf-input');
+    return mod.loadSectionFile(path, units);
+  }
+  let text: string;
+  try {
+    text = readFileSync(path, 'utf8');
+  } catch (e) {
+    return { ok: false, messages: [`cannot read ${path}: ${(e as NodeJS.ErrnoException).code ?? String(e)}`] };
+  }
+  const r = parseDocument(text);
+  if (!r.ok) return { ok: false, messages: r.errors.map(formatIssue) };
+  return { ok: true, doc: r.doc, warnings: r.warnings.map(formatIssue) };
+}
+
+function propsJson(doc: SectionDocument, ev: Evaluation, p: SectionProperties, warnings: string[]) {
+  return {
+    units: doc.units,
+    area: p.area,
+    centroid: p.centroid,
+    Qx: p.Qx,
+    Qy: p.Qy,
+    Ix: p.Ix,
+    Iy: p.Iy,
+    Ixy: p.Ixy,
+    J0: p.J0,
+    I1: p.I1,
+    I2: p.I2,
+    theta: p.theta,
+    rx: p.rx,
+    ry: p.ry,
+    r1: p.r1,
+    r2: p.r2,
+    Sx_top: p.Sx_top,
+    Sx_bottom: p.Sx_bottom,
+    Sy_left: p.Sy_left,
+    Sy_right: p.Sy_right,
+    Zx: p.Zx,
+    Zy: p.Zy,
+    plasticAxis: p.plasticAxis,
+    bounds: p.bounds,
+    perimeter: p.perimeter,
+    warnings: [...warnings, ...ev.warnings.map(formatIssue)],
+  };
+}
+
+function table(rows: [string, string, string][]): string {
+  const w0 = Math.max(...rows.map((r) => r[0].length));
+  const w1 = Math.max(...rows.map((r) => r[1].length));
+  return rows.map(([a, b, c]) => `${a.padEnd(w0)}  ${b.padStart(w1)} ${c}`.trimEnd()).join('\n');
+}
+
+function out(s: string): void {
+  process.stdout.write(s.endsWith('\n') ? s : s + '\n');
+}
+function err(s: string): void {
+  process.stderr.write(s.endsWith('\n') ? s : s + '\n');
+}
+
+async function evaluateFile(file: string | undefined, units: string | undefined) {
+  if (!file) throw new UsageError('missing FILE');
+  const loaded = await loadFile(file, units);
+  if (!loaded.ok) {
+    err(`${file}: the section cannot be read:`);
+    for (const m of loaded.messages) err(`  ${m}`);
+    return null;
+  }
+  const ev = evaluateDocument(loaded.doc);
+  if (!ev.props) {
+    err(`${file}: ${ev.message ?? 'the section has no area'}`);
+    for (const w of ev.warnings) err(`  warning: ${formatIssue(w)}`);
+    return null;
+  }
+  return { doc: loaded.doc, ev, props: ev.props, warnings: loaded.warnings };
+}
+
+const CAUTION = 'Geometric properties only. The design must be checked against the applicable code by a qualified engineer.';
+
+export async function main(argv: string[]): Promise<number> {
+  const [cmd, ...rest] = argv;
+  try {
+    if (cmd === 'props') {
+      const a = parseArgs(rest, ['units']);
+      const r = await evaluateFile(a.positional[0], a.flags.get('units') as string | undefined);
+      if (!r) return 2;
+      if (a.flags.has('json')) {
+        out(JSON.stringify(propsJson(r.doc, r.ev, r.props, r.warnings), null, 2));
+        return 0;
+      }
+      const rows: [string, string, string][] = PROPERTY_CATALOG.map((info) => {
+        const f = formatProperty(info, r.props, r.doc.units);
+        return [info.label, f.text, f.unit];
+      });
+      out(`${r.doc.name ?? a.positional[0]} (${r.doc.units})`);
+      out(table(rows));
+      for (const w of [...r.warnings, ...r.ev.warnings.map(formatIssue)]) out(`warning: ${w}`);
+      out(CAUTION);
+      return 0;
+    }
+    if (cmd === 'cut') {
+      const a = parseArgs(rest, ['x', 'y', 'units']);
+      const xs = a.flags.get('x'), ys = a.flags.get('y');
+      if ((xs === undefined) === (ys === undefined)) throw new UsageError('give exactly one of --y VALUE or --x VALUE');
+      const raw = (xs ?? ys) as string | true;
+      const at = typeof raw === 'string' && raw.trim() !== '' ? Number(raw) : NaN;
+      if (!Number.isFinite(at)) throw new UsageError(`--${xs !== undefined ? 'x' : 'y'} needs a finite number, got "${raw === true ? '' : raw}"`);
+      const r = await evaluateFile(a.positional[0], a.flags.get('units') as string | undefined);
+      if (!r) return 2;
+      const c = cutSection(r.ev.region, xs !== undefined ? 'x' : 'y', at, r.props);
+      const result = { at: c.at, width: c.width, area: c.area, centroid: c.centroid, Q: c.Q };
+      if (a.flags.has('json')) out(JSON.stringify(result, null, 2));
+      else {
+        const side = xs !== undefined ? `right of x = ${at}` : `above y = ${at}`;
+        out(`Part ${side} (${r.doc.units}):`);
+        out(
+          table([
+            ['Cut width b', String(c.width), r.doc.units],
+            ['Area beyond the cut', String(c.area), `${r.doc.units}²`],
+            ['Centroid of that part', c.centroid ? `(${c.centroid.x}, ${c.centroid.y})` : '—', r.doc.units],
+            ['First moment Q about the centroidal axis', String(c.Q), `${r.doc.units}³`],
+          ]),
+        );
+      }
+      return 0;
+    }
+    if (cmd === 'report') {
+      const mod = await import('./report');
+      return await mod.reportCommand(rest);
+    }
+    if (cmd === undefined || cmd === 'help' || cmd === '--help' || cmd === '-h') {
+      out(USAGE);
+      return cmd === undefined ? 2 : 0;
+    }
+    throw new UsageError(`unknown command "${cmd}"`);
+  } catch (e) {
+    if (e instanceof UsageError) {
+      err(`kern: ${e.message}\n${USAGE}`);
+      return 2;
+    }
+    err(`kern: internal error: ${e instanceof Error ? e.message : String(e)}`);
+    return 1;
+  }
+}
+
+const isEntry = process.argv[1] && /cli[\\/]main\.ts$/.test(process.argv[1]);
+if (isEntry) {
+  main(process.argv.slice(2)).then((code) => {
+    process.exitCode = code;
+  });
+}
