@@ -28,6 +28,8 @@ const INT_RANGE = 4e7;
 /** Largest angle (radians) spanned by one chord: sagitta <= (1 - cos(0.0625)) r ~ 2e-3 r. */
 const MAX_STEP = 0.125;
 const SAG_MAX = 1 - Math.cos(MAX_STEP / 2);
+/** Smallest relative sagitta used when refining near-tangent arcs (caps the chord count). */
+const SAG_FLOOR = 1e-6;
 /** Exact-geometry tolerance relative to the extent: points closer than this are one point. */
 const REL_EPS = 1e-10;
 
@@ -51,6 +53,8 @@ interface Ctx {
   ncar: number[][];
   parent: number[];
   splits: number[][];
+  /** Per carrier: largest chord sagitta allowed (absolute). */
+  sag: number[];
   contact: boolean;
   // Vertex records (one per clipper input point); Z = index + 1.
   rx: number[];
@@ -149,6 +153,7 @@ function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
         car.n1 = nodes[j];
         ctx.carriers.push(car);
         ctx.splits.push([]);
+        ctx.sag.push(car.kind === ARC ? SAG_MAX * car.r : 0);
         ctx.ncar[nodes[i]].push(id);
         ctx.ncar[nodes[j]].push(id);
         ids.push(id);
@@ -200,6 +205,7 @@ function intersectPair(ctx: Ctx, a: Carrier, b: Carrier): void {
     if (distToCarrier(b, a.bx, a.by) <= eps) sharePoint(ctx, a, b, a.bx, a.by);
     return;
   }
+  if (a.kind === ARC && b.kind === ARC) refineNested(ctx, a, b);
   const pts = curveIntersections(a, b, eps);
   for (let k = 0; k < pts.length; k += 2) {
     let x = pts[k], y = pts[k + 1];
@@ -214,6 +220,20 @@ function intersectPair(ctx: Ctx, a: Carrier, b: Carrier): void {
     }
     if (distToCarrier(a, x, y) <= eps && distToCarrier(b, x, y) <= eps) sharePoint(ctx, a, b, x, y);
   }
+}
+
+/**
+ * Nested, nearly tangent circles: the outer arc's chords cut inwards by up to the sagitta and
+ * would cross the inner arc where the exact arcs do not meet. Refine the outer arc's chords so
+ * that their sagitta stays below the gap (down to a floor; below it, tracing snaps the crossings).
+ */
+function refineNested(ctx: Ctx, a: Carrier, b: Carrier): void {
+  const D = Math.hypot(a.cx - b.cx, a.cy - b.cy);
+  const gap = Math.abs(a.r - b.r) - D;
+  const outer = a.r >= b.r ? a : b;
+  if (!(gap > 0) || gap >= 2 * SAG_MAX * outer.r) return;
+  const want = Math.max(gap / 2.5, SAG_FLOOR * outer.r);
+  if (want < ctx.sag[outer.id]) ctx.sag[outer.id] = want;
 }
 
 /** Step 2: all pairwise contacts, with a sweep over x as the broad phase. */
@@ -296,7 +316,9 @@ function buildPaths(ctx: Ctx): { subj: IntPoint[][]; clip: IntPoint[][] } {
         if (c.kind !== ARC) continue;
         const ua = seq[k].u, ub = seq[k + 1].u;
         const dphi = Math.abs(c.phi) * (ub - ua);
-        let cnt = Math.ceil(dphi / MAX_STEP);
+        const sr = ctx.sag[id] / c.r;
+        const step = sr >= SAG_MAX ? MAX_STEP : 2 * Math.acos(1 - sr);
+        let cnt = Math.ceil(dphi / step);
         // At least two chords while the piece is visibly curved at the integer scale.
         if (cnt < 2 && c.r * (1 - Math.cos(dphi / 2)) * ctx.scale > 0.5) cnt = 2;
         for (let j = 1; j < cnt; j++) {
@@ -428,6 +450,13 @@ function assignEdge(ctx: Ctx, si: number[], sj: number[], px: number, py: number
 function placeVertex(ctx: Ctx, a: number, b: number, px: number, py: number, exact: boolean, car: number[]): [number, number] {
   if (exact && car.includes(a) && car.includes(b)) return [px, py];
   const ca = ctx.carriers[a], cb = ctx.carriers[b];
+  // Carriers that share a source vertex (or a merged node) meet there exactly.
+  for (const na of [ca.n0, ca.n1]) {
+    const ra = find(ctx, na);
+    if (ra !== find(ctx, cb.n0) && ra !== find(ctx, cb.n1)) continue;
+    const x = ctx.nx[ra], y = ctx.ny[ra];
+    if (Math.hypot(x - px, y - py) <= 8 * ctx.unit) return [x, y];
+  }
   if (!sameCurve(ca, cb, ctx.eps)) {
     const pts = curveIntersections(ca, cb, 1e3 * ctx.eps);
     const k = nearestPoint(pts, px, py);
@@ -442,7 +471,9 @@ function placeVertex(ctx: Ctx, a: number, b: number, px: number, py: number, exa
     if (ca.kind === ARC && cb.kind === ARC) {
       const d = Math.hypot(cb.cx - ca.cx, cb.cy - ca.cy);
       if (d > 0) {
-        const sgn = d > ca.r ? 1 : ca.r >= cb.r ? 1 : -1;
+        // Apart: towards the other centre. Nested: the small circle's far side, the big one's near side.
+        const nested = d < Math.abs(ca.r - cb.r) + ctx.eps;
+        const sgn = !nested || ca.r >= cb.r ? 1 : -1;
         const ux = (cb.cx - ca.cx) / d, uy = (cb.cy - ca.cy) / d;
         const x = ca.cx + sgn * ca.r * ux, y = ca.cy + sgn * ca.r * uy;
         if (Math.hypot(x - px, y - py) <= 0.2 * Math.min(ca.r, cb.r) + 8 * ctx.unit) return [x, y];
@@ -463,6 +494,17 @@ function projectOnto(c: Carrier, x: number, y: number): [number, number] {
   return [c.cx + ((x - c.cx) * c.r) / d, c.cy + ((y - c.cy) * c.r) / d];
 }
 
+/** Carriers passing through (x, y) within tolerance: the fallback for a missing or wrong tag. */
+function carriersNear(ctx: Ctx, x: number, y: number): number[] {
+  const out: number[] = [];
+  for (const c of ctx.carriers) {
+    const t = carrierTol(ctx, c);
+    if (x < c.xmin - t || x > c.xmax + t || y < c.ymin - t || y > c.ymax + t) continue;
+    if (distToCarrier(c, x, y) <= t) out.push(c.id);
+  }
+  return out;
+}
+
 /** Step 5: one clipper output path back to an exact contour (or null when degenerate). */
 function tracePath(ctx: Ctx, path: IntPoint[]): Contour | null {
   const m = path.length;
@@ -478,16 +520,18 @@ function tracePath(ctx: Ctx, path: IntPoint[]): Contour | null {
     ex[i] = false;
     if (z > 0 && z <= ctx.rx.length) {
       const r = z - 1;
+      // A tag is trusted only when it belongs to this very point.
       if (ctx.rX[r] === p.X && ctx.rY[r] === p.Y) {
         px[i] = ctx.rx[r];
         py[i] = ctx.ry[r];
         ex[i] = ctx.rExact[r];
-      }
-      sets[i] = ctx.rCar[r];
+        sets[i] = ctx.rCar[r];
+      } else sets[i] = [];
     } else if (z < 0 && -z * 4 <= ctx.zf.length) {
       const k = (-z - 1) * 4;
       sets[i] = unionLists(edgeCarriers(ctx, ctx.zf[k], ctx.zf[k + 1]), edgeCarriers(ctx, ctx.zf[k + 2], ctx.zf[k + 3]));
     } else sets[i] = [];
+    if (sets[i].length === 0) sets[i] = carriersNear(ctx, px[i], py[i]);
   }
   const edge = new Int32Array(m);
   for (let i = 0; i < m; i++) {
@@ -574,7 +618,7 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
   const scale = INT_RANGE / ext;
   const ctx: Ctx = {
     mode, eps: REL_EPS * ext, unit: 1 / scale, ox: (xmin + xmax) / 2, oy: (ymin + ymax) / 2, scale,
-    carriers: [], loops: [], nx: [], ny: [], ncar: [], parent: [], splits: [], contact: false,
+    carriers: [], loops: [], nx: [], ny: [], ncar: [], parent: [], splits: [], sag: [], contact: false,
     rx: [], ry: [], rX: [], rY: [], rExact: [], rCar: [], zf: [],
   };
   buildCarriers(ctx, groups);
@@ -592,6 +636,7 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
   const ct = mode === 'union' || mode === 'evenodd' ? CT.ctUnion : mode === 'difference' ? CT.ctDifference : CT.ctIntersection;
   const fill = mode === 'evenodd' ? PF.pftEvenOdd : PF.pftNonZero;
   cpr.Execute(ct, sol, fill, fill);
+  if (process.env.DBG) console.log(JSON.stringify(sol.map((p) => p.map((q) => [q.X, q.Y, q.Z, ...(q.Z! > 0 ? [ctx.rCar[q.Z! - 1]] : q.Z! < 0 ? [ctx.zf.slice(-4 * q.Z! - 4, -4 * q.Z!)] : [])]))));
   const region: Contour[] = [];
   for (const p of sol) {
     const c = tracePath(ctx, p);
