@@ -120,15 +120,19 @@ function validatePolygon(s: Record<string, unknown>, path: string, out: Issue[])
     ok = checkPoint(p, `${path}.points[${k}]`, out) && ok;
   });
   if (!ok) return;
+  // Degenerate: every point on one line (a self-crossing outline may have zero net area and is
+  // still valid: it is resolved by the even-odd rule).
   const P = pts as [number, number][];
-  let area2 = 0;
-  let ext = 0;
-  for (let k = 0; k < P.length; k++) {
-    const a = P[k], b = P[(k + 1) % P.length];
-    area2 += a[0] * b[1] - b[0] * a[1];
-    ext = Math.max(ext, Math.abs(a[0] - P[0][0]), Math.abs(a[1] - P[0][1]));
+  let far = P[0], fd = 0;
+  for (const q of P) {
+    if (dist(q, P[0]) > fd) {
+      far = q;
+      fd = dist(q, P[0]);
+    }
   }
-  if (!(Math.abs(area2) > 1e-12 * ext * ext)) out.push({ path: `${path}.points`, message: 'the points enclose no area (they are collinear or repeated)' });
+  let maxCross = 0;
+  for (const q of P) maxCross = Math.max(maxCross, Math.abs((q[0] - P[0][0]) * (far[1] - P[0][1]) - (q[1] - P[0][1]) * (far[0] - P[0][0])));
+  if (!(maxCross > 1e-12 * fd * fd)) out.push({ path: `${path}.points`, message: 'the points enclose no area (they are collinear or repeated)' });
 }
 
 function validatePath(s: Record<string, unknown>, path: string, out: Issue[]): void {
