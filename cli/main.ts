@@ -198,6 +198,10 @@ export async function main(argv: string[]): Promise<number> {
 
 const isEntry = process.argv[1] && /cli[\\/]main\.ts$/.test(process.argv[1]);
 if (isEntry) {
+  // A closed pipe (`kern props f | head`) ends output quietly.
+  process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+    if (e.code === 'EPIPE') process.exit(0);
+  });
   main(process.argv.slice(2)).then((code) => {
     process.exitCode = code;
   });
