@@ -1,0 +1,136 @@
+/**
+ * `npm run bench`: speed figures measured in one process and compared as ratios, so the
+ * machine's speed cancels out. The last line is one JSON object with every figure.
+ *
+ * Targets (issue: engine): props_ratio_to_array_pass ≤ 3, props_scaling_1e5_to_1e6 ≤ 12,
+ * doc50_eval_ms well under 8; (issue: editor): drag_frame_p95_ms ≤ 16.7.
+ */
+import { existsSync } from 'node:fs';
+import { booleanRegions } from '../src/boolean';
+import { contourFrom, type Region } from '../src/geometry/contour';
+import { polygonMoments } from '../src/moments/kernel';
+import { createEvaluator, evaluateDocument } from '../src';
+import { fiftyShapeDocument } from './doc50';
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.floor(s.length / 2)];
+}
+function p95(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.min(s.length - 1, Math.floor(0.95 * s.length))];
+}
+
+/**
+ * Time (ms) of fn over enough repetitions to pass `minMs`, after a warm-up: the median, or the
+ * minimum for the tight kernel loops, whose minimum is the repeatable figure (anything above it
+ * is other work on the machine).
+ */
+function time(fn: () => void, minMs = 200, minReps = 5, stat: 'median' | 'min' = 'median'): number {
+  for (let i = 0; i < 3; i++) fn();
+  const samples: number[] = [];
+  const start = performance.now();
+  while (samples.length < minReps || performance.now() - start < minMs) {
+    const t = performance.now();
+    fn();
+    samples.push(performance.now() - t);
+  }
+  return stat === 'min' ? Math.min(...samples) : median(samples);
+}
+
+/** A wavy closed outline with n vertices (star-shaped, so simple). */
+function wavy(n: number, cx = 0, cy = 0, r = 100, phase = 0): Float64Array {
+  const xy = new Float64Array(2 * n);
+  for (let i = 0; i < n; i++) {
+    const t = (2 * Math.PI * i) / n;
+    const rr = r * (1 + 0.1 * Math.sin(7 * t + phase));
+    xy[2 * i] = cx + rr * Math.cos(t);
+    xy[2 * i + 1] = cy + rr * Math.sin(t);
+  }
+  return xy;
+}
+
+let sink = 0;
+const result: Record<string, number | string> = {};
+
+// 1. Property kernel against one plain pass over the same coordinates.
+const kernel: Record<number, number> = {};
+for (const n of [1e3, 1e4, 1e5, 1e6]) {
+  const xy = wavy(n);
+  const tKernel = time(
+    () => {
+      sink += polygonMoments(xy).m20;
+    },
+    300,
+    10,
+    'min',
+  );
+  const tRead = time(
+    () => {
+      let s = 0;
+      for (let i = 0; i < xy.length; i++) s += xy[i];
+      sink += s;
+    },
+    300,
+    10,
+    'min',
+  );
+  kernel[n] = tKernel;
+  result[`props_ms_${n.toExponential().replace('+', '')}`] = +tKernel.toFixed(4);
+  if (n === 1e6) result.props_ratio_to_array_pass = +(tKernel / tRead).toFixed(3);
+  console.log(`kernel n=${n}: ${tKernel.toFixed(3)} ms, read-once ${tRead.toFixed(3)} ms, ratio ${(tKernel / tRead).toFixed(2)}`);
+}
+result.props_scaling_1e5_to_1e6 = +(kernel[1e6] / kernel[1e5]).toFixed(3);
+
+// 2. Booleans of two 1e4-vertex outlines.
+const a: Region = [contourFrom(wavy(1e4, 0, 0, 100, 0))];
+const b: Region = [contourFrom(wavy(1e4, 40, 10, 90, 1.3))];
+result.union_1e4_ms = +time(() => {
+  sink += booleanRegions(a, [b], 'union').length;
+}).toFixed(3);
+result.difference_1e4_ms = +time(() => {
+  sink += booleanRegions(a, [b], 'difference').length;
+}).toFixed(3);
+console.log(`union 1e4: ${result.union_1e4_ms} ms, difference 1e4: ${result.difference_1e4_ms} ms`);
+
+// 3. Full evaluation of the 50-shape document (cold: a fresh evaluator each time), and the
+//    incremental re-evaluation a drag frame costs (one shape moved per frame).
+const doc = fiftyShapeDocument();
+result.doc50_eval_ms = +time(() => {
+  sink += evaluateDocument(doc).props?.area ?? 0;
+}, 1000).toFixed(3);
+{
+  const ev = createEvaluator();
+  ev.evaluate(doc);
+  const frames: number[] = [];
+  const idx = doc.shapes.findIndex((s) => s.id === 'i3');
+  for (let f = 0; f < 240; f++) {
+    const moved = doc.shapes.slice();
+    const s = moved[idx];
+    if (s.type !== 'i-beam') throw new Error('benchmark document changed');
+    moved[idx] = { ...s, at: [s.at[0] + 40 * Math.sin(f / 20), s.at[1] + 5 * Math.cos(f / 30)] };
+    const t = performance.now();
+    sink += ev.evaluate({ ...doc, shapes: moved }).props?.area ?? 0;
+    frames.push(performance.now() - t);
+  }
+  result.doc50_drag_eval_median_ms = +median(frames.slice(20)).toFixed(3);
+  result.doc50_drag_eval_p95_ms = +p95(frames.slice(20)).toFixed(3);
+}
+console.log(`doc50: cold ${result.doc50_eval_ms} ms, drag frame median ${result.doc50_drag_eval_median_ms} ms, p95 ${result.doc50_drag_eval_p95_ms} ms`);
+
+// 4. Browser figure: Playwright drags a shape of the 50-shape section in headless Chromium.
+const dragBench = new URL('../e2e/drag-bench.mjs', import.meta.url);
+if (existsSync(dragBench)) {
+  try {
+    const mod = await import(dragBench.href);
+    const p = await mod.measureDragFrames();
+    result.drag_frame_p95_ms = +Number(p.p95 ?? p).toFixed(3);
+    console.log(`browser drag: p95 frame ${result.drag_frame_p95_ms} ms`);
+  } catch (e) {
+    result.drag_frame_error = String(e instanceof Error ? e.message : e);
+    console.log(`browser drag: failed: ${result.drag_frame_error}`);
+  }
+}
+
+if (sink === 42) console.log('');
+console.log(JSON.stringify(result));
