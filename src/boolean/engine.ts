@@ -395,27 +395,32 @@ function pieceMid(c: Carrier, px: number, py: number, qx: number, qy: number): [
 }
 
 /**
- * Several carriers join p and q (a sliver thinner than a chord, or coincident edges): the true
- * boundary has the result on its left. Compare each pair at the middle of the sliver between them.
+ * Several carriers join p and q (a sliver thinner than a chord, coincident edges, or an arc and its
+ * own chord): the true boundary has the result just on its left and not on its right. Each
+ * candidate is probed at the middle of its piece, closer to it than to any other candidate.
  */
 function resolveTie(ctx: Ctx, cands: number[], px: number, py: number, qx: number, qy: number): number {
   const cs = ctx.carriers;
-  let best = cands[0];
-  let [bx, by] = pieceMid(cs[best], px, py, qx, qy);
-  for (let k = 1; k < cands.length; k++) {
-    const c = cands[k];
-    const [mx, my] = pieceMid(cs[c], px, py, qx, qy);
-    if (Math.hypot(mx - bx, my - by) <= 100 * ctx.eps) continue; // same geometry
-    const sx = (bx + mx) / 2, sy = (by + my) / 2;
-    const inside = classify(ctx, sx, sy);
-    const leftOfBest = (qx - px) * (sy - by) - (qy - py) * (sx - bx) > 0;
-    if (inside !== leftOfBest) {
-      best = c;
-      bx = mx;
-      by = my;
+  const L = Math.hypot(qx - px, qy - py);
+  if (!(L > 0)) return cands[0];
+  const nx = -(qy - py) / L, ny = (qx - px) / L; // left normal; the tangent at a piece middle is parallel to q - p
+  const mids = cands.map((c) => pieceMid(cs[c], px, py, qx, qy));
+  let fallback = -1;
+  for (let k = 0; k < cands.length; k++) {
+    const [mx, my] = mids[k];
+    let delta = 0.25 * L;
+    for (let o = 0; o < cands.length; o++) {
+      if (o === k) continue;
+      const d = Math.hypot(mids[o][0] - mx, mids[o][1] - my);
+      if (d > 100 * ctx.eps) delta = Math.min(delta, 0.25 * d);
     }
+    if (!(delta > 10 * ctx.eps)) continue;
+    const left = classify(ctx, mx + delta * nx, my + delta * ny);
+    const right = classify(ctx, mx - delta * nx, my - delta * ny);
+    if (left && !right) return cands[k];
+    if (fallback < 0 && left !== right) fallback = k;
   }
-  return best;
+  return cands[fallback >= 0 ? fallback : 0];
 }
 
 function carrierTol(ctx: Ctx, c: Carrier): number {
@@ -427,9 +432,12 @@ function assignEdge(ctx: Ctx, si: number[], sj: number[], px: number, py: number
   const common = intersectLists(si, sj);
   if (common.length === 1) return common[0];
   const pool = common.length ? common : unionLists(si, sj);
+  // The clipper edge is one chord: its ends and its middle lie on the carrier to chord accuracy
+  // (this tells an arc from a line that joins the same two points).
+  const mx = (px + qx) / 2, my = (py + qy) / 2;
   const fit = pool.filter((c) => {
     const t = carrierTol(ctx, cs[c]);
-    return distToCarrier(cs[c], px, py) <= t && distToCarrier(cs[c], qx, qy) <= t;
+    return distToCarrier(cs[c], px, py) <= t && distToCarrier(cs[c], qx, qy) <= t && distToCarrier(cs[c], mx, my) <= t;
   });
   if (fit.length === 1) return fit[0];
   if (fit.length > 1) return resolveTie(ctx, fit, px, py, qx, qy);
