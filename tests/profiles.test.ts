@@ -455,10 +455,10 @@ describe('placement', () => {
     }
   });
 
-  it('copies id, op, name and material; holes get derived ids', () => {
-    const { outer, holes } = profileToPaths({ id: 'T1', type: 'rect-tube', at: [0, 0], width: 60, height: 40, wall: 4, outerRadius: 8, op: 'subtract', name: 'Box', material: 'Steel' });
-    expect(outer).toMatchObject({ id: 'T1', type: 'path', op: 'subtract', name: 'Box', material: 'Steel' });
-    expect(holes[0]).toMatchObject({ id: 'T1:hole0', type: 'path', op: 'subtract', name: 'Box', material: 'Steel' });
+  it('copies id, op and name; holes get derived ids', () => {
+    const { outer, holes } = profileToPaths({ id: 'T1', type: 'rect-tube', at: [0, 0], width: 60, height: 40, wall: 4, outerRadius: 8, op: 'subtract', name: 'Box'});
+    expect(outer).toMatchObject({ id: 'T1', type: 'path', op: 'subtract', name: 'Box' });
+    expect(holes[0]).toMatchObject({ id: 'T1:hole0', type: 'path', op: 'subtract', name: 'Box' });
     const plain = profileToPaths({ id: 'R', type: 'rectangle', at: [0, 0], width: 1, height: 1 }).outer;
     expect(Object.keys(plain).sort()).toEqual(['id', 'segments', 'start', 'type']);
   });

@@ -18,7 +18,7 @@ import type { PathSegment, PathShape, Point, ProfileShape } from './types';
 
 export type ProfileType = ProfileShape['type'];
 type ProfileOf<T extends ProfileType> = Extract<ProfileShape, { type: T }>;
-type NonDimensionKey = 'id' | 'type' | 'name' | 'op' | 'material' | 'at' | 'rotation' | 'mirror';
+type NonDimensionKey = 'id' | 'type' | 'name' | 'op' | 'at' | 'rotation' | 'mirror';
 
 /** The numeric dimension fields of one profile type (everything except identity and placement). */
 export type ProfileDimensions<T extends ProfileType> = Omit<ProfileOf<T>, NonDimensionKey>;
@@ -41,9 +41,9 @@ export interface ProfileIssue {
 }
 
 export interface ProfilePaths {
-  /** The outer boundary, CCW, carrying the profile's id, op, name and material. */
+  /** The outer boundary, CCW, carrying the profile's id, op and name. */
   outer: PathShape;
-  /** Holes, CW, with ids `<id>:hole<k>` and the same op, name and material as the outer path. */
+  /** Holes, CW, with ids `<id>:hole<k>` and the same op and name as the outer path. */
   holes: PathShape[];
 }
 
@@ -526,7 +526,6 @@ function toPathShape(p: ProfileShape, id: string, loop: Loop): PathShape {
   const out: PathShape = { id, type: 'path', start: loop.start, segments: loop.segments };
   if (p.name !== undefined) out.name = p.name;
   if (p.op !== undefined) out.op = p.op;
-  if (p.material !== undefined) out.material = p.material;
   return out;
 }
 

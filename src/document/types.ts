@@ -22,8 +22,6 @@ interface ShapeBase {
   name?: string;
   /** How the shape combines with the region built so far; default add. */
   op?: Op;
-  /** Optional material name (see SectionDocument.materials). */
-  material?: string;
 }
 
 export interface PolygonShape extends ShapeBase {
@@ -150,14 +148,6 @@ export type ProfileShape =
 export type Shape = PolygonShape | CircleShape | PathShape | ProfileShape;
 export type ShapeType = Shape['type'];
 
-export interface Material {
-  name: string;
-  /** Young's modulus in any consistent unit; ratios to the reference give the modular ratio. */
-  E?: number;
-  /** Density in kg/m³, for weight per length. */
-  density?: number;
-}
-
 export interface TitleBlock {
   project?: string;
   section?: string;
@@ -172,8 +162,7 @@ export interface SectionDocument {
   version: 1;
   units: Units;
   shapes: Shape[];
-  /** Optional: named section, title block and materials. */
+  /** Optional: the section's name and the report's title block. */
   name?: string;
   title?: TitleBlock;
-  materials?: Material[];
 }

@@ -80,7 +80,6 @@ export function validateShape(s: unknown, path: string): Issue[] {
   if (!isObj(s)) return [{ path, message: 'a shape must be an object' }];
   if (typeof s.id !== 'string' || s.id.trim() === '') out.push({ path: `${path}.id`, message: 'every shape needs a non-empty string id' });
   if (s.name !== undefined && typeof s.name !== 'string') out.push({ path: `${path}.name`, message: 'name must be text' });
-  if (s.material !== undefined && typeof s.material !== 'string') out.push({ path: `${path}.material`, message: 'material must be a name (text)' });
   if (s.op !== undefined && !(OPS as readonly unknown[]).includes(s.op)) {
     out.push({ path: `${path}.op`, message: `unknown operation ${fmtNum(s.op)}; use one of ${OPS.join(', ')}` });
   }
@@ -241,17 +240,6 @@ export function validateDocument(value: unknown): DocResult {
   if (doc.title !== undefined) {
     if (!isObj(doc.title)) errors.push({ path: 'title', message: 'title must be an object of text fields' });
     else for (const [k, v] of Object.entries(doc.title)) if (typeof v !== 'string') errors.push({ path: `title.${k}`, message: 'must be text' });
-  }
-  if (doc.materials !== undefined) {
-    if (!Array.isArray(doc.materials)) errors.push({ path: 'materials', message: 'materials must be a list' });
-    else
-      doc.materials.forEach((m, k) => {
-        if (!isObj(m) || typeof m.name !== 'string') errors.push({ path: `materials[${k}]`, message: 'a material needs a name' });
-        else {
-          checkNumber(m.E, `materials[${k}].E`, errors, { optional: true, positive: true, name: 'E' });
-          checkNumber(m.density, `materials[${k}].density`, errors, { optional: true, positive: true, name: 'density' });
-        }
-      });
   }
   if (errors.length) return { ok: false, errors, warnings };
   return { ok: true, doc: doc as unknown as SectionDocument, warnings };
