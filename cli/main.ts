@@ -7,7 +7,9 @@ import {
   cutSection,
   evaluateDocument,
   formatIssue,
+  formatNumber,
   formatProperty,
+  inertiaAboutAxis,
   parseDocument,
   PROPERTY_CATALOG,
   type Evaluation,
@@ -20,6 +22,9 @@ const USAGE = `Usage:
   kern cut FILE (--y VALUE | --x VALUE) [--json]
                                            width, area, centroid and Q of the part above y = VALUE
                                            (or right of x = VALUE)
+  kern inertia FILE --through X,Y --angle DEG [--json]
+                                           moment of inertia about the axis through (X, Y) at DEG
+                                           degrees from +x (parallel-axis transfer)
   kern report FILE --out report.html [--pdf out.pdf]
 Options: --units U  (mm, cm, m, in, ft) for a DXF file that does not state its units`;
 
@@ -175,6 +180,19 @@ export async function main(argv: string[]): Promise<number> {
           ]),
         );
       }
+      return 0;
+    }
+    if (cmd === 'inertia') {
+      const a = parseArgs(rest, ['through', 'angle', 'units']);
+      const through = String(a.flags.get('through') ?? '0,0').split(',').map((v) => (v.trim() === '' ? NaN : Number(v)));
+      const angle = Number(a.flags.get('angle') ?? 0);
+      if (through.length !== 2 || !through.every(Number.isFinite)) throw new UsageError('--through needs two numbers, e.g. --through 0,12.5');
+      if (!Number.isFinite(angle)) throw new UsageError('--angle needs a number of degrees');
+      const r = await evaluateFile(a.positional[0], a.flags.get('units') as string | undefined);
+      if (!r) return 2;
+      const I = inertiaAboutAxis(r.props, through[0], through[1], (angle * Math.PI) / 180);
+      if (a.flags.has('json')) out(JSON.stringify({ through: { x: through[0], y: through[1] }, angle, I }, null, 2));
+      else out(`I about the axis through (${through[0]}, ${through[1]}) at ${angle}°: ${formatNumber(I)} ${r.doc.units}⁴`);
       return 0;
     }
     if (cmd === 'report') {

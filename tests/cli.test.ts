@@ -74,3 +74,14 @@ describe('kern cut', () => {
     expect(kern('frobnicate').code).toBe(2);
   });
 });
+
+describe('kern inertia', () => {
+  it('transfers to a given axis', () => {
+    // Base edge of the plate: I = bh³/3 for the plate minus the bore's πr⁴/4 + A d²
+    // (Gere & Goodno, Sec. 12.5, parallel-axis theorem).
+    const r = kern('inertia', 'tests/fixtures/plate-with-bore.json', '--through', '0,0', '--angle', '0', '--json');
+    expect(r.code).toBe(0);
+    close(JSON.parse(r.out).I, (200 * 100 ** 3) / 3 - ((Math.PI * 20 ** 4) / 4 + Math.PI * 400 * 35 ** 2), 1e-12);
+    expect(kern('inertia', 'tests/fixtures/plate-with-bore.json', '--through', '1').code).toBe(2);
+  });
+});
