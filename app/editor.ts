@@ -1,0 +1,117 @@
+/**
+ * One editor instance: the store, the live results, the transient pointer state, the tools and
+ * the command context. Nothing here depends on React, so the tests build the same editor.
+ */
+import { createStore, type StoreApi } from 'zustand/vanilla';
+import { formatIssue, validateShape, type Point, type SectionDocument, type Shape } from '../src';
+import { registry } from './commands/commands';
+import type { CommandContext, FileIO } from './commands/registry';
+import { parsePointInput } from './expr';
+import { snapPointer } from './canvas/snap';
+import { commit } from './store/history';
+import { createLiveResults, type ResultsHandle } from './store/evaluation';
+import { createEditorStore, type EditorStore, type ToolId } from './store/store';
+import { newShapeId } from './shapes';
+import { CircleTool, PathTool, PolygonTool, ProfileTool, RectangleTool } from './tools/draw';
+import { SelectTool } from './tools/select';
+import type { Tool, ToolEnv, Transient } from './tools/types';
+
+export interface Editor {
+  store: EditorStore;
+  results: ResultsHandle;
+  transient: StoreApi<Transient>;
+  env: ToolEnv;
+  ctx: CommandContext;
+  tool(): Tool;
+  /** Run a command by name (the single entry point for toolbar, keyboard and tests). */
+  run(name: string, arg?: unknown): boolean;
+  /** Submit typed drawing input; returns an error message or null. */
+  type(text: string): string | null;
+  dispose(): void;
+}
+
+export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule?: (cb: () => void) => void } = {}): Editor {
+  const store = createEditorStore(doc);
+  const results = createLiveResults(store, opts.schedule);
+  const transient = createStore<Transient>()(() => ({ pointer: null, snap: null, draft: null, prompt: '', inputError: null, hoverHandle: null }));
+  const tools: Record<ToolId, Tool> = {
+    select: new SelectTool(),
+    rectangle: new RectangleTool(),
+    circle: new CircleTool(),
+    polygon: new PolygonTool(),
+    path: new PathTool(),
+    profile: new ProfileTool(),
+  };
+  const env: ToolEnv = {
+    store,
+    results,
+    transient,
+    snap(raw: Point, o = {}) {
+      const s = store.getState();
+      const r = snapPointer(raw, {
+        ev: results.evaluate(s.doc),
+        scale: s.scale,
+        settings: s.snap,
+        from: o.from,
+        exclude: o.exclude,
+        extra: o.extra,
+        forceOrtho: o.shift,
+      });
+      transient.setState({ snap: r });
+      return r;
+    },
+    addShape(partial) {
+      const s = store.getState();
+      const shape = { ...partial, id: partial.id ?? newShapeId(s.doc) } as Shape;
+      const issues = validateShape(shape, `shapes[${s.doc.shapes.length}]`);
+      if (issues.length) {
+        transient.setState({ inputError: `Not added: ${issues.map(formatIssue).join('; ')}` });
+        return false;
+      }
+      commit(store, { ...s.doc, shapes: [...s.doc.shapes, shape] }, [shape.id]);
+      transient.setState({ inputError: null });
+      return true;
+    },
+    message(text) {
+      transient.setState({ inputError: text });
+    },
+  };
+  const ctx: CommandContext = { store, evaluate: results.evaluate, io: opts.io };
+  const tool = () => tools[store.getState().tool];
+  const updatePrompt = () => transient.setState({ prompt: tool().prompt(env) });
+  updatePrompt();
+  // Switching tools abandons the half-finished shape of the previous one.
+  const unsub = store.subscribe((s, prev) => {
+    if (s.tool !== prev.tool) {
+      tools[prev.tool].reset(env);
+      transient.setState({ inputError: null });
+    }
+    if (s.tool !== prev.tool || s.pathArc !== prev.pathArc || s.profileType !== prev.profileType) updatePrompt();
+  });
+  const unsubT = transient.subscribe((t, prev) => {
+    if (t.draft !== prev.draft) {
+      const p = tool().prompt(env);
+      if (p !== t.prompt) transient.setState({ prompt: p });
+    }
+  });
+  return {
+    store,
+    results,
+    transient,
+    env,
+    ctx,
+    tool,
+    run: (name, arg) => registry.dispatch(ctx, name, arg),
+    type(text: string) {
+      const r = parsePointInput(text);
+      const err = r.ok ? tool().typed(env, r.input) : r.message;
+      transient.setState({ inputError: err, prompt: tool().prompt(env) });
+      return err;
+    },
+    dispose() {
+      unsub();
+      unsubT();
+      results.dispose();
+    },
+  };
+}

@@ -1,0 +1,108 @@
+/**
+ * The editor store: one vanilla zustand store made of four slices (document, selection, tool,
+ * view). No React here; React reads it through `useEditor` (app/store/hooks.ts), and module-level
+ * actions (history.ts, commands) write it.
+ *
+ * Derived results (the evaluation) are not stored here: they come from the evaluator, memoised
+ * by document identity (app/store/evaluation.ts).
+ */
+import { createStore, type StoreApi } from 'zustand/vanilla';
+import type { ProfileShape, SectionDocument } from '../../src';
+
+type ProfileType = ProfileShape['type'];
+
+export interface DocumentSlice {
+  /** The document on screen: during a gesture this is the preview. */
+  doc: SectionDocument;
+  /** Undo stack (oldest first) and redo stack (next redo last). */
+  past: SectionDocument[];
+  future: SectionDocument[];
+  /** Non-null while a gesture previews: the document before it began. */
+  gestureBase: SectionDocument | null;
+  /** Increments on every committed change (autosave listens to it). */
+  revision: number;
+}
+
+export interface SelectionSlice {
+  selected: string[];
+}
+
+export type ToolId = 'select' | 'rectangle' | 'circle' | 'polygon' | 'path' | 'profile';
+
+export interface SnapSettings {
+  grid: boolean;
+  vertex: boolean;
+  midpoint: boolean;
+  centre: boolean;
+  intersection: boolean;
+  /** Orthogonal constraint: the next point is horizontal or vertical from the previous one. */
+  ortho: boolean;
+}
+
+export interface ToolSlice {
+  tool: ToolId;
+  profileType: ProfileType;
+  snap: SnapSettings;
+  /** Arc mode of the path tool: the next two points are (through, end) of a three-point arc. */
+  pathArc: boolean;
+}
+
+export interface Overlays {
+  centroid: boolean;
+  principal: boolean;
+  fibres: boolean;
+  cut: boolean;
+}
+
+export interface Notice {
+  kind: 'error' | 'info';
+  title: string;
+  lines: string[];
+}
+
+export interface ViewSlice {
+  /** Pixels per document unit, and the screen position of the world origin (y up on screen means sy = oy − y·scale). */
+  scale: number;
+  ox: number;
+  oy: number;
+  width: number;
+  height: number;
+  overlays: Overlays;
+  /** World y of the horizontal cut line. */
+  cutAt: number | null;
+  notice: Notice | null;
+  reportOpen: boolean;
+}
+
+export type EditorState = DocumentSlice & SelectionSlice & ToolSlice & ViewSlice;
+export type EditorStore = StoreApi<EditorState>;
+
+export const HISTORY_LIMIT = 500;
+
+export function createEditorStore(doc: SectionDocument): EditorStore {
+  return createStore<EditorState>()(() => ({
+    // document slice
+    doc,
+    past: [],
+    future: [],
+    gestureBase: null,
+    revision: 0,
+    // selection slice
+    selected: [],
+    // tool slice
+    tool: 'select',
+    profileType: 'i-beam',
+    snap: { grid: true, vertex: true, midpoint: true, centre: true, intersection: true, ortho: false },
+    pathArc: false,
+    // view slice
+    scale: 2,
+    ox: 400,
+    oy: 400,
+    width: 800,
+    height: 600,
+    overlays: { centroid: true, principal: false, fibres: false, cut: false },
+    cutAt: null,
+    notice: null,
+    reportOpen: false,
+  }));
+}

@@ -1,0 +1,141 @@
+/** The top bar (file, history, report), the tool rail (tools, profiles, snapping, overlays) and the status bar (typed input). */
+import { useRef } from 'react';
+import { formatNumber, type ProfileShape } from '../../src';
+import { PROFILE_TYPE_LIST, SHAPE_KIND_LABEL } from '../shapes';
+import { useEditor, useEditorState, useTransient } from '../store/hooks';
+import { CommandButton } from './CommandButton';
+
+export function TopBar() {
+  const name = useEditorState((s) => s.doc.name);
+  return (
+    <header className="topbar">
+      <div className="brand">
+        <span className="brand-mark" aria-hidden>
+          ⌖
+        </span>
+        Kern
+      </div>
+      <div className="doc-name" title="Section name">
+        {name ?? 'Untitled section'}
+      </div>
+      <div className="group">
+        <CommandButton name="file.new">New</CommandButton>
+        <CommandButton name="file.open">Open…</CommandButton>
+        <CommandButton name="file.save">Save</CommandButton>
+        <CommandButton name="file.demo">Demo</CommandButton>
+      </div>
+      <div className="group">
+        <CommandButton name="undo" />
+        <CommandButton name="redo" />
+      </div>
+      <div className="spacer" />
+      <CommandButton name="report.open" className="primary">
+        Report
+      </CommandButton>
+    </header>
+  );
+}
+
+export function ToolRail() {
+  const editor = useEditor();
+  const tool = useEditorState((s) => s.tool);
+  const profileType = useEditorState((s) => s.profileType);
+  return (
+    <nav className="rail" aria-label="Tools">
+      <div className="rail-group">
+        <h3>Draw</h3>
+        <CommandButton name="tool.select" />
+        <CommandButton name="tool.rectangle" />
+        <CommandButton name="tool.circle" />
+        <CommandButton name="tool.polygon" />
+        <CommandButton name="tool.path" />
+        {tool === 'path' && <CommandButton name="path.arcMode" className="sub" />}
+      </div>
+      <div className="rail-group">
+        <h3>Profile</h3>
+        <select
+          data-testid="profile-type"
+          value={profileType}
+          onChange={(e) => editor.run('tool.profile', e.target.value as ProfileShape['type'])}
+          aria-label="Profile type"
+        >
+          {PROFILE_TYPE_LIST.map((t) => (
+            <option key={t} value={t}>
+              {SHAPE_KIND_LABEL[t]}
+            </option>
+          ))}
+        </select>
+        <CommandButton name="tool.profile" arg={profileType}>
+          Place profile
+        </CommandButton>
+      </div>
+      <div className="rail-group">
+        <h3>Snap</h3>
+        <CommandButton name="snap.grid" />
+        <CommandButton name="snap.geometry" />
+        <CommandButton name="snap.ortho" />
+      </div>
+      <div className="rail-group">
+        <h3>Show</h3>
+        <CommandButton name="view.centroid" />
+        <CommandButton name="view.principal" />
+        <CommandButton name="view.fibres" />
+        <CommandButton name="view.cut" />
+        <CommandButton name="view.fit" />
+      </div>
+    </nav>
+  );
+}
+
+export function StatusBar() {
+  const editor = useEditor();
+  const prompt = useTransient((t) => t.prompt);
+  const err = useTransient((t) => t.inputError);
+  const pointer = useTransient((t) => t.pointer);
+  const snap = useTransient((t) => t.snap);
+  const units = useEditorState((s) => s.doc.units);
+  const input = useRef<HTMLInputElement>(null);
+  const p = snap?.p ?? pointer;
+  return (
+    <footer className="statusbar">
+      <div className="coords" data-testid="coords">
+        {p ? `x ${formatNumber(p[0], 6)}  y ${formatNumber(p[1], 6)} ${units}` : '—'}
+      </div>
+      <div className="prompt" data-testid="prompt">
+        {prompt}
+      </div>
+      <input
+        ref={input}
+        id="typed-input"
+        data-testid="typed-input"
+        className={`typed${err ? ' invalid' : ''}`}
+        placeholder="type x, y · @dx, dy · length<angle"
+        spellCheck={false}
+        autoComplete="off"
+        onKeyDown={(e) => {
+          e.stopPropagation();
+          const el = e.currentTarget;
+          if (e.key === 'Enter') {
+            if (el.value.trim() === '') {
+              editor.tool().key(editor.env, 'enter');
+              editor.transient.setState({ prompt: editor.tool().prompt(editor.env) });
+              return;
+            }
+            const error = editor.type(el.value);
+            if (!error) el.value = '';
+          } else if (e.key === 'Escape') {
+            el.value = '';
+            editor.tool().key(editor.env, 'escape');
+            editor.transient.setState({ inputError: null, prompt: editor.tool().prompt(editor.env) });
+            el.blur();
+          }
+        }}
+      />
+      {err && (
+        <div className="input-error" role="alert" data-testid="input-error">
+          {err}
+        </div>
+      )}
+    </footer>
+  );
+}

@@ -1,0 +1,34 @@
+/** A toolbar button bound to a registry command: label, key hint, enabled and active state. */
+import type { ReactNode } from 'react';
+import { registry } from '../commands/commands';
+import { useEditor, useEditorState } from '../store/hooks';
+
+export function keyHint(keys: string[] | undefined): string {
+  if (!keys?.length) return '';
+  return keys[0]
+    .split('+')
+    .map((p) => (p === 'mod' ? 'Ctrl' : p === 'shift' ? 'Shift' : p === 'alt' ? 'Alt' : p.length === 1 ? p.toUpperCase() : p[0].toUpperCase() + p.slice(1)))
+    .join('+');
+}
+
+export function CommandButton({ name, arg, children, className }: { name: string; arg?: unknown; children?: ReactNode; className?: string }) {
+  const editor = useEditor();
+  const cmd = registry.get(name);
+  if (!cmd) throw new Error(`no command ${name}`);
+  const enabled = useEditorState(() => (cmd.enabled ? cmd.enabled(editor.ctx) : true));
+  const active = useEditorState(() => (cmd.active ? cmd.active(editor.ctx) : false));
+  const key = keyHint(cmd.keys);
+  const title = [cmd.hint ?? cmd.label, key && `(${key})`].filter(Boolean).join(' ');
+  return (
+    <button
+      className={`btn${active ? ' on' : ''}${className ? ' ' + className : ''}`}
+      data-command={name}
+      aria-pressed={cmd.active ? active : undefined}
+      disabled={!enabled}
+      title={title}
+      onClick={() => editor.run(name, arg)}
+    >
+      {children ?? cmd.label}
+    </button>
+  );
+}
