@@ -9,8 +9,8 @@
  * case. The cut width is the summed length of the closing pieces, Σ x_entry − Σ x_exit.
  */
 import type { Contour, Region } from '../geometry/contour';
-import { arcFromChord, translateRegion } from '../geometry/contour';
-import { regionMomentsAbout, regionReference, shiftMoments, type RawMoments } from './kernel';
+import { arcFromChord } from '../geometry/contour';
+import { addCircularSegment, regionReference, shiftMoments, type RawMoments } from './kernel';
 
 export interface HalfPlaneMoments extends RawMoments {
   /** Total length of the cut line inside the region (the width b at the cut). */
@@ -28,10 +28,11 @@ interface Piece {
 }
 
 /** Split segment i of contour c at the crossings of y = yc and push the pieces. */
-function splitSegment(c: Contour, i: number, yc: number, out: Piece[]): void {
+function splitSegment(c: Contour, i: number, ox: number, oy: number, out: Piece[]): void {
   const n = c.xy.length >> 1;
   const j = i + 1 === n ? 0 : i + 1;
-  const ax = c.xy[2 * i], ay = c.xy[2 * i + 1], bx = c.xy[2 * j], by = c.xy[2 * j + 1];
+  const yc = 0;
+  const ax = c.xy[2 * i] - ox, ay = c.xy[2 * i + 1] - oy, bx = c.xy[2 * j] - ox, by = c.xy[2 * j + 1] - oy;
   const b = c.bulge ? c.bulge[i] : 0;
   if (b === 0) {
     if ((ay - yc) * (by - yc) < 0) {
@@ -153,15 +154,14 @@ function splitFlatArc(ax: number, ay: number, bx: number, by: number, phi: numbe
  */
 export function momentsAbove(region: Region, yc: number): HalfPlaneMoments {
   const [ox] = regionReference(region);
-  const local = translateRegion(region, -ox, -yc);
   const acc = new Float64Array(6);
   let width = 0;
   const pieces: Piece[] = [];
-  for (const c of local) {
+  for (const c of region) {
     const n = c.xy.length >> 1;
     if (n < 2) continue;
     pieces.length = 0;
-    for (let i = 0; i < n; i++) splitSegment(c, i, 0, pieces);
+    for (let i = 0; i < n; i++) splitSegment(c, i, ox, yc, pieces);
     const m = pieces.length;
     for (let k = 0; k < m; k++) {
       const p = pieces[k];
@@ -207,12 +207,6 @@ const GL_W = [5 / 18, 8 / 18, 5 / 18];
  */
 function arcDx(x0: number, y0: number, x1: number, y1: number, phi: number, acc: Float64Array): void {
   lineDx(x0, y0, x1, y1, acc);
-  // Segment loop: arc a->b then chord b->a. Its exact area moments:
-  const seg = regionMomentsAbout([{ xy: Float64Array.of(x0, y0, x1, y1), bulge: Float64Array.of(Math.tan(phi / 4), 0) }], 0, 0);
-  acc[0] += seg.m00;
-  acc[1] += seg.m10;
-  acc[2] += seg.m01;
-  acc[3] += seg.m20;
-  acc[4] += seg.m02;
-  acc[5] += seg.m11;
+  // Plus the exact area moments of the segment loop (arc a->b, then chord b->a).
+  addCircularSegment(x0, y0, x1, y1, phi, acc);
 }

@@ -102,7 +102,7 @@ const GL8_W = [0.1012285362903763, 0.2223810344533745, 0.3137066458778873, 0.362
  * an analytic function whose nearest singularity lies at |y'| = h / sinα: 8-point Gauss–Legendre
  * integrates it to an error of order α¹⁶, i.e. to round-off, with nothing that can overflow.
  */
-function addCircularSegment(ax: number, ay: number, bx: number, by: number, phi: number, acc: Float64Array): void {
+export function addCircularSegment(ax: number, ay: number, bx: number, by: number, phi: number, acc: Float64Array): void {
   const dx = bx - ax, dy = by - ay;
   const L = Math.hypot(dx, dy);
   if (!(L > 0)) return;
