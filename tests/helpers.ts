@@ -42,7 +42,7 @@ export function close(actual: number, expected: number, tol = 1e-12, scale = 0):
   if (!(err <= bound)) {
     expect.fail(`expected ${expected}, got ${actual} (relative error ${err / Math.max(Math.abs(expected), scale, 1e-300)}, allowed ${tol})`);
   }
-  if (tol <= 1e-10) worst.value = Math.max(worst.value, err / Math.max(Math.abs(expected), scale, 1e-300));
+  if (tol <= 1e-9) worst.value = Math.max(worst.value, err / Math.max(Math.abs(expected), scale, 1e-300));
 }
 
 /** Largest relative error seen by `close` at tight tolerances in this test file. */
