@@ -429,23 +429,26 @@ function carrierTol(ctx: Ctx, c: Carrier): number {
 
 function assignEdge(ctx: Ctx, si: number[], sj: number[], px: number, py: number, qx: number, qy: number): number {
   const cs = ctx.carriers;
-  const common = intersectLists(si, sj);
-  if (common.length === 1) return common[0];
-  const pool = common.length ? common : unionLists(si, sj);
   // The clipper edge is one chord: its ends and its middle lie on the carrier to chord accuracy
   // (this tells an arc from a line that joins the same two points).
   const mx = (px + qx) / 2, my = (py + qy) / 2;
-  const fit = pool.filter((c) => {
+  const fits = (c: number): boolean => {
     const t = carrierTol(ctx, cs[c]);
-    return distToCarrier(cs[c], px, py) <= t && distToCarrier(cs[c], qx, qy) <= t && distToCarrier(cs[c], mx, my) <= t;
-  });
+    return distToCarrier(cs[c], mx, my) <= t && distToCarrier(cs[c], px, py) <= t && distToCarrier(cs[c], qx, qy) <= t;
+  };
+  let common = intersectLists(si, sj);
+  if (common.length === 1 && fits(common[0])) return common[0];
+  common = common.filter(fits);
+  // Collinear vertices dropped by clipper: the edge may span several carriers of one line.
+  const pool = common.length ? common : unionLists(si, sj);
+  const fit = common.length ? common : pool.filter(fits);
   if (fit.length === 1) return fit[0];
   if (fit.length > 1) return resolveTie(ctx, fit, px, py, qx, qy);
   // Nothing fits within tolerance: the carrier nearest to both ends (all carriers if no tags).
   const search = pool.length ? pool : cs.map((c) => c.id);
   let best = search[0], bd = Infinity;
   for (const c of search) {
-    const d = Math.max(distToCurve(cs[c], px, py), distToCurve(cs[c], qx, qy));
+    const d = Math.max(distToCurve(cs[c], px, py), distToCurve(cs[c], qx, qy), distToCurve(cs[c], mx, my));
     if (d < bd) {
       bd = d;
       best = c;
