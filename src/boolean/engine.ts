@@ -206,6 +206,8 @@ function intersectPair(ctx: Ctx, a: Carrier, b: Carrier): void {
     return;
   }
   if (a.kind === ARC && b.kind === ARC) refineNested(ctx, a, b);
+  if (a.kind === ARC) refineNearVertex(ctx, a, b);
+  if (b.kind === ARC) refineNearVertex(ctx, b, a);
   const pts = curveIntersections(a, b, eps);
   for (let k = 0; k < pts.length; k += 2) {
     let x = pts[k], y = pts[k + 1];
@@ -234,6 +236,22 @@ function refineNested(ctx: Ctx, a: Carrier, b: Carrier): void {
   if (!(gap > 0) || gap >= 2 * SAG_MAX * outer.r) return;
   const want = Math.max(gap / 2.5, SAG_FLOOR * outer.r);
   if (want < ctx.sag[outer.id]) ctx.sag[outer.id] = want;
+}
+
+/**
+ * A vertex of b just inside arc a (closer than a's chord sagitta) would poke out of a's chords.
+ * Refine a so that its chords pass inside the vertex.
+ */
+function refineNearVertex(ctx: Ctx, a: Carrier, b: Carrier): void {
+  for (let k = 0; k < 2; k++) {
+    const x = k === 0 ? b.ax : b.bx, y = k === 0 ? b.ay : b.by;
+    const gap = a.r - Math.hypot(x - a.cx, y - a.cy);
+    if (!(gap > ctx.eps) || gap >= 1.5 * ctx.sag[a.id]) continue;
+    const u = paramOf(a, x, y);
+    if (u < 0 || u > 1) continue;
+    const want = Math.max(gap / 2.5, SAG_FLOOR * a.r);
+    if (want < ctx.sag[a.id]) ctx.sag[a.id] = want;
+  }
 }
 
 /** Step 2: all pairwise contacts, with a sweep over x as the broad phase. */
