@@ -24,6 +24,11 @@ export interface Carrier {
   readonly phi: number;
   readonly t0: number;
   readonly tm: number;
+  /**
+   * Line only: the sweep of a nearly flat source arc (radius far beyond the extent) that is handled
+   * as its chord for topology; output pieces get their share of this sweep back. 0 for a true line.
+   */
+  flat: number;
   /** Length of the carrier (chord for a line, r*|phi| for an arc). */
   readonly len: number;
   /** Node ids of the start and end vertices. */
@@ -45,9 +50,9 @@ export function wrapAngle(d: number): number {
   return d;
 }
 
-export function makeLine(id: number, group: number, ax: number, ay: number, bx: number, by: number): Carrier {
+export function makeLine(id: number, group: number, ax: number, ay: number, bx: number, by: number, flat = 0): Carrier {
   return {
-    id, kind: LINE, group, ax, ay, bx, by, cx: 0, cy: 0, r: 0, phi: 0, t0: 0, tm: 0,
+    id, kind: LINE, group, ax, ay, bx, by, cx: 0, cy: 0, r: 0, phi: 0, t0: 0, tm: 0, flat,
     len: Math.hypot(bx - ax, by - ay), n0: -1, n1: -1,
     xmin: Math.min(ax, bx), xmax: Math.max(ax, bx), ymin: Math.min(ay, by), ymax: Math.max(ay, by),
   };
@@ -59,7 +64,7 @@ export function makeArc(
 ): Carrier {
   const t0 = Math.atan2(ay - cy, ax - cx);
   const c: Carrier = {
-    id, kind: ARC, group, ax, ay, bx, by, cx, cy, r, phi, t0, tm: t0 + phi / 2,
+    id, kind: ARC, group, ax, ay, bx, by, cx, cy, r, phi, t0, tm: t0 + phi / 2, flat: 0,
     len: r * Math.abs(phi), n0: -1, n1: -1,
     xmin: Math.min(ax, bx), xmax: Math.max(ax, bx), ymin: Math.min(ay, by), ymax: Math.max(ay, by),
   };

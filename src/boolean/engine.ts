@@ -30,6 +30,8 @@ const MAX_STEP = 0.125;
 const SAG_MAX = 1 - Math.cos(MAX_STEP / 2);
 /** Smallest relative sagitta used when refining near-tangent arcs (caps the chord count). */
 const SAG_FLOOR = 1e-6;
+/** Arcs with a radius above this multiple of the extent are traced as their chords. */
+const FLAT_RADIUS = 1e5;
 /** Exact-geometry tolerance relative to the extent: points closer than this are one point. */
 const REL_EPS = 1e-10;
 
@@ -40,6 +42,7 @@ export interface SourceGroup {
 
 interface Ctx {
   mode: Mode;
+  ext: number;
   eps: number;
   unit: number;
   ox: number;
@@ -143,12 +146,14 @@ function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
         const b = vb[i];
         const id = ctx.carriers.length;
         let car: Carrier;
-        // An arc whose sagitta is below the tolerance is a line.
-        if (b !== 0 && Math.abs(b) * L * 0.5 > eps) {
-          const phi = 4 * Math.atan(b);
+        // A nearly flat arc (radius far beyond the extent, where centre-based formulas lose
+        // their digits) is traced as its chord and gets its sweep back on output.
+        const phi = b !== 0 ? 4 * Math.atan(b) : 0;
+        const rr = phi !== 0 ? L / (2 * Math.sin(Math.abs(phi) / 2)) : Infinity;
+        if (phi !== 0 && rr <= FLAT_RADIUS * ctx.ext) {
           const { cx, cy, r } = arcFromChord(ax, ay, bx, by, phi);
           car = makeArc(id, g.group, ax, ay, bx, by, cx, cy, r, phi);
-        } else car = makeLine(id, g.group, ax, ay, bx, by);
+        } else car = makeLine(id, g.group, ax, ay, bx, by, phi);
         car.n0 = nodes[i];
         car.n1 = nodes[j];
         ctx.carriers.push(car);
@@ -602,7 +607,8 @@ function tracePath(ctx: Ctx, path: IntPoint[]): Contour | null {
     const c = ctx.carriers[runC[k]];
     oxy.push(ax, ay);
     if (c.kind === LINE) {
-      ob.push(0);
+      if (c.flat === 0) ob.push(0);
+      else ob.push(Math.tan((c.flat * (paramOf(c, bx, by) - paramOf(c, ax, ay))) / 4));
       continue;
     }
     const u0 = paramOf(c, ax, ay), u1 = paramOf(c, bx, by);
@@ -646,7 +652,7 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
   if (!(ext > 0) || !Number.isFinite(ext)) return { region: [], contact: false };
   const scale = INT_RANGE / ext;
   const ctx: Ctx = {
-    mode, eps: REL_EPS * ext, unit: 1 / scale, ox: (xmin + xmax) / 2, oy: (ymin + ymax) / 2, scale,
+    mode, ext, eps: REL_EPS * ext, unit: 1 / scale, ox: (xmin + xmax) / 2, oy: (ymin + ymax) / 2, scale,
     carriers: [], loops: [], nx: [], ny: [], ncar: [], parent: [], splits: [], sag: [], contact: false,
     rx: [], ry: [], rX: [], rY: [], rExact: [], rCar: [], zf: [],
   };
