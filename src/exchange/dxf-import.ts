@@ -161,16 +161,26 @@ function importUnsafe(text: string, opts: DxfImportOptions): DxfImport {
       else problems.push({ source, message: `${ent.type} entities are not supported; draw the outline with lines, arcs, circles or polylines`, points: [] });
       continue;
     }
+    if (ent.damage) {
+      problems.push({ source, message: `could not be read: ${ent.damage}`, points: [] });
+      continue;
+    }
     let parsed: ParsedEntity | undefined;
     try {
       const dxf = new DxfParser().parse(ent.text) as unknown as { entities?: ParsedEntity[] } | null;
       parsed = dxf?.entities?.[0];
     } catch (e) {
-      problems.push({ source, message: `could not be read (${e instanceof Error ? e.message : String(e)})`, points: [] });
+      const why = e instanceof Error ? e.message : String(e);
+      const text = /n must be greater than 0/.test(why) ? 'it has no vertices (group 90 is missing or 0)' : why;
+      problems.push({ source, message: `could not be read: ${text}`, points: [] });
       continue;
     }
     if (!parsed) {
       problems.push({ source, message: 'could not be read', points: [] });
+      continue;
+    }
+    if (ent.type === 'LWPOLYLINE' && (parsed.vertices?.length ?? 0) !== ent.vertexGroups) {
+      problems.push({ source, message: `could not be read: it has ${ent.vertexGroups} vertices but its vertex count (group 90) says otherwise`, points: entityPoints(parsed) });
       continue;
     }
     try {

@@ -26,8 +26,12 @@ export interface ScannedEntity {
   /** Extrusion direction (group codes 210/220/230); default (0, 0, 1). */
   extrusion: [number, number, number];
   paperSpace: boolean;
-  /** The entity alone (with its VERTEX and SEQEND records) as DXF text for dxf-parser; null for kinds it skips. */
+  /** The entity alone (with its VERTEX and SEQEND records) as DXF text for dxf-parser; null for kinds not parsed. */
   text: string | null;
+  /** Why the entity cannot be parsed safely (it is then reported, not parsed), or null. */
+  damage: string | null;
+  /** Number of vertex x groups (code 10) read, for checking LWPOLYLINE vertex counts. */
+  vertexGroups: number;
 }
 
 export interface DxfScan {
@@ -38,11 +42,11 @@ export interface DxfScan {
 
 export type DxfScanResult = ({ ok: true } & DxfScan) | { ok: false; error: string };
 
-/** Entity kinds dxf-parser 1.1.2 parses (registerDefaultEntityHandlers). */
-export const PARSER_ENTITY_TYPES = new Set([
-  '3DFACE', 'ARC', 'ATTDEF', 'CIRCLE', 'DIMENSION', 'ELLIPSE', 'INSERT', 'LINE', 'LWPOLYLINE',
-  'MTEXT', 'POINT', 'POLYLINE', 'SOLID', 'SPLINE', 'TEXT',
-]);
+/**
+ * Entity kinds handed to dxf-parser 1.1.2: the outline kinds and the curve kinds whose points help
+ * to show the user what was left out. Annotation kinds are never parsed.
+ */
+export const PARSER_ENTITY_TYPES = new Set(['ARC', 'CIRCLE', 'LINE', 'LWPOLYLINE', 'POLYLINE', 'ELLIPSE', 'SPLINE', 'INSERT']);
 
 /** Group codes that have a value type in the DXF reference (others make dxf-parser log). */
 function knownCode(c: number): boolean {
@@ -186,13 +190,22 @@ function readEntities(groups: DxfGroup[], from: number, to: number, entities: Sc
       }
       finish();
       passing = PARSER_ENTITY_TYPES.has(g.value);
-      current = { type: g.value, handle: null, layer: '0', line: g.line, extrusion: [0, 0, 1], paperSpace: false, text: passing ? '' : null };
+      current = {
+        type: g.value, handle: null, layer: '0', line: g.line, extrusion: [0, 0, 1], paperSpace: false,
+        text: passing ? '' : null, damage: null, vertexGroups: 0,
+      };
       entities.push(current);
       if (g.value === 'POLYLINE') openPolyline = current;
       if (passing) out.push('0', g.value);
       continue;
     }
     if (current) {
+      // dxf-parser's LWPOLYLINE reader loops forever when a vertex x (10) is not followed by its y (20).
+      if (current.type === 'LWPOLYLINE' && g.code === 10) {
+        current.vertexGroups++;
+        const next = groups[i + 1];
+        if ((!next || next.code !== 20) && !current.damage) current.damage = `its vertex on line ${g.line} has no y coordinate (group 20)`;
+      }
       if (g.code === 5 && current.handle === null) current.handle = g.value;
       else if (g.code === 8) current.layer = g.value;
       else if (g.code === 67) current.paperSpace = g.value === '1';

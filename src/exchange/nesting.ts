@@ -3,8 +3,9 @@
  * material (even depth) or a hole (odd depth), as in the even–odd fill rule of drawings.
  *
  * Containment is decided exactly on lines and arcs (no sampling of the boundary): the winding
- * number of a point is the total angle its boundary subtends, where an arc subtends the angle of
- * its chord plus one full turn when the point lies in the circular segment between chord and arc.
+ * number of a point is the total angle its boundary subtends. An arc seen from outside its circle
+ * subtends the angle of its chord; seen from inside, the angle from its start to its end in the
+ * arc's own sense of turning.
  * Each loop is tested at a dozen points on its own boundary (vertices and segment midpoints);
  * points that lie on the other loop's boundary are not counted.
  */
@@ -14,24 +15,29 @@ import { arcFromChord, angleInSweep, contourVertexCount, regionBounds, type Boun
 /** Winding number of contour c about (px, py); the point must not lie on c. */
 export function windingNumber(c: Contour, px: number, py: number): number {
   const n = contourVertexCount(c);
+  const TWO_PI = 2 * Math.PI;
   let total = 0;
   for (let i = 0; i < n; i++) {
     const j = (i + 1) % n;
     const ax = c.xy[2 * i] - px, ay = c.xy[2 * i + 1] - py;
     const bx = c.xy[2 * j] - px, by = c.xy[2 * j + 1] - py;
-    total += Math.atan2(ax * by - ay * bx, ax * bx + ay * by);
     const b = c.bulge ? c.bulge[i] : 0;
     if (b !== 0) {
       const phi = 4 * Math.atan(b);
       const { cx, cy, r } = arcFromChord(ax, ay, bx, by, phi);
-      // Inside the circle and on the arc's side of the chord: inside the circular segment.
       if (Math.hypot(cx, cy) < r) {
-        const side = (bx - ax) * (0 - ay) - (by - ay) * (0 - ax); // > 0: origin left of a->b
-        if ((phi > 0 && side < 0) || (phi < 0 && side > 0)) total += phi > 0 ? 2 * Math.PI : -2 * Math.PI;
+        // Seen from a point inside the circle, the direction to a point moving along the arc
+        // turns monotonically with it: the arc subtends the angle from a to b in its own sense.
+        let d = Math.atan2(by, bx) - Math.atan2(ay, ax);
+        d = ((d % TWO_PI) + TWO_PI) % TWO_PI;
+        total += phi > 0 ? d : d - TWO_PI;
+        continue;
       }
+      // Outside the circle the arc subtends the same angle as its chord.
     }
+    total += Math.atan2(ax * by - ay * bx, ax * bx + ay * by);
   }
-  return Math.round(total / (2 * Math.PI));
+  return Math.round(total / TWO_PI);
 }
 
 /** Distance from (px, py) to the boundary of c. */
