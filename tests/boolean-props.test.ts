@@ -162,12 +162,20 @@ describe('straight-sided polygons against polygon-clipping', () => {
           difference: regionMoments(booleanRegions([toContour(P)], [[toContour(Q)], [toContour(R)]], 'difference')).m00,
           intersection: regionMoments(booleanRegions([toContour(P)], [[toContour(Q)], [toContour(R)]], 'intersection')).m00,
         };
-        const qr = polygonClipping.union(toPc(Q), toPc(R));
-        const ref = {
-          union: pcArea(polygonClipping.union(toPc(P), toPc(Q), toPc(R))),
-          difference: pcArea(polygonClipping.difference(toPc(P), qr)),
-          intersection: pcArea(polygonClipping.intersection(toPc(P), qr)),
-        };
+        let ref: Record<'union' | 'difference' | 'intersection', number>;
+        try {
+          const qr = polygonClipping.union(toPc(Q), toPc(R));
+          ref = {
+            union: pcArea(polygonClipping.union(toPc(P), toPc(Q), toPc(R))),
+            difference: pcArea(polygonClipping.difference(toPc(P), qr)),
+            intersection: pcArea(polygonClipping.intersection(toPc(P), qr)),
+          };
+        } catch {
+          // polygon-clipping 0.15.7 sometimes fails to close a ring on degenerate grid input
+          // ("Unable to complete output ring"); such a sample has no reference and is discarded.
+          fc.pre(false);
+          return;
+        }
         for (const k of ['union', 'difference', 'intersection'] as const) {
           expect(Math.abs(ours[k] - ref[k])).toBeLessThan(1e-9 * 9); // polygon-clipping, round-off
         }

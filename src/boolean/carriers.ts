@@ -29,6 +29,17 @@ export interface Carrier {
    * as its chord for topology; output pieces get their share of this sweep back. 0 for a true line.
    */
   flat: number;
+  /**
+   * Implicit form, stable for any radius (also for lines and flat arcs):
+   * f(P) = ks (|P - M|^2 - L^2/4) + kc (P - M).n, zero on the curve; M the chord middle, n the unit
+   * normal towards the bulge, ks = sin(a)/L, kc = cos(a), a = |sweep|/2 (ks = 0 for a line).
+   */
+  mx: number;
+  my: number;
+  nx: number;
+  ny: number;
+  ks: number;
+  kc: number;
   /** Length of the carrier (chord for a line, r*|phi| for an arc). */
   readonly len: number;
   /** Node ids of the start and end vertices. */
@@ -50,9 +61,45 @@ export function wrapAngle(d: number): number {
   return d;
 }
 
+function implicitForm(ax: number, ay: number, bx: number, by: number, phi: number) {
+  const dx = bx - ax, dy = by - ay;
+  const L = Math.hypot(dx, dy) || 1;
+  const sg = phi >= 0 ? 1 : -1;
+  const a = Math.abs(phi) / 2;
+  return { mx: (ax + bx) / 2, my: (ay + by) / 2, nx: (sg * dy) / L, ny: (-sg * dx) / L, ks: Math.sin(a) / L, kc: Math.cos(a) };
+}
+
+/** The implicit function of c at (x, y) and its gradient. */
+export function implicitAt(c: Carrier, x: number, y: number): [number, number, number] {
+  const px = x - c.mx, py = y - c.my;
+  const hl = Math.hypot(c.bx - c.ax, c.by - c.ay) / 2;
+  const f = c.ks * (px * px + py * py - hl * hl) + c.kc * (px * c.nx + py * c.ny);
+  return [f, 2 * c.ks * px + c.kc * c.nx, 2 * c.ks * py + c.kc * c.ny];
+}
+
+/**
+ * Newton polish of a common point of a and b (their true curves, flat arcs included), so the
+ * result keeps full precision whatever the radii. Returns the input when the curves are tangent.
+ */
+export function polishIntersection(a: Carrier, b: Carrier, x: number, y: number): [number, number] {
+  for (let it = 0; it < 4; it++) {
+    const [fa, gax, gay] = implicitAt(a, x, y);
+    const [fb, gbx, gby] = implicitAt(b, x, y);
+    const det = gax * gby - gay * gbx;
+    if (!(Math.abs(det) > 1e-8 * Math.hypot(gax, gay) * Math.hypot(gbx, gby))) break;
+    const dx = (-fa * gby + fb * gay) / det, dy = (-gax * fb + gbx * fa) / det;
+    if (!Number.isFinite(dx) || !Number.isFinite(dy)) break;
+    x += dx;
+    y += dy;
+    if (Math.abs(dx) + Math.abs(dy) <= 1e-17 * (Math.abs(x) + Math.abs(y) + 1e-300)) break;
+  }
+  return [x, y];
+}
+
 export function makeLine(id: number, group: number, ax: number, ay: number, bx: number, by: number, flat = 0): Carrier {
   return {
     id, kind: LINE, group, ax, ay, bx, by, cx: 0, cy: 0, r: 0, phi: 0, t0: 0, tm: 0, flat,
+    ...implicitForm(ax, ay, bx, by, flat),
     len: Math.hypot(bx - ax, by - ay), n0: -1, n1: -1,
     xmin: Math.min(ax, bx), xmax: Math.max(ax, bx), ymin: Math.min(ay, by), ymax: Math.max(ay, by),
   };
@@ -65,6 +112,7 @@ export function makeArc(
   const t0 = Math.atan2(ay - cy, ax - cx);
   const c: Carrier = {
     id, kind: ARC, group, ax, ay, bx, by, cx, cy, r, phi, t0, tm: t0 + phi / 2, flat: 0,
+    ...implicitForm(ax, ay, bx, by, phi),
     len: r * Math.abs(phi), n0: -1, n1: -1,
     xmin: Math.min(ax, bx), xmax: Math.max(ax, bx), ymin: Math.min(ay, by), ymax: Math.max(ay, by),
   };

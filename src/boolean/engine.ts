@@ -16,7 +16,7 @@ import { arcFromChord, pushArc, regionBounds, type Contour, type Region } from '
 import { regionMomentsAbout } from '../moments/kernel';
 import {
   ARC, LINE, curveIntersections, distToCarrier, distToCurve, makeArc, makeLine, nearestPoint,
-  paramOf, pointAt, sameCurve, windingOf, wrapAngle, type Carrier,
+  implicitAt, paramOf, pointAt, polishIntersection, sameCurve, windingOf, wrapAngle, type Carrier,
 } from './carriers';
 
 ClipperLib.use_xyz = true;
@@ -215,7 +215,7 @@ function intersectPair(ctx: Ctx, a: Carrier, b: Carrier): void {
   if (b.kind === ARC) refineNearVertex(ctx, b, a);
   const pts = curveIntersections(a, b, eps);
   for (let k = 0; k < pts.length; k += 2) {
-    let x = pts[k], y = pts[k + 1];
+    let [x, y] = polishIntersection(a, b, pts[k], pts[k + 1]);
     // Prefer an exact source vertex that lies on the other carrier (touching vertex).
     const ea = endpointNode(ctx, a, x, y), eb = endpointNode(ctx, b, x, y);
     if (ea >= 0) {
@@ -225,8 +225,17 @@ function intersectPair(ctx: Ctx, a: Carrier, b: Carrier): void {
       x = ctx.nx[eb];
       y = ctx.ny[eb];
     }
-    if (distToCarrier(a, x, y) <= eps && distToCarrier(b, x, y) <= eps) sharePoint(ctx, a, b, x, y);
+    if (distExact(a, x, y) <= eps && distExact(b, x, y) <= eps) sharePoint(ctx, a, b, x, y);
   }
+}
+
+/** Distance to the carrier's true curve within its range (a flat arc is not its chord here). */
+function distExact(c: Carrier, x: number, y: number): number {
+  if (c.kind === ARC || c.flat === 0) return distToCarrier(c, x, y);
+  const u = paramOf(c, x, y);
+  if (u < 0 || u > 1) return Math.min(Math.hypot(x - c.ax, y - c.ay), Math.hypot(x - c.bx, y - c.by));
+  const [f, gx, gy] = implicitAt(c, x, y);
+  return Math.abs(f) / Math.hypot(gx, gy);
 }
 
 /**
@@ -447,7 +456,9 @@ function resolveTie(ctx: Ctx, cands: number[], px: number, py: number, qx: numbe
 }
 
 function carrierTol(ctx: Ctx, c: Carrier): number {
-  return 3 * ctx.unit + (c.kind === ARC ? SAG_MAX * c.r * 1.5 : 0) + ctx.eps;
+  // Chord sagitta for an arc; for a flat arc traced as its chord, the arc's own sagitta.
+  const sag = c.kind === ARC ? SAG_MAX * c.r * 1.5 : (Math.abs(c.flat) * c.len) / 6;
+  return 3 * ctx.unit + sag + ctx.eps;
 }
 
 function assignEdge(ctx: Ctx, si: number[], sj: number[], px: number, py: number, qx: number, qy: number): number {
@@ -495,7 +506,7 @@ function placeVertex(ctx: Ctx, a: number, b: number, px: number, py: number, exa
     const pts = curveIntersections(ca, cb, 1e3 * ctx.eps);
     const k = nearestPoint(pts, px, py);
     if (k >= 0) {
-      const x = pts[k], y = pts[k + 1];
+      const [x, y] = polishIntersection(ca, cb, pts[k], pts[k + 1]);
       let lim = 8 * ctx.unit;
       if (ca.kind === ARC) lim += 0.2 * ca.r;
       if (cb.kind === ARC) lim += 0.2 * cb.r;
