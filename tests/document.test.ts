@@ -135,6 +135,17 @@ describe('empty sections', () => {
   });
 });
 
+describe('sizes lost in their coordinates', () => {
+  it('a tiny circle far from the origin is refused (regression: fuzz seed 834176907)', () => {
+    expect(errorsOf(withShapes([{ id: 'c', type: 'circle', center: [0, 1e-9], radius: 2.07e-150 }]))[0]).toMatch(/^shapes\[0\]\.radius: radius .* too small/);
+  });
+  it('a tiny polygon far from the origin gives a message, not NaN', () => {
+    const ev = evaluateDocument(withShapes([{ id: 'p', type: 'polygon', points: [[1e6, 1e6], [1e6 + 1e-12, 1e6], [1e6, 1e6 + 1e-12]] }]) as never);
+    expect(ev.props).toBeNull();
+    expect(ev.message).toMatch(/too small|no area/);
+  });
+});
+
 describe('units', () => {
   it('converting a document scales every property by the right power', () => {
     // 1 in = 25.4 mm exactly (NIST SP 811, appendix B).

@@ -331,6 +331,7 @@ function buildPaths(ctx: Ctx): { subj: IntPoint[][]; clip: IntPoint[][] } {
       const c = cs[id];
       const r0 = find(ctx, c.n0), r1 = find(ctx, c.n1);
       if (r0 === r1) continue; // collapsed by merging
+      const own = [id];
       const inner: { u: number; n: number }[] = [];
       for (const s of ctx.splits[id]) {
         const rs = find(ctx, s);
@@ -355,7 +356,7 @@ function buildPaths(ctx: Ctx): { subj: IntPoint[][]; clip: IntPoint[][] } {
         if (cnt < 2 && c.r * (1 - Math.cos(dphi / 2)) * ctx.scale > 0.5) cnt = 2;
         for (let j = 1; j < cnt; j++) {
           const [x, y] = pointAt(c, ua + ((ub - ua) * j) / cnt);
-          pushVertex(ctx, path, x, y, false, [id]);
+          pushVertex(ctx, path, x, y, false, own);
         }
       }
     }
@@ -431,8 +432,12 @@ function pieceMid(c: Carrier, px: number, py: number, qx: number, qy: number): [
  * own chord): the true boundary has the result just on its left and not on its right. Each
  * candidate is probed at the middle of its piece, closer to it than to any other candidate.
  */
-function resolveTie(ctx: Ctx, cands: number[], px: number, py: number, qx: number, qy: number): number {
+function resolveTie(ctx: Ctx, all: number[], px: number, py: number, qx: number, qy: number): number {
   const cs = ctx.carriers;
+  // Coincident carriers (same line or same circle) are interchangeable: keep one of each.
+  const cands: number[] = [];
+  for (const c of all) if (!cands.some((d) => sameCurve(cs[c], cs[d], ctx.eps))) cands.push(c);
+  if (cands.length === 1) return cands[0];
   const L = Math.hypot(qx - px, qy - py);
   if (!(L > 0)) return cands[0];
   const nx = -(qy - py) / L, ny = (qx - px) / L; // left normal; the tangent at a piece middle is parallel to q - p
@@ -470,6 +475,8 @@ function assignEdge(ctx: Ctx, si: number[], sj: number[], px: number, py: number
     const t = carrierTol(ctx, cs[c]);
     return distToCarrier(cs[c], mx, my) <= t && distToCarrier(cs[c], px, py) <= t && distToCarrier(cs[c], qx, qy) <= t;
   };
+  // Fast path: both ends are plain chord points (or nodes) of one and the same carrier.
+  if (si.length === 1 && sj.length === 1 && si[0] === sj[0]) return si[0];
   let common = intersectLists(si, sj);
   if (common.length === 1 && fits(common[0])) return common[0];
   common = common.filter(fits);
@@ -667,9 +674,13 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
     carriers: [], loops: [], nx: [], ny: [], ncar: [], parent: [], splits: [], sag: [], contact: false,
     rx: [], ry: [], rX: [], rY: [], rExact: [], rCar: [], zf: [],
   };
-  buildCarriers(ctx, groups);
-  buildArrangement(ctx);
-  const { subj, clip } = buildPaths(ctx);
+  const T = (globalThis as any).__T ??= {};
+  let t = performance.now();
+  const lap = (k: string) => { const n = performance.now(); T[k] = (T[k] ?? 0) + n - t; t = n; };
+  buildCarriers(ctx, groups); lap('carriers');
+  buildArrangement(ctx); lap('arr');
+  const { subj, clip } = buildPaths(ctx); lap('paths');
+  T.nv = (T.nv ?? 0) + ctx.rx.length;
   const cpr = new ClipperLib.Clipper();
   cpr.ZFillFunction = (b1, t1, b2, t2, pt) => {
     ctx.zf.push(b1.Z ?? 0, t1.Z ?? 0, b2.Z ?? 0, t2.Z ?? 0);
@@ -681,12 +692,12 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
   const sol: IntPoint[][] = [];
   const ct = mode === 'union' || mode === 'evenodd' ? CT.ctUnion : mode === 'difference' ? CT.ctDifference : CT.ctIntersection;
   const fill = mode === 'evenodd' ? PF.pftEvenOdd : PF.pftNonZero;
-  cpr.Execute(ct, sol, fill, fill);
-  if (process.env.DBG) console.log(JSON.stringify(sol.map((p) => p.map((q) => [q.X, q.Y, q.Z, ...(q.Z! > 0 ? [ctx.rCar[q.Z! - 1]] : q.Z! < 0 ? [ctx.zf.slice(-4 * q.Z! - 4, -4 * q.Z!)] : [])]))));
+  cpr.Execute(ct, sol, fill, fill); lap('clipper');
   const region: Contour[] = [];
   for (const p of sol) {
     const c = tracePath(ctx, p);
     if (c) region.push(c);
   }
+  lap('trace');
   return { region, contact: ctx.contact };
 }

@@ -92,8 +92,12 @@ export function validateShape(s: unknown, path: string): Issue[] {
       validatePolygon(s, path, out);
       break;
     case 'circle':
-      checkPoint(s.center, `${path}.center`, out);
-      checkNumber(s.radius, `${path}.radius`, out, { positive: true, name: 'radius' });
+      if (checkPoint(s.center, `${path}.center`, out) && checkNumber(s.radius, `${path}.radius`, out, { positive: true, name: 'radius' })) {
+        const c = s.center as [number, number], r = s.radius as number;
+        if (r < 1e-9 * Math.max(Math.abs(c[0]), Math.abs(c[1]))) {
+          out.push({ path: `${path}.radius`, message: `radius ${r} is too small for a centre so far from the origin (${c[0]}, ${c[1]}): it would be lost in rounding` });
+        }
+      }
       break;
     case 'path':
       validatePath(s, path, out);

@@ -122,7 +122,7 @@ export function sectionProperties(region: Region): SectionProperties {
   let perimeter = 0;
   for (const c of region) perimeter += contourLength(c);
   const pos = (v: number) => Math.max(v, 0);
-  return {
+  const out: SectionProperties = {
     area: A,
     centroid: { x: xc, y: yc },
     Qx: m.m01,
@@ -149,6 +149,19 @@ export function sectionProperties(region: Region): SectionProperties {
     perimeter,
     fibres: { top, bottom, left, right },
   };
+  // A section far smaller than its distance from the origin loses its digits in the coordinates.
+  const tooSmall = !(top > 0 && bottom > 0 && left > 0 && right > 0) || !allFinite(out);
+  if (tooSmall) {
+    throw new SectionError(
+      `The section is too small to compute where it lies: its size (${extent.toPrecision(3)}) is lost in its coordinates. Move it nearer the origin or change the units.`,
+    );
+  }
+  return out;
+}
+
+function allFinite(p: SectionProperties): boolean {
+  const vals = [p.area, p.centroid.x, p.centroid.y, p.Ix, p.Iy, p.Ixy, p.I1, p.I2, p.theta, p.rx, p.ry, p.r1, p.r2, p.Sx_top, p.Sx_bottom, p.Sy_left, p.Sy_right, p.Zx, p.Zy, p.perimeter];
+  return vals.every(Number.isFinite);
 }
 
 export interface CutResult {

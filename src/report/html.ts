@@ -1,0 +1,165 @@
+/**
+ * The printable report: one self-contained HTML document (inline CSS and SVG, no scripts, no
+ * external resources) that prints on A4 and US Letter. Every number comes from the same
+ * formatter as the panel (formatProperty / formatNumber), and every string taken from the
+ * document is escaped, so a name is always shown as text.
+ */
+import type { SectionDocument } from '../document/types';
+import type { Evaluation } from '../evaluate';
+import { formatIssue } from '../document/validate';
+import { regionMoments } from '../moments/kernel';
+import { PROPERTY_CATALOG, formatNumber, formatProperty, unitText, type PropertyInfo } from '../properties/catalog';
+import { CAUTION_TEXT } from './caution';
+import { escapeHtml } from './escape';
+import { renderSectionFigure } from './figure';
+import { renderQbDiagram } from './qb-chart';
+import { shapeDimensions, shapeKind, shapeOperation } from './shape-list';
+
+export interface ReportInput {
+  doc: SectionDocument;
+  evaluation: Evaluation;
+  cut?: { axis: 'x' | 'y'; at: number } | null;
+  /** Shown in the footer when given (e.g. an ISO time stamp); never invented. */
+  generated?: string;
+}
+
+export const METHOD_NOTE =
+  'Properties are computed by exact boundary integration (Green’s theorem) over the straight lines and circular arcs ' +
+  'that bound the section; arcs are not replaced by chords. Shapes are combined in list order (add, subtract, intersect). ' +
+  'For the booleans, clipper-lib decides the topology on a fine chord approximation, then each arc and each intersection ' +
+  'point is restored exactly before integration.';
+
+const CONVENTIONS =
+  'Axes: x to the right, y up, origin O. Second moments Ix, Iy and the product Ixy = ∫(x − x̄)(y − ȳ) dA are about axes ' +
+  'through the centroid C. θ is measured counter-clockwise from +x to the major principal axis 1. Elastic moduli are ' +
+  'I divided by the distance from the centroid to the extreme fibre; plastic moduli are about the equal-area axes. ' +
+  'Values are shown to 6 significant figures.';
+
+// Printable area: A4 is 210 mm wide, US Letter 279.4 mm tall; 15 mm margins fit both.
+const CSS = `
+@page { margin: 15mm; }
+* { box-sizing: border-box; }
+html { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
+body { font: 9pt/1.3 "Helvetica Neue", Arial, sans-serif; color: #111; margin: 0 auto; max-width: 180mm; padding: 8mm 0; }
+h1 { font-size: 13pt; margin: 0 0 2mm; }
+h2 { font-size: 10pt; margin: 4mm 0 1.5mm; border-bottom: 0.3mm solid #111; padding-bottom: 0.5mm; }
+table { border-collapse: collapse; width: 100%; break-inside: avoid; page-break-inside: avoid; }
+th, td { border: 0.2mm solid #999; padding: 0.6mm 1.5mm; text-align: left; vertical-align: top; }
+th { background: #eef1f4; font-weight: 600; }
+td.num { text-align: right; font-variant-numeric: tabular-nums; white-space: nowrap; }
+tr.group th { background: #dde3ea; }
+.titleblock td { width: 25%; }
+.titleblock .label { color: #555; font-size: 7.5pt; display: block; }
+.titleblock .value { min-height: 4mm; display: block; }
+.figure { text-align: center; margin: 1mm 0; }
+.figure svg { display: block; margin: 0 auto; }
+.caption, .small { font-size: 8pt; color: #333; margin: 1mm 0; }
+.caution { border: 0.4mm solid #111; padding: 1.5mm 2.5mm; font-weight: 600; margin: 3mm 0; break-inside: avoid; }
+.block { break-inside: avoid; page-break-inside: avoid; }
+.values { width: auto; min-width: 110mm; }
+.props td:nth-child(2) { white-space: nowrap; }
+footer { font-size: 7.5pt; color: #555; margin-top: 3mm; }
+.page2 { break-before: page; page-break-before: always; }
+@media screen { body { padding: 10mm; background: #fff; } }
+@media print { body { padding: 0; max-width: none; } }
+`;
+
+function titleBlock(doc: SectionDocument): string {
+  const t = doc.title ?? {};
+  const cell = (label: string, value: string | undefined) =>
+    `<td><span class="label">${escapeHtml(label)}</span><span class="value" data-field="${escapeHtml(label.toLowerCase())}">${escapeHtml(value ?? '')}</span></td>`;
+  return (
+    `<table class="titleblock block"><tbody>` +
+    `<tr>${cell('Project', t.project)}${cell('Section', t.section ?? doc.name)}${cell('Units', doc.units)}${cell('Revision', t.revision)}</tr>` +
+    `<tr>${cell('Author', t.author)}${cell('Checker', t.checker)}${cell('Date', t.date)}<td><span class="label">Signature</span><span class="value"></span></td></tr>` +
+    `</tbody></table>`
+  );
+}
+
+function propertyTable(input: ReportInput): string {
+  const p = input.evaluation.props!;
+  const units = input.doc.units;
+  const rows: string[] = [];
+  let group = '';
+  for (const info of PROPERTY_CATALOG as readonly PropertyInfo[]) {
+    if (info.group !== group) {
+      group = info.group;
+      rows.push(`<tr class="group"><th colspan="4">${escapeHtml(group)}</th></tr>`);
+    }
+    const fp = formatProperty(info, p, units);
+    rows.push(
+      `<tr data-prop="${escapeHtml(info.key)}"><td>${escapeHtml(info.label)}</td><td>${escapeHtml(info.symbol)}</td>` +
+        `<td class="num" data-value="${escapeHtml(fp.text)}">${escapeHtml(fp.text)}</td><td>${escapeHtml(fp.unit)}</td></tr>`,
+    );
+  }
+  return (
+    `<section class="block"><h2>Section properties</h2>` +
+    `<table class="props"><thead><tr><th>Property</th><th>Symbol</th><th>Value</th><th>Unit</th></tr></thead><tbody>${rows.join('')}</tbody></table></section>`
+  );
+}
+
+function shapeTable(input: ReportInput): string {
+  const { doc, evaluation } = input;
+  const units = doc.units;
+  const rows = doc.shapes.map((s, i) => {
+    const res = evaluation.shapes.find((r) => r.id === s.id);
+    let area = '—';
+    if (res?.error) area = `error: ${res.error}`;
+    else if (res && res.region.length > 0) area = formatNumber(Math.abs(regionMoments(res.region).m00));
+    const name = s.name ? `${s.name} (${s.id})` : s.id;
+    return (
+      `<tr><td class="num">${i + 1}</td><td>${escapeHtml(name)}</td><td>${escapeHtml(shapeKind(s))}</td><td>${escapeHtml(shapeOperation(s))}</td>` +
+      `<td>${escapeHtml(shapeDimensions(s, units))}</td><td class="num">${escapeHtml(area)}</td></tr>`
+    );
+  });
+  return (
+    `<section class="block"><h2>Input shapes</h2>` +
+    `<p class="small">Applied in this order to an empty section. Dimensions and coordinates in ${escapeHtml(units)}; area of each shape on its own in ${escapeHtml(unitText(units, 2))}.</p>` +
+    `<table class="shapes"><thead><tr><th>#</th><th>Name (id)</th><th>Kind</th><th>Operation</th><th>Dimensions and placement</th><th>Own area</th></tr></thead>` +
+    `<tbody>${rows.join('')}</tbody></table></section>`
+  );
+}
+
+export function renderReportHtml(input: ReportInput): string {
+  const { doc, evaluation } = input;
+  const props = evaluation.props;
+  const units = doc.units;
+  const cut = input.cut && Number.isFinite(input.cut.at) && (input.cut.axis === 'x' || input.cut.axis === 'y') ? input.cut : null;
+  const heading = doc.name ?? doc.title?.section ?? 'Section';
+
+  const fig = renderSectionFigure(evaluation.region, props, units, { maxWidthMm: 180, maxHeightMm: 125, cut });
+  const captionBits = [`Section to scale ${fig.scale.label} on the printed page (print at 100 %, A4 or US Letter). Dimensions in ${units}.`];
+  if (props) {
+    captionBits.push(
+      `C = centroid (${formatNumber(props.centroid.x)}, ${formatNumber(props.centroid.y)}); 1, 2 = principal axes, θ = ${formatProperty(PROPERTY_CATALOG.find((i) => i.key === 'theta')!, props, units).text}°.`,
+    );
+  }
+  captionBits.push(fig.originShown ? 'O = origin (0, 0).' : 'The origin (0, 0) lies outside the figure.');
+
+  const notes = evaluation.warnings.map((w) => `<li>${escapeHtml(formatIssue(w))}</li>`);
+  const body: string[] = [
+    `<h1>Section properties: ${escapeHtml(heading)}</h1>`,
+    titleBlock(doc),
+    `<section class="block"><h2>Section</h2><div class="figure">${fig.svg}</div><p class="caption" data-scale="${escapeHtml(fig.scale.label)}">${escapeHtml(captionBits.join(' '))}</p></section>`,
+    `<p class="caution">${escapeHtml(CAUTION_TEXT)}</p>`,
+    shapeTable(input),
+  ];
+  if (notes.length > 0) body.push(`<section class="block"><h2>Notes from the evaluation</h2><ul class="small">${notes.join('')}</ul></section>`);
+  body.push('<div class="page2"></div>');
+  if (props) body.push(propertyTable(input));
+  else body.push(`<section class="block"><h2>Section properties</h2><p>${escapeHtml(evaluation.message ?? 'The section has no area, so it has no properties.')}</p></section>`);
+  if (props && cut) body.push(renderQbDiagram(evaluation.region, props, units, cut));
+  body.push(
+    `<section class="block"><h2>Method</h2><p class="small">${escapeHtml(METHOD_NOTE)}</p><p class="small">${escapeHtml(CONVENTIONS)}</p></section>`,
+    `<p class="caution">${escapeHtml(CAUTION_TEXT)}</p>`,
+  );
+  if (input.generated) body.push(`<footer>Generated ${escapeHtml(input.generated)} with Kern.</footer>`);
+
+  return (
+    `<!DOCTYPE html>\n<html lang="en"><head><meta charset="utf-8">` +
+    `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">` +
+    `<meta name="viewport" content="width=device-width, initial-scale=1">` +
+    `<title>${escapeHtml(`Section properties: ${heading}`)}</title><style>${CSS}</style></head>` +
+    `<body>${body.join('\n')}</body></html>\n`
+  );
+}
