@@ -61,14 +61,6 @@ export function wrapAngle(d: number): number {
   return d;
 }
 
-function implicitForm(ax: number, ay: number, bx: number, by: number, phi: number) {
-  const dx = bx - ax, dy = by - ay;
-  const L = Math.hypot(dx, dy) || 1;
-  const sg = phi >= 0 ? 1 : -1;
-  const a = Math.abs(phi) / 2;
-  return { mx: (ax + bx) / 2, my: (ay + by) / 2, nx: (sg * dy) / L, ny: (-sg * dx) / L, ks: Math.sin(a) / L, kc: Math.cos(a) };
-}
-
 /** The implicit function of c at (x, y) and its gradient. */
 export function implicitAt(c: Carrier, x: number, y: number): [number, number, number] {
   const px = x - c.mx, py = y - c.my;
@@ -96,30 +88,41 @@ export function polishIntersection(a: Carrier, b: Carrier, x: number, y: number)
   return [x, y];
 }
 
-export function makeLine(id: number, group: number, ax: number, ay: number, bx: number, by: number, flat = 0): Carrier {
+/** One constructor for both kinds, so every carrier has the same shape (fast property access). */
+function makeCarrier(
+  id: number, kind: 0 | 1, group: number, ax: number, ay: number, bx: number, by: number,
+  cx: number, cy: number, r: number, phi: number, flat: number,
+): Carrier {
+  const dx = bx - ax, dy = by - ay;
+  const L = Math.hypot(dx, dy);
+  const Ls = L || 1;
+  const sw = kind === ARC ? phi : flat;
+  const sg = sw >= 0 ? 1 : -1;
+  const half = Math.abs(sw) / 2;
+  const t0 = kind === ARC ? Math.atan2(ay - cy, ax - cx) : 0;
   return {
-    id, kind: LINE, group, ax, ay, bx, by, cx: 0, cy: 0, r: 0, phi: 0, t0: 0, tm: 0, flat,
-    ...implicitForm(ax, ay, bx, by, flat),
-    len: Math.hypot(bx - ax, by - ay), n0: -1, n1: -1,
-    xmin: Math.min(ax, bx), xmax: Math.max(ax, bx), ymin: Math.min(ay, by), ymax: Math.max(ay, by),
+    id, kind, group, ax, ay, bx, by, cx, cy, r, phi, t0, tm: t0 + phi / 2, flat,
+    mx: (ax + bx) / 2, my: (ay + by) / 2, nx: (sg * dy) / Ls, ny: (-sg * dx) / Ls,
+    ks: half === 0 ? 0 : Math.sin(half) / Ls, kc: half === 0 ? 1 : Math.cos(half),
+    len: kind === ARC ? r * Math.abs(phi) : L, n0: -1, n1: -1,
+    xmin: ax < bx ? ax : bx, xmax: ax > bx ? ax : bx, ymin: ay < by ? ay : by, ymax: ay > by ? ay : by,
   };
+}
+
+export function makeLine(id: number, group: number, ax: number, ay: number, bx: number, by: number, flat = 0): Carrier {
+  return makeCarrier(id, LINE, group, ax, ay, bx, by, 0, 0, 0, 0, flat);
 }
 
 export function makeArc(
   id: number, group: number, ax: number, ay: number, bx: number, by: number,
   cx: number, cy: number, r: number, phi: number,
 ): Carrier {
-  const t0 = Math.atan2(ay - cy, ax - cx);
-  const c: Carrier = {
-    id, kind: ARC, group, ax, ay, bx, by, cx, cy, r, phi, t0, tm: t0 + phi / 2, flat: 0,
-    ...implicitForm(ax, ay, bx, by, phi),
-    len: r * Math.abs(phi), n0: -1, n1: -1,
-    xmin: Math.min(ax, bx), xmax: Math.max(ax, bx), ymin: Math.min(ay, by), ymax: Math.max(ay, by),
-  };
+  const c = makeCarrier(id, ARC, group, ax, ay, bx, by, cx, cy, r, phi, 0);
   // Axis extremes inside the sweep.
+  const half = Math.abs(phi) / 2;
   for (let k = 0; k < 4; k++) {
     const t = (k * Math.PI) / 2;
-    if (Math.abs(wrapAngle(t - c.tm)) >= Math.abs(phi) / 2) continue;
+    if (Math.abs(wrapAngle(t - c.tm)) >= half) continue;
     if (k === 0) c.xmax = cx + r;
     else if (k === 1) c.ymax = cy + r;
     else if (k === 2) c.xmin = cx - r;

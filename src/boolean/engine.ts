@@ -12,7 +12,7 @@
  */
 import ClipperLib from 'clipper-lib';
 import type { IntPoint } from 'clipper-lib';
-import { arcFromChord, pushArc, regionBounds, type Contour, type Region } from '../geometry/contour';
+import { arcFromChord, pushArc, type Contour, type Region } from '../geometry/contour';
 import { regionMomentsAbout } from '../moments/kernel';
 import {
   ARC, LINE, curveIntersections, distToCarrier, distToCurve, makeArc, makeLine, nearestPoint,
@@ -25,8 +25,8 @@ export type Mode = 'union' | 'difference' | 'intersection' | 'evenodd';
 
 /** Largest integer coordinate used (clipper JS leaves its fast path above 47453132). */
 const INT_RANGE = 4e7;
-/** Largest angle (radians) spanned by one chord: sagitta <= (1 - cos(0.0625)) r ~ 2e-3 r. */
-const MAX_STEP = 0.125;
+/** Largest angle (radians) spanned by one chord: sagitta <= (1 - cos(0.1)) r ~ 5e-3 r. */
+const MAX_STEP = 0.2;
 const SAG_MAX = 1 - Math.cos(MAX_STEP / 2);
 /** Smallest relative sagitta used when refining near-tangent arcs (caps the chord count). */
 const SAG_FLOOR = 1e-6;
@@ -215,9 +215,14 @@ function intersectPair(ctx: Ctx, a: Carrier, b: Carrier): void {
   if (b.kind === ARC) refineNearVertex(ctx, b, a);
   const pts = curveIntersections(a, b, eps);
   for (let k = 0; k < pts.length; k += 2) {
-    let [x, y] = polishIntersection(a, b, pts[k], pts[k + 1]);
+    let x = pts[k], y = pts[k + 1];
+    let ea = endpointNode(ctx, a, x, y), eb = endpointNode(ctx, b, x, y);
+    // Neighbours meeting at their shared vertex: nothing to do.
+    if (ea >= 0 && eb >= 0 && find(ctx, ea) === find(ctx, eb)) continue;
+    [x, y] = polishIntersection(a, b, x, y);
     // Prefer an exact source vertex that lies on the other carrier (touching vertex).
-    const ea = endpointNode(ctx, a, x, y), eb = endpointNode(ctx, b, x, y);
+    ea = endpointNode(ctx, a, x, y);
+    eb = endpointNode(ctx, b, x, y);
     if (ea >= 0) {
       x = ctx.nx[ea];
       y = ctx.ny[ea];
@@ -652,18 +657,29 @@ function tracePath(ctx: Ctx, path: IntPoint[]): Contour | null {
 
 /** Run the pipeline on source groups (group 0 = subject, group 1 = clips). */
 export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region: Region; contact: boolean } {
+  // Extent: vertex bounds widened by each arc's bulge height (a cheap upper bound of the exact
+  // bounds; only the integer scale depends on it).
   let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
   for (const g of groups) {
     for (const c of g.contours) {
-      let ok = true;
-      for (const v of c.xy) if (!Number.isFinite(v)) ok = false;
-      if (!ok || c.xy.length < 4) continue;
-      const b = regionBounds([c]);
-      if (!b) continue;
-      xmin = Math.min(xmin, b.xmin);
-      xmax = Math.max(xmax, b.xmax);
-      ymin = Math.min(ymin, b.ymin);
-      ymax = Math.max(ymax, b.ymax);
+      const xy = c.xy, n = xy.length >> 1;
+      for (let i = 0; i < n; i++) {
+        const x = xy[2 * i], y = xy[2 * i + 1];
+        if (!Number.isFinite(x) || !Number.isFinite(y)) continue;
+        let h = 0;
+        const b = c.bulge ? c.bulge[i] : 0;
+        if (b !== 0 && Number.isFinite(b)) {
+          const j = i + 1 === n ? 0 : i + 1;
+          const L = Math.hypot(xy[2 * j] - x, xy[2 * j + 1] - y);
+          // Height of the arc above its chord, or its whole diameter for a sweep over 180 deg.
+          h = Math.abs(b) <= 1 ? (Math.abs(b) * L) / 2 : (L / 2) * (Math.abs(b) + 1 / Math.abs(b));
+          if (!Number.isFinite(h)) h = 0;
+        }
+        if (x - h < xmin) xmin = x - h;
+        if (x + h > xmax) xmax = x + h;
+        if (y - h < ymin) ymin = y - h;
+        if (y + h > ymax) ymax = y + h;
+      }
     }
   }
   const ext = Math.max(xmax - xmin, ymax - ymin) / 2;
@@ -674,13 +690,9 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
     carriers: [], loops: [], nx: [], ny: [], ncar: [], parent: [], splits: [], sag: [], contact: false,
     rx: [], ry: [], rX: [], rY: [], rExact: [], rCar: [], zf: [],
   };
-  const T = (globalThis as any).__T ??= {};
-  let t = performance.now();
-  const lap = (k: string) => { const n = performance.now(); T[k] = (T[k] ?? 0) + n - t; t = n; };
-  buildCarriers(ctx, groups); lap('carriers');
-  buildArrangement(ctx); lap('arr');
-  const { subj, clip } = buildPaths(ctx); lap('paths');
-  T.nv = (T.nv ?? 0) + ctx.rx.length;
+  buildCarriers(ctx, groups);
+  buildArrangement(ctx);
+  const { subj, clip } = buildPaths(ctx);
   const cpr = new ClipperLib.Clipper();
   cpr.ZFillFunction = (b1, t1, b2, t2, pt) => {
     ctx.zf.push(b1.Z ?? 0, t1.Z ?? 0, b2.Z ?? 0, t2.Z ?? 0);
@@ -692,12 +704,11 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
   const sol: IntPoint[][] = [];
   const ct = mode === 'union' || mode === 'evenodd' ? CT.ctUnion : mode === 'difference' ? CT.ctDifference : CT.ctIntersection;
   const fill = mode === 'evenodd' ? PF.pftEvenOdd : PF.pftNonZero;
-  cpr.Execute(ct, sol, fill, fill); lap('clipper');
+  cpr.Execute(ct, sol, fill, fill);
   const region: Contour[] = [];
   for (const p of sol) {
     const c = tracePath(ctx, p);
     if (c) region.push(c);
   }
-  lap('trace');
   return { region, contact: ctx.contact };
 }

@@ -6,13 +6,13 @@
  * radius) and every vertex sits on an exact source vertex or an exact analytic intersection.
  * See engine.ts for the pipeline.
  */
-import { regionBounds, type Contour, type Region } from '../geometry/contour';
+import { regionBounds, type Bounds, type Contour, type Region } from '../geometry/contour';
 import { runBoolean } from './engine';
 
 export type BoolOp = 'union' | 'difference' | 'intersection';
 
-function boundsOverlap(a: Region, b: Region): boolean {
-  const ba = regionBounds(a), bb = regionBounds(b);
+function boundsOverlap(ba: Bounds | null, b: Region): boolean {
+  const bb = regionBounds(b);
   if (!ba || !bb) return false;
   return !(bb.xmin > ba.xmax || bb.xmax < ba.xmin || bb.ymin > ba.ymax || bb.ymax < ba.ymin);
 }
@@ -22,7 +22,8 @@ export function booleanRegions(subject: Region, clips: Region[], op: BoolOp): Re
   let cl = clips.filter((c) => c.length > 0);
   if (op !== 'union') {
     // Clips that cannot touch the subject change nothing.
-    cl = cl.filter((c) => boundsOverlap(subject, c));
+    const sb = regionBounds(subject);
+    cl = cl.filter((c) => boundsOverlap(sb, c));
     if (cl.length === 0) return op === 'difference' ? subject.slice() : [];
     if (subject.length === 0) return [];
   } else if (cl.length === 0) return subject.slice();
