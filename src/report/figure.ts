@@ -28,7 +28,7 @@ export interface Figure {
 }
 
 // Margins around the section for dimensions and labels (paper mm).
-const LEFT = 12, RIGHT = 24, TOP = 8, BOTTOM = 22;
+const LEFT = 12, RIGHT = 24, TOP = 7, BOTTOM = 16;
 const FONT = 2.8;
 
 const f = (v: number) => (Math.round(v * 1000) / 1000).toString();
@@ -94,15 +94,27 @@ export function renderSectionFigure(region: Region, props: SectionProperties | n
   if (props) {
     const cx = X(props.centroid.x), cy = Y(props.centroid.y);
     const t = (props.theta * Math.PI) / 180;
-    const L = 0.42 * Math.max((fx1 - fx0) * k, (fy1 - fy0) * k) + 4;
+    // Each axis runs through C to the edges of the drawing frame (plus a little), labelled at its end.
+    const bx0 = LEFT - 6, bx1 = W - RIGHT + 4, by0 = TOP - 3, by1 = H - BOTTOM + 4;
+    const reach = (dx: number, dy: number) => {
+      let t = Infinity;
+      if (dx > 1e-12) t = Math.min(t, (bx1 - cx) / dx);
+      if (dx < -1e-12) t = Math.min(t, (bx0 - cx) / dx);
+      if (dy > 1e-12) t = Math.min(t, (by1 - cy) / dy);
+      if (dy < -1e-12) t = Math.min(t, (by0 - cy) / dy);
+      return Math.max(0, t);
+    };
     const axes: [number, string][] = [
       [t, '1'],
       [t + Math.PI / 2, '2'],
     ];
     for (const [a, label] of axes) {
       const dx = Math.cos(a), dy = -Math.sin(a); // paper y runs down
-      parts.push(`<path class="axis" d="M${f(cx - L * dx)} ${f(cy - L * dy)} L${f(cx + L * dx)} ${f(cy + L * dy)}"/>`);
-      parts.push(`<text x="${f(cx + (L + 2) * dx)}" y="${f(cy + (L + 2) * dy + 1)}" text-anchor="middle" class="axis-label">${label}</text>`);
+      const tp = reach(dx, dy), tm = reach(-dx, -dy);
+      parts.push(`<path class="axis" d="M${f(cx - tm * dx)} ${f(cy - tm * dy)} L${f(cx + tp * dx)} ${f(cy + tp * dy)}"/>`);
+      // Label beside the positive end, offset sideways so it never sits on the line.
+      const lx = cx + tp * dx + 1.6 * -dy + (dx > 0.5 ? 1 : 0), ly = cy + tp * dy + 1.6 * dx + 1;
+      parts.push(`<text x="${f(lx)}" y="${f(ly)}" text-anchor="middle" class="axis-label">${label}</text>`);
     }
     const r = 1.6;
     parts.push(
@@ -120,9 +132,9 @@ export function renderSectionFigure(region: Region, props: SectionProperties | n
     parts.push(`<text x="${f(ox + 8.5)}" y="${f(oy + 1)}">x</text><text x="${f(ox - 0.9)}" y="${f(oy - 9)}">y</text><text x="${f(ox - 3.2)}" y="${f(oy + 3.2)}">O</text>`);
   }
 
-  // Scale bar, bottom left.
+  // Scale bar, bottom left, level with the width dimension.
   const bar = scaleBarLength(k);
-  const by = H - 3.5, bx = 2;
+  const by = H - 2, bx = 2;
   parts.push(
     `<path class="ink" d="M${f(bx)} ${f(by - 1)} h${f(bar * k)} v1 h${f(-bar * k)} Z"/>` +
       `<path class="thin" d="M${f(bx)} ${f(by - 2.2)} v2.2 M${f(bx + bar * k)} ${f(by - 2.2)} v2.2"/>` +

@@ -36,8 +36,18 @@ const CONVENTIONS =
   'Values are shown to 6 significant figures.';
 
 // Printable area: A4 is 210 mm wide, US Letter 279.4 mm tall; 15 mm margins fit both.
+/** A CSS string literal for any text: every character outside [A-Za-z0-9 ] as a hex escape. */
+function cssString(s: string): string {
+  return `"${Array.from(s).map((ch) => (/[A-Za-z0-9 ]/.test(ch) ? ch : `\\${ch.codePointAt(0)!.toString(16)} `)).join('')}"`;
+}
+
+const pageCss = (heading: string) => `
+@page { margin: 15mm 15mm 17mm;
+  @bottom-left { content: ${cssString(heading)}; font: 7.5pt Arial, sans-serif; color: #555; }
+  @bottom-right { content: "Page " counter(page) " of " counter(pages); font: 7.5pt Arial, sans-serif; color: #555; } }
+`;
+
 const CSS = `
-@page { margin: 15mm; }
 * { box-sizing: border-box; }
 html { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
 body { font: 9pt/1.3 "Helvetica Neue", Arial, sans-serif; color: #111; margin: 0 auto; max-width: 180mm; padding: 8mm 0; }
@@ -58,8 +68,10 @@ tr.group th { background: #dde3ea; }
 .block { break-inside: avoid; page-break-inside: avoid; }
 .values { width: auto; min-width: 110mm; }
 .props td:nth-child(2) { white-space: nowrap; }
+.cols { display: flex; gap: 4mm; align-items: flex-start; }
+.cols > table { flex: 1 1 0; }
+.props th, .props td { padding: 0.35mm 1.2mm; }
 footer { font-size: 7.5pt; color: #555; margin-top: 3mm; }
-.page2 { break-before: page; page-break-before: always; }
 @media screen { body { padding: 10mm; background: #fff; } }
 @media print { body { padding: 0; max-width: none; } }
 `;
@@ -76,25 +88,34 @@ function titleBlock(doc: SectionDocument): string {
   );
 }
 
+/** Groups that go in the left column of the property tables; the rest go right. */
+const LEFT_GROUPS = new Set(['Area and centroid', 'Second moments', 'Principal axes']);
+
 function propertyTable(input: ReportInput): string {
   const p = input.evaluation.props!;
   const units = input.doc.units;
-  const rows: string[] = [];
-  let group = '';
-  for (const info of PROPERTY_CATALOG as readonly PropertyInfo[]) {
-    if (info.group !== group) {
-      group = info.group;
-      rows.push(`<tr class="group"><th colspan="4">${escapeHtml(group)}</th></tr>`);
+  const table = (infos: readonly PropertyInfo[]) => {
+    const rows: string[] = [];
+    let group = '';
+    for (const info of infos) {
+      if (info.group !== group) {
+        group = info.group;
+        rows.push(`<tr class="group"><th colspan="4">${escapeHtml(group)}</th></tr>`);
+      }
+      const fp = formatProperty(info, p, units);
+      rows.push(
+        `<tr data-prop="${escapeHtml(info.key)}"><td>${escapeHtml(info.label)}</td><td>${escapeHtml(info.symbol)}</td>` +
+          `<td class="num" data-value="${escapeHtml(fp.text)}">${escapeHtml(fp.text)}</td><td>${escapeHtml(fp.unit)}</td></tr>`,
+      );
     }
-    const fp = formatProperty(info, p, units);
-    rows.push(
-      `<tr data-prop="${escapeHtml(info.key)}"><td>${escapeHtml(info.label)}</td><td>${escapeHtml(info.symbol)}</td>` +
-        `<td class="num" data-value="${escapeHtml(fp.text)}">${escapeHtml(fp.text)}</td><td>${escapeHtml(fp.unit)}</td></tr>`,
-    );
-  }
+    return `<table class="props"><thead><tr><th>Property</th><th>Symbol</th><th>Value</th><th>Unit</th></tr></thead><tbody>${rows.join('')}</tbody></table>`;
+  };
+  const all = PROPERTY_CATALOG as readonly PropertyInfo[];
   return (
-    `<section class="block"><h2>Section properties</h2>` +
-    `<table class="props"><thead><tr><th>Property</th><th>Symbol</th><th>Value</th><th>Unit</th></tr></thead><tbody>${rows.join('')}</tbody></table></section>`
+    `<section class="block"><h2>Section properties</h2><div class="cols">` +
+    table(all.filter((i) => LEFT_GROUPS.has(i.group))) +
+    table(all.filter((i) => !LEFT_GROUPS.has(i.group))) +
+    `</div></section>`
   );
 }
 
@@ -127,12 +148,11 @@ export function renderReportHtml(input: ReportInput): string {
   const cut = input.cut && Number.isFinite(input.cut.at) && (input.cut.axis === 'x' || input.cut.axis === 'y') ? input.cut : null;
   const heading = doc.name ?? doc.title?.section ?? 'Section';
 
-  const fig = renderSectionFigure(evaluation.region, props, units, { maxWidthMm: 180, maxHeightMm: 125, cut });
+  const fig = renderSectionFigure(evaluation.region, props, units, { maxWidthMm: 180, maxHeightMm: 150, cut });
   const captionBits = [`Section to scale ${fig.scale.label} on the printed page (print at 100 %, A4 or US Letter). Dimensions in ${units}.`];
   if (props) {
-    captionBits.push(
-      `C = centroid (${formatNumber(props.centroid.x)}, ${formatNumber(props.centroid.y)}); 1, 2 = principal axes, θ = ${formatProperty(PROPERTY_CATALOG.find((i) => i.key === 'theta')!, props, units).text}°.`,
-    );
+    const shown = (key: string) => formatProperty(PROPERTY_CATALOG.find((i) => i.key === key)!, props, units).text;
+    captionBits.push(`C = centroid (${shown('centroid.x')}, ${shown('centroid.y')}); 1, 2 = principal axes, θ = ${shown('theta')}°.`);
   }
   captionBits.push(fig.originShown ? 'O = origin (0, 0).' : 'The origin (0, 0) lies outside the figure.');
 
@@ -141,11 +161,9 @@ export function renderReportHtml(input: ReportInput): string {
     `<h1>Section properties: ${escapeHtml(heading)}</h1>`,
     titleBlock(doc),
     `<section class="block"><h2>Section</h2><div class="figure">${fig.svg}</div><p class="caption" data-scale="${escapeHtml(fig.scale.label)}">${escapeHtml(captionBits.join(' '))}</p></section>`,
-    `<p class="caution">${escapeHtml(CAUTION_TEXT)}</p>`,
     shapeTable(input),
   ];
   if (notes.length > 0) body.push(`<section class="block"><h2>Notes from the evaluation</h2><ul class="small">${notes.join('')}</ul></section>`);
-  body.push('<div class="page2"></div>');
   if (props) body.push(propertyTable(input));
   else body.push(`<section class="block"><h2>Section properties</h2><p>${escapeHtml(evaluation.message ?? 'The section has no area, so it has no properties.')}</p></section>`);
   if (props && cut) body.push(renderQbDiagram(evaluation.region, props, units, cut));
@@ -153,13 +171,12 @@ export function renderReportHtml(input: ReportInput): string {
     `<section class="block"><h2>Method</h2><p class="small">${escapeHtml(METHOD_NOTE)}</p><p class="small">${escapeHtml(CONVENTIONS)}</p></section>`,
     `<p class="caution">${escapeHtml(CAUTION_TEXT)}</p>`,
   );
-  if (input.generated) body.push(`<footer>Generated ${escapeHtml(input.generated)} with Kern.</footer>`);
 
   return (
     `<!DOCTYPE html>\n<html lang="en"><head><meta charset="utf-8">` +
     `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">` +
     `<meta name="viewport" content="width=device-width, initial-scale=1">` +
-    `<title>${escapeHtml(`Section properties: ${heading}`)}</title><style>${CSS}</style></head>` +
+    `<title>${escapeHtml(`Section properties: ${heading}`)}</title><style>${pageCss(`Section properties: ${heading}${input.generated ? ` · generated ${input.generated}` : ''}`)}${CSS}</style></head>` +
     `<body>${body.join('\n')}</body></html>\n`
   );
 }

@@ -32,7 +32,7 @@ export function renderQbDiagram(region: Region, props: SectionProperties, units:
   const lo = samples[0].at, hi = samples[samples.length - 1].at;
 
   // Chart frame in paper mm.
-  const W = 170, H = 58, L = 20, R = 6, T = 5, B = 11;
+  const W = 170, H = 50, L = 20, R = 6, T = 4, B = 10;
   const pw = W - L - R, ph = H - T - B;
   const span = vmax - vmin || 1;
   const X = (at: number) => L + ((at - lo) / (hi - lo || 1)) * pw;
