@@ -183,6 +183,46 @@ describe('union of two overlapping rectangles', () => {
   });
 });
 
+describe('composite sections built by union', () => {
+  it('I-section from two flanges and a web (touching edges)', () => {
+    // Hibbeler, Mechanics of Materials, composite I-section: A = 2 b tf + (h - 2 tf) tw,
+    // Ix = b h^3/12 - (b - tw)(h - 2 tf)^3/12, Iy = 2 tf b^3/12 + (h - 2 tf) tw^3/12.
+    const b = 0.2, h = 0.4, tf = 0.02, tw = 0.012;
+    const top = [rect(-b / 2, h / 2 - tf, b / 2, h / 2)];
+    const bot = [rect(-b / 2, -h / 2, b / 2, -h / 2 + tf)];
+    const web = [rect(-tw / 2, -h / 2 + tf, tw / 2, h / 2 - tf)];
+    const out = booleanRegions(web, [top, bot], 'union');
+    const c = centroidal(regionMoments(out));
+    expectRel(c.A, 2 * b * tf + (h - 2 * tf) * tw, 1e-12);
+    expectRel(c.Ix, (b * h ** 3) / 12 - ((b - tw) * (h - 2 * tf) ** 3) / 12, 1e-12);
+    expectRel(c.Iy, (2 * tf * b ** 3) / 12 + ((h - 2 * tf) * tw ** 3) / 12, 1e-12);
+    expect(out.length).toBe(1);
+  });
+
+  it('a row of overlapping equal circles', () => {
+    // Only neighbours overlap (r <= D < 2r): A = n pi r^2 - (n - 1) lens, each lens two equal
+    // circular segments of half-angle acos(D / 2r) (Gere & Goodno App. D circle; Roark Table A.1
+    // circular segment).
+    const r = 0.05, D = 0.07, n = 12;
+    const circles = Array.from({ length: n }, (_, k) => [circle(0.3 + k * D, -0.2, r)]);
+    const out = booleanRegions(circles[0], circles.slice(1), 'union');
+    const lens = 2 * segmentClosedForm(r, Math.acos(D / (2 * r))).A;
+    expectRel(regionMoments(out).m00, n * Math.PI * r * r - (n - 1) * lens, 1e-10);
+    expect(out.length).toBe(1);
+    // Every output arc is one of the source circles: its centre and radius come back exactly.
+    const c = out[0];
+    const nv = c.xy.length / 2;
+    for (let i = 0; i < nv; i++) {
+      const bl = c.bulge ? c.bulge[i] : 0;
+      expect(bl).not.toBe(0);
+      const j = (i + 1) % nv;
+      const phi = 4 * Math.atan(bl);
+      const L = Math.hypot(c.xy[2 * j] - c.xy[2 * i], c.xy[2 * j + 1] - c.xy[2 * i + 1]);
+      expectRel(L / (2 * Math.sin(Math.abs(phi) / 2)), r, 1e-9);
+    }
+  });
+});
+
 describe('degenerate inputs never throw or give NaN', () => {
   const sq = (x: number, y: number, s = 1) => [rect(x, y, x + s, y + s)];
   const ops = ['union', 'difference', 'intersection'] as const;
