@@ -7,6 +7,7 @@ export default defineConfig({
   // The engine must run in a browser: guard against stray Node globals (src/boolean/engine.ts
   // reads process.env.DBG for debugging; see /tmp/kern/ui-requests.md).
   define: { 'process.env.DBG': 'undefined' },
+  worker: { format: 'es' },
   server: { open: false },
   build: { outDir: 'dist', sourcemap: false, chunkSizeWarningLimit: 2000 },
 });

@@ -30,9 +30,9 @@ export interface Editor {
   dispose(): void;
 }
 
-export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule?: (cb: () => void) => void } = {}): Editor {
+export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule?: (cb: () => void) => void; worker?: boolean } = {}): Editor {
   const store = createEditorStore(doc);
-  const results = createLiveResults(store, opts.schedule);
+  const results = createLiveResults(store, { schedule: opts.schedule, worker: opts.worker });
   const transient = createStore<Transient>()(() => ({ pointer: null, snap: null, draft: null, prompt: '', inputError: null, hoverHandle: null }));
   const tools: Record<ToolId, Tool> = {
     select: new SelectTool(),
@@ -49,7 +49,7 @@ export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule
     snap(raw: Point, o = {}) {
       const s = store.getState();
       const r = snapPointer(raw, {
-        ev: results.evaluate(s.doc),
+        shapes: results.shapesOf(s.doc),
         scale: s.scale,
         settings: s.snap,
         from: o.from,
@@ -76,7 +76,7 @@ export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule
       transient.setState({ inputError: text });
     },
   };
-  const ctx: CommandContext = { store, evaluate: results.evaluate, io: opts.io };
+  const ctx: CommandContext = { store, evaluate: results.evaluate, shapesOf: results.shapesOf, io: opts.io };
   const tool = () => tools[store.getState().tool];
   const updatePrompt = () => transient.setState({ prompt: tool().prompt(env) });
   updatePrompt();

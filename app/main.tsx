@@ -16,7 +16,9 @@ function storage(): Storage | null {
 
 const store = storage();
 const restored = restoreDocument(store);
-const editor = createEditor(restored.doc);
+// `?worker=0` evaluates on the main thread (for comparison and for browsers without module workers).
+const params = new URLSearchParams(window.location.search);
+const editor = createEditor(restored.doc, { worker: params.get('worker') !== '0' });
 if (store) installAutosave(editor.store, store);
 if (restored.problems.length) {
   editor.store.setState({

@@ -2,7 +2,7 @@
  * The view transform: world (document units, y up) to screen pixels (y down).
  * sx = ox + x·scale, sy = oy − y·scale.
  */
-import type { Bounds, Region, Evaluation } from '../src';
+import type { Bounds, Region, ShapeResult } from '../src';
 import { regionBounds } from '../src';
 
 export interface ViewTransform {
@@ -40,7 +40,7 @@ export function fitBounds(b: Bounds, width: number, height: number, margin = 48)
 }
 
 /** Bounds of every shape's own outline (so subtracted or empty results still fit). */
-export function evaluationBounds(ev: Evaluation): Bounds | null {
+export function evaluationBounds(ev: { shapes: readonly ShapeResult[] }): Bounds | null {
   let out: Bounds | null = null;
   const add = (r: Region) => {
     const b = regionBounds(r);

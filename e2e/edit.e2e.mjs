@@ -262,10 +262,17 @@ export const tests = [
       assert.ok((await prop(page, 'area')) > 0);
       await page.click('[data-command="report.open"]');
       await page.waitForSelector('[data-testid="report-overlay"]');
-      await page.waitForFunction(() => {
-        const el = document.querySelector('[data-testid="report-overlay"]');
-        return el && (el.querySelector('iframe') || /report module/.test(el.textContent));
-      });
+      const frame = await (await page.waitForSelector('[data-testid="report-overlay"] iframe')).contentFrame();
+      await frame.waitForSelector('body');
+      const body = await frame.textContent('body');
+      assert.match(body, /Geometric properties only/, 'the report carries the caution');
+      const area = await prop(page, 'area');
+      // The report prints the same digits as the panel (one formatter).
+      const shown = await page.textContent('[data-prop="area"]');
+      assert.ok(body.includes(shown), `report shows the area ${shown} (${area})`);
+      assert.equal(await page.isEnabled('[data-testid="report-overlay"] button:has-text("Print")'), true);
+      await page.click('[data-testid="report-overlay"] button:has-text("Close")');
+      assert.equal(await page.$('[data-testid="report-overlay"]'), null);
     },
   },
 ];

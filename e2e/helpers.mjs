@@ -74,8 +74,9 @@ export async function propUnit(page, key) {
   return page.evaluate((key) => document.querySelector(`[data-prop="${key}"]`).nextElementSibling.textContent, key);
 }
 
-/** Wait two animation frames so the live results caught up. */
+/** Wait until the live results belong to the current document, then two frames for React. */
 export async function settle(page) {
+  await page.waitForFunction(() => window.__kern.editor.results.idle(), null, { polling: 'raf', timeout: 20000 });
   await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(() => r()))));
 }
 

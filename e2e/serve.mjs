@@ -2,6 +2,7 @@
  * Build the app once and serve it with `vite preview` on a free port (no network needed).
  * Used by the e2e runner and the drag benchmark.
  */
+import fs from 'node:fs';
 import net from 'node:net';
 import path from 'node:path';
 import os from 'node:os';
@@ -37,6 +38,7 @@ export async function startApp() {
   const server = await preview({ root: ROOT, logLevel: 'warn', build: { outDir }, preview: { port, strictPort: true, host: '127.0.0.1', open: false } });
   return {
     url: `http://127.0.0.1:${port}/`,
-    close: () => new Promise((resolve) => server.httpServer.close(() => resolve())),
+    close: () =>
+      new Promise((resolve) => server.httpServer.close(() => resolve())).then(() => fs.rmSync(outDir, { recursive: true, force: true })),
   };
 }

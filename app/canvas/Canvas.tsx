@@ -137,20 +137,30 @@ const ResultNode = memo(function ResultNode({ region, v, outline }: { region: Re
 function ShapesLayer() {
   const editor = useEditor();
   const v = useEditorShallow((s) => ({ scale: s.scale, ox: s.ox, oy: s.oy }));
-  const ev = useResults((r) => r.evaluation);
-  const doc = useResults((r) => r.doc);
+  // The combined section may trail a drag by an evaluation; each shape's own outline does not.
+  const region = useResults((r) => r.evaluation.region);
+  const doc = useEditorState((s) => s.doc);
+  const shapes = editor.results.shapesOf(doc);
+  const ops = new Map(doc.shapes.map((s) => [s.id, s.op ?? 'add']));
+  return (
+    <>
+      <ResultNode region={region} v={v} outline={false} />
+      {shapes.map((s) => (
+        <ShapeNode key={s.id} region={s.region} op={ops.get(s.id) ?? 'add'} v={v} error={!!s.error} />
+      ))}
+      <ResultNode region={region} v={v} outline />
+    </>
+  );
+}
+
+/** The grid has a layer of its own: it repaints only when the view changes. */
+function GridLayer() {
+  const v = useEditorShallow((s) => ({ scale: s.scale, ox: s.ox, oy: s.oy }));
   const { width, height } = useEditorShallow((s) => ({ width: s.width, height: s.height }));
   const units = useEditorState((s) => s.doc.units);
-  void editor;
-  const ops = new Map(doc.shapes.map((s) => [s.id, s.op ?? 'add']));
   return (
     <Layer listening={false}>
       <GridNode v={v} width={width} height={height} units={units} />
-      <ResultNode region={ev.region} v={v} outline={false} />
-      {ev.shapes.map((s) => (
-        <ShapeNode key={s.id} region={s.region} op={ops.get(s.id) ?? 'add'} v={v} error={!!s.error} />
-      ))}
-      <ResultNode region={ev.region} v={v} outline />
     </Layer>
   );
 }
@@ -165,12 +175,12 @@ function OverlayLayer() {
   const p = ev.props;
   if (!p) return null;
   return (
-    <Layer listening={false}>
+    <>
       {overlays.cut && cutAt !== null && <CutNode ev={ev} p={p} at={cutAt} v={v} units={units} width={width} />}
       {overlays.fibres && <FibreNode p={p} v={v} units={units} />}
       {overlays.principal && <PrincipalNode p={p} v={v} />}
       {overlays.centroid && <CentroidNode p={p} v={v} />}
-    </Layer>
+    </>
   );
 }
 
@@ -263,7 +273,7 @@ function FibreNode({ p, v, units }: { p: SectionProperties; v: ViewTransform; un
 }
 
 function CutNode({ ev, p, at, v, units, width }: { ev: Evaluation; p: SectionProperties; at: number; v: ViewTransform; units: Units; width: number }) {
-  let cut: ReturnType<typeof cutSection> | null = null;
+  let cut: ReturnType<typeof cutSection> | null;
   try {
     cut = cutSection(ev.region, 'y', at, p);
   } catch {
@@ -308,7 +318,7 @@ function DraftNode({ draft, v }: { draft: Draft; v: ViewTransform }) {
     try {
       region = shapeToRegion(draft.shape);
     } catch {
-      region = null;
+      // a half-drawn outline that is not valid yet: show only its points
     }
   }
   return (
@@ -415,12 +425,12 @@ function SnapNode({ snap, v }: { snap: SnapResult; v: ViewTransform }) {
 }
 
 function SelectionNode({ v }: { v: ViewTransform }) {
+  const editor = useEditor();
   const selected = useEditorState((s) => s.selected);
   const doc = useEditorState((s) => s.doc);
-  const ev = useResults((r) => r.evaluation);
   const hover = useTransient((t) => t.hoverHandle);
   const sel = new Set(selected);
-  const regions = ev.shapes.filter((s) => sel.has(s.id)).map((s) => s.region);
+  const regions = editor.results.shapesOf(doc).filter((s) => sel.has(s.id)).map((s) => s.region);
   const single = selected.length === 1 ? doc.shapes.find((s) => s.id === selected[0]) : undefined;
   const handles = single ? shapeHandles(single) : [];
   return (
@@ -459,11 +469,11 @@ function InteractionLayer() {
   const draft = useTransient((t) => t.draft);
   const snap = useTransient((t) => t.snap);
   return (
-    <Layer listening={false}>
+    <>
       <SelectionNode v={v} />
       {draft && <DraftNode draft={draft} v={v} />}
       {snap && <SnapNode snap={snap} v={v} />}
-    </Layer>
+    </>
   );
 }
 
@@ -577,9 +587,14 @@ export function Canvas() {
       onPointerLeave={() => editor.transient.setState({ pointer: null, snap: null })}
     >
       <Stage width={width} height={height} listening={false}>
-        <ShapesLayer />
-        <OverlayLayer />
-        <InteractionLayer />
+        <GridLayer />
+        {/* One layer (one canvas) for everything that changes during a drag: software
+            compositing copies each changed canvas every frame. */}
+        <Layer listening={false}>
+          <ShapesLayer />
+          <OverlayLayer />
+          <InteractionLayer />
+        </Layer>
       </Stage>
     </div>
   );

@@ -3,7 +3,7 @@
  * hit-testing; snap points (vertices, midpoints, centres, intersections) are computed exactly
  * from the lines and arcs.
  */
-import { angleInSweep, arcFromChord, contourPolyline, type Evaluation, type Region } from '../../src';
+import { angleInSweep, arcFromChord, contourPolyline, type Region, type ShapeResult } from '../../src';
 
 type Poly = Float64Array;
 
@@ -55,9 +55,9 @@ function segDist(px: number, py: number, ax: number, ay: number, bx: number, by:
 }
 
 /** Topmost shape (last in order) under the point, or whose outline is within `near` of it. */
-export function pickShape(ev: Evaluation, x: number, y: number, tol: number, near: number): string | null {
-  for (let k = ev.shapes.length - 1; k >= 0; k--) {
-    const s = ev.shapes[k];
+export function pickShape(shapes: readonly ShapeResult[], x: number, y: number, tol: number, near: number): string | null {
+  for (let k = shapes.length - 1; k >= 0; k--) {
+    const s = shapes[k];
     if (!s.region.length) continue;
     const polys = regionPolylines(s.region, tol);
     if (windingNumber(polys, x, y) !== 0 || distanceToPolylines(polys, x, y) <= near) return s.id;
@@ -152,15 +152,15 @@ export function segmentIntersections(p: Seg, q: Seg): [number, number][] {
   return [];
 }
 
-const snapCache = new WeakMap<Evaluation, { points: SnapPoint[]; withIntersections: boolean }>();
+const snapCache = new WeakMap<readonly ShapeResult[], { points: SnapPoint[]; withIntersections: boolean }>();
 
 /** Every snap point of the evaluation's shapes; intersections between different shapes included. */
-export function snapPoints(ev: Evaluation, intersections: boolean): SnapPoint[] {
-  const hit = snapCache.get(ev);
+export function snapPoints(shapes: readonly ShapeResult[], intersections: boolean): SnapPoint[] {
+  const hit = snapCache.get(shapes);
   if (hit && (hit.withIntersections || !intersections)) return hit.points;
   const points: SnapPoint[] = [];
   const segsByShape: { id: string; segs: Seg[]; boxes: [number, number, number, number][] }[] = [];
-  for (const s of ev.shapes) {
+  for (const s of shapes) {
     const segs = regionSegments(s.region);
     segsByShape.push({ id: s.id, segs, boxes: segs.map(segBox) });
     for (const g of segs) {
@@ -188,6 +188,6 @@ export function snapPoints(ev: Evaluation, intersections: boolean): SnapPoint[] 
       }
     }
   }
-  snapCache.set(ev, { points, withIntersections: intersections });
+  snapCache.set(shapes, { points, withIntersections: intersections });
   return points;
 }

@@ -3,7 +3,7 @@
  * within a few pixels, else to the grid (when on). The orthogonal mode then keeps the point
  * horizontal or vertical from the previous one.
  */
-import type { Evaluation, Point } from '../../src';
+import type { Point, ShapeResult } from '../../src';
 import type { SnapSettings } from '../store/store';
 import { gridStep } from '../view';
 import { snapPoints, type SnapKind } from './geometry';
@@ -27,7 +27,7 @@ const PRIORITY: Record<SnapKind, number> = { vertex: 0, intersection: 0, centre:
 export function snapPointer(
   raw: Point,
   opts: {
-    ev: Evaluation;
+    shapes: readonly ShapeResult[];
     scale: number;
     settings: SnapSettings;
     from?: Point | null;
@@ -51,7 +51,7 @@ export function snapPointer(
   };
   const anyGeometry = settings.vertex || settings.midpoint || settings.centre || settings.intersection;
   if (anyGeometry) {
-    for (const s of snapPoints(opts.ev, settings.intersection)) {
+    for (const s of snapPoints(opts.shapes, settings.intersection)) {
       if (opts.exclude?.has(s.shape)) continue;
       if (s.kind === 'vertex' && !settings.vertex) continue;
       if (s.kind === 'midpoint' && !settings.midpoint) continue;

@@ -55,10 +55,9 @@ function mapSelected(ctx: CommandContext, f: (s: Shape) => Shape): void {
 /** Bounds of the selected shapes' own outlines. */
 export function selectionBounds(ctx: CommandContext): Bounds | null {
   const s = ctx.store.getState();
-  const ev = ctx.evaluate(s.doc);
   const sel = new Set(s.selected);
   let out: Bounds | null = null;
-  for (const r of ev.shapes) {
+  for (const r of ctx.shapesOf(s.doc)) {
     if (!sel.has(r.id)) continue;
     const b = regionBounds(r.region);
     if (!b) continue;
@@ -103,7 +102,7 @@ export function loadDocumentText(ctx: CommandContext, name: string, text: string
 
 export function fitView(ctx: CommandContext): void {
   const s = ctx.store.getState();
-  const b = evaluationBounds(ctx.evaluate(s.doc));
+  const b = evaluationBounds({ shapes: ctx.shapesOf(s.doc) });
   if (!b) return;
   ctx.store.setState(fitBounds(b, s.width, s.height));
 }

@@ -3,7 +3,7 @@
  * dispatcher serve the keyboard, the toolbar and the tests. Registering a key that another
  * command already uses is refused.
  */
-import type { Evaluation, SectionDocument } from '../../src';
+import type { Evaluation, SectionDocument, ShapeResult } from '../../src';
 import type { EditorStore } from '../store/store';
 
 export interface FileIO {
@@ -15,6 +15,8 @@ export interface FileIO {
 export interface CommandContext {
   store: EditorStore;
   evaluate(doc: SectionDocument): Evaluation;
+  /** Each shape's own outline (cheap; no booleans). */
+  shapesOf(doc: SectionDocument): readonly ShapeResult[];
   io?: FileIO;
   /** Opens the report overlay (wired by the app). */
   openReport?(): void;

@@ -28,7 +28,7 @@ export function CutPanel() {
   // The diagram waits for the pointer to rest: it is recomputed only when the evaluation changes.
   const pts = useMemo(() => (on ? diagram(ev) : []), [on, ev]);
   if (!on || !ev.props || at === null) return null;
-  let cut = null;
+  let cut: ReturnType<typeof cutSection> | null;
   try {
     cut = cutSection(ev.region, 'y', at, ev.props);
   } catch {

@@ -3,11 +3,13 @@
  * formatter. Each value carries data-prop (its key) and data-value (the full-precision number).
  */
 import { formatIssue, formatProperty, PROPERTY_CATALOG, UNITS, type PropertyInfo, type Units } from '../../src';
+import { CAUTION_TEXT } from '../../src/report/caution';
 import { useEditor, useEditorState, useResults } from '../store/hooks';
 
 const GROUPS = [...new Set(PROPERTY_CATALOG.map((p) => p.group))];
 
-export const CAUTION = 'Geometric properties only. The design must be checked against the applicable code by a qualified engineer.';
+/** The one caution wording, shared with the CLI and the report. */
+export const CAUTION = CAUTION_TEXT;
 
 function Row({ info }: { info: PropertyInfo }) {
   const props = useResults((r) => r.evaluation.props);

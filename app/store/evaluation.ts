@@ -1,61 +1,200 @@
 /**
  * Live results: the evaluation is derived from the document, never stored in the editor state.
- * `createLiveResults` keeps one incremental evaluator per editor and re-evaluates at most once
- * per animation frame, so pointer handlers only move numbers and never wait for booleans.
+ *
+ * - Each shape's own outline (for drawing, picking and snapping) is computed on the main thread,
+ *   cached by shape identity, so a dragged shape follows the pointer at once.
+ * - The combined section and its properties come from the engine's incremental evaluator. In the
+ *   browser it runs in a worker, latest-document-wins: while one evaluation runs, newer edits
+ *   only replace the next request, so the pointer never waits for booleans. Without workers
+ *   (tests, old browsers) it runs on the main thread once per animation frame.
  */
 import { createStore, type StoreApi } from 'zustand/vanilla';
-import { createEvaluator, type Evaluation, type SectionDocument } from '../../src';
+import { createEvaluator, shapeToRegion, type Evaluation, type SectionDocument, type Shape, type ShapeResult } from '../../src';
 import type { EditorStore } from './store';
+import type { WorkerRequest, WorkerResponse } from './workerProtocol';
 
 export interface LiveResults {
+  /** The document the evaluation belongs to (may trail the store's document during a drag). */
   doc: SectionDocument;
   evaluation: Evaluation;
-  /** Milliseconds the last evaluation took (shown in the status bar). */
+  /** Milliseconds the last evaluation took. */
   lastMs: number;
+  /** Evaluations finished since start (the drag benchmark reads it). */
+  count: number;
 }
 
 export interface ResultsHandle {
   results: StoreApi<LiveResults>;
-  /** Evaluate a document now (cached: the current document costs nothing). */
+  /** Full evaluation of a document now (the current one costs nothing once evaluated). */
   evaluate(doc: SectionDocument): Evaluation;
-  /** Force the pending evaluation to run now. */
-  flush(): void;
+  /** Each shape's own outline, cached by shape identity; the same array for the same document. */
+  shapesOf(doc: SectionDocument): ShapeResult[];
+  /** True when the shown results belong to the store's current document. */
+  idle(): boolean;
   dispose(): void;
 }
 
 type Schedule = (cb: () => void) => void;
 
+/** Pause after each worker evaluation, as a multiple of its duration. */
+const DUTY_GAP = 2;
+
 const defaultSchedule: Schedule =
   typeof requestAnimationFrame === 'function' ? (cb) => requestAnimationFrame(() => cb()) : (cb) => cb();
 
-export function createLiveResults(store: EditorStore, schedule: Schedule = defaultSchedule): ResultsHandle {
+const now = () => (typeof performance !== 'undefined' ? performance.now() : Date.now());
+
+function shapeResult(s: Shape): ShapeResult {
+  try {
+    return { id: s.id, region: shapeToRegion(s) };
+  } catch (e) {
+    return { id: s.id, region: [], error: e instanceof Error ? e.message : String(e) };
+  }
+}
+
+export function createLiveResults(store: EditorStore, opts: { schedule?: Schedule; worker?: boolean } = {}): ResultsHandle {
+  const schedule = opts.schedule ?? defaultSchedule;
   const evaluator = createEvaluator();
-  let lastDoc: SectionDocument | null = null;
-  let lastEval: Evaluation | null = null;
-  const evaluate = (doc: SectionDocument): Evaluation => {
-    if (doc !== lastDoc || !lastEval) {
-      lastEval = evaluator.evaluate(doc);
-      lastDoc = doc;
-    }
-    return lastEval;
+  const shapeCache = new WeakMap<Shape, ShapeResult>();
+  let shapesDoc: SectionDocument | null = null;
+  let shapesList: ShapeResult[] = [];
+  const shapesOf = (doc: SectionDocument): ShapeResult[] => {
+    if (doc === shapesDoc) return shapesList;
+    shapesList = doc.shapes.map((s) => {
+      let r = shapeCache.get(s);
+      if (!r) {
+        r = shapeResult(s);
+        shapeCache.set(s, r);
+      }
+      return r;
+    });
+    shapesDoc = doc;
+    return shapesList;
   };
-  const now = () => (typeof performance !== 'undefined' ? performance.now() : Date.now());
+
+  let syncDoc: SectionDocument | null = null;
+  let syncEval: Evaluation | null = null;
+  const evaluateSync = (doc: SectionDocument): Evaluation => {
+    if (doc !== syncDoc || !syncEval) {
+      const ev = evaluator.evaluate(doc);
+      // Shape outlines from the shared cache: the same records the canvas draws.
+      syncEval = { ...ev, shapes: shapesOf(doc) };
+      syncDoc = doc;
+    }
+    return syncEval;
+  };
+
   const first = store.getState().doc;
   const t0 = now();
-  const results = createStore<LiveResults>()(() => ({ doc: first, evaluation: evaluate(first), lastMs: now() - t0 }));
+  const results = createStore<LiveResults>()(() => ({ doc: first, evaluation: evaluateSync(first), lastMs: now() - t0, count: 1 }));
+  const evaluate = (doc: SectionDocument): Evaluation => {
+    const r = results.getState();
+    return r.doc === doc ? r.evaluation : evaluateSync(doc);
+  };
+
+  const useWorker = opts.worker !== false && typeof Worker === 'function' && typeof window !== 'undefined';
+  let worker: Worker | null = null;
+  if (useWorker) {
+    try {
+      worker = new Worker(new URL('./evalWorker.ts', import.meta.url), { type: 'module' });
+    } catch {
+      worker = null;
+    }
+  }
+
   let pending = false;
-  const run = () => {
+  const syncRun = () => {
     pending = false;
     const doc = store.getState().doc;
     if (doc === results.getState().doc) return;
     const t = now();
-    const evaluation = evaluate(doc);
-    results.setState({ doc, evaluation, lastMs: now() - t });
+    const evaluation = evaluateSync(doc);
+    results.setState({ doc, evaluation, lastMs: now() - t, count: results.getState().count + 1 });
   };
-  const unsub = store.subscribe((s, prev) => {
-    if (s.doc === prev.doc || pending) return;
+  const scheduleSync = () => {
+    if (pending) return;
     pending = true;
-    schedule(run);
-  });
-  return { results, evaluate, flush: run, dispose: unsub };
+    schedule(syncRun);
+  };
+
+  let dispose: () => void;
+  if (worker) {
+    const w = worker;
+    let dead = false;
+    const sent = new Map<string, Shape>();
+    let seq = 0;
+    let inFlight: { seq: number; doc: SectionDocument } | null = null;
+    let queued = false;
+    const send = (doc: SectionDocument) => {
+      const changed: Record<string, Shape> = {};
+      const ids = new Set<string>();
+      for (const s of doc.shapes) {
+        ids.add(s.id);
+        if (sent.get(s.id) !== s) {
+          changed[s.id] = s;
+          sent.set(s.id, s);
+        }
+      }
+      for (const id of [...sent.keys()]) if (!ids.has(id)) sent.delete(id);
+      const { shapes: _shapes, ...meta } = doc;
+      void _shapes;
+      const req: WorkerRequest = { seq: ++seq, meta, order: doc.shapes.map((s) => s.id), changed };
+      inFlight = { seq: req.seq, doc };
+      w.postMessage(req);
+    };
+    // The worker starts with what the main thread evaluated first.
+    send(first);
+    inFlight = null;
+    w.onmessage = (e: MessageEvent<WorkerResponse>) => {
+      const res = e.data;
+      const job = inFlight;
+      if (job && res.seq === job.seq) {
+        inFlight = null;
+        let evaluation: Evaluation;
+        if (res.ok) evaluation = { region: res.region, props: res.props, message: res.message, warnings: res.warnings, shapes: shapesOf(job.doc) };
+        else evaluation = evaluateSync(job.doc); // the worker failed: fall back on the main thread
+        results.setState({ doc: job.doc, evaluation, lastMs: res.ms, count: results.getState().count + 1 });
+      }
+      if (queued || store.getState().doc !== results.getState().doc) {
+        queued = false;
+        // Leave the processor to the pointer for as long as the engine just took (at most
+        // 50% duty): on a small machine a busy worker would otherwise starve the frames.
+        const gap = Math.min(res.ms, 100) * DUTY_GAP;
+        inFlight = { seq: -1, doc: store.getState().doc };
+        setTimeout(() => {
+          inFlight = null;
+          if (store.getState().doc !== results.getState().doc) send(store.getState().doc);
+        }, gap);
+      }
+    };
+    w.onerror = () => {
+      // A worker that cannot start (blocked by the page's policy): evaluate on the main thread.
+      dead = true;
+      inFlight = null;
+      w.terminate();
+      scheduleSync();
+    };
+    const unsub = store.subscribe((s, prev) => {
+      if (s.doc === prev.doc) return;
+      if (dead) scheduleSync();
+      else if (inFlight) queued = true;
+      else send(s.doc);
+    });
+    dispose = () => {
+      unsub();
+      w.terminate();
+    };
+  } else {
+    dispose = store.subscribe((s, prev) => {
+      if (s.doc !== prev.doc) scheduleSync();
+    });
+  }
+
+  return {
+    results,
+    evaluate,
+    shapesOf,
+    idle: () => results.getState().doc === store.getState().doc,
+    dispose,
+  };
 }

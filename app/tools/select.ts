@@ -65,9 +65,8 @@ export class SelectTool implements Tool {
       this.state = { name: 'dragHandle', id: shape.id, ref: shapeHandles(shape)[h].ref, base: s.doc };
       return;
     }
-    const ev = env.results.evaluate(s.doc);
     const tol = 0.5 / s.scale;
-    const id = pickShape(ev, e.raw[0], e.raw[1], tol, 4 / s.scale);
+    const id = pickShape(env.results.shapesOf(s.doc), e.raw[0], e.raw[1], tol, 4 / s.scale);
     if (id) {
       let selected = s.selected;
       if (e.shift) selected = selected.includes(id) ? selected.filter((x) => x !== id) : [...selected, id];
@@ -134,8 +133,8 @@ export class SelectTool implements Tool {
       const x0 = Math.min(st.start[0], e.raw[0]), x1 = Math.max(st.start[0], e.raw[0]);
       const y0 = Math.min(st.start[1], e.raw[1]), y1 = Math.max(st.start[1], e.raw[1]);
       if ((x1 - x0) * s.scale < DRAG_PX && (y1 - y0) * s.scale < DRAG_PX) return;
-      const ev = env.results.evaluate(s.doc);
-      const inside = ev.shapes
+      const inside = env.results
+        .shapesOf(s.doc)
         .filter((r) => {
           const b = regionBounds(r.region);
           return b && b.xmin >= x0 && b.xmax <= x1 && b.ymin >= y0 && b.ymax <= y1;

@@ -18,11 +18,12 @@ export function ReportOverlay() {
       .then((render) => {
         if (!live) return;
         if (!render) {
-          setProblem('The report module is not part of this build yet (app/report.ts looks for renderReportHtml in src/report/).');
+          setProblem('The report module is not available in this build.');
           return;
         }
-        const doc = editor.store.getState().doc;
-        setHtml(render(doc, editor.results.evaluate(doc), { units: doc.units }));
+        const s = editor.store.getState();
+        const cut = s.overlays.cut && s.cutAt !== null ? { axis: 'y' as const, at: s.cutAt } : null;
+        setHtml(render({ doc: s.doc, evaluation: editor.results.evaluate(s.doc), cut, generated: new Date().toISOString().slice(0, 16).replace('T', ' ') }));
       })
       .catch((e) => live && setProblem(`The report could not be made: ${(e as Error).message}`));
     return () => {

@@ -1,0 +1,27 @@
+/**
+ * The evaluation worker: keeps its own shape records (replaced only when the editor sends a
+ * changed one), so the engine's incremental evaluator sees unchanged shapes as identical objects
+ * and repeats no work for them. Runs off the main thread so the pointer never waits.
+ */
+import { createEvaluator, type SectionDocument, type Shape } from '../../src';
+import type { WorkerRequest, WorkerResponse } from './workerProtocol';
+
+const evaluator = createEvaluator();
+const shapes = new Map<string, Shape>();
+
+self.onmessage = (e: MessageEvent<WorkerRequest>) => {
+  const req = e.data;
+  for (const [id, s] of Object.entries(req.changed)) shapes.set(id, s);
+  const keep = new Set(req.order);
+  for (const id of [...shapes.keys()]) if (!keep.has(id)) shapes.delete(id);
+  const doc: SectionDocument = { ...req.meta, shapes: req.order.map((id) => shapes.get(id)!) };
+  const t = performance.now();
+  let res: WorkerResponse;
+  try {
+    const ev = evaluator.evaluate(doc);
+    res = { seq: req.seq, ok: true, region: ev.region, props: ev.props, message: ev.message, warnings: ev.warnings, ms: performance.now() - t };
+  } catch (err) {
+    res = { seq: req.seq, ok: false, error: err instanceof Error ? err.message : String(err), ms: performance.now() - t };
+  }
+  (self as unknown as Worker).postMessage(res);
+};

@@ -1,0 +1,14 @@
+/** Messages between the editor and the evaluation worker. */
+import type { Issue, Region, SectionDocument, SectionProperties, Shape } from '../../src';
+
+export interface WorkerRequest {
+  seq: number;
+  meta: Omit<SectionDocument, 'shapes'>;
+  order: string[];
+  /** Shapes that differ (by identity) from what the worker holds. */
+  changed: Record<string, Shape>;
+}
+
+export type WorkerResponse =
+  | { seq: number; ok: true; region: Region; props: SectionProperties | null; message: string | null; warnings: Issue[]; ms: number }
+  | { seq: number; ok: false; error: string; ms: number };
