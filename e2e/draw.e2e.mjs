@@ -4,7 +4,7 @@
  * step is 10 mm and clicks land on exact coordinates.
  */
 import assert from 'node:assert/strict';
-import { clickWorld, close, docShapes, focusCanvas, open, pagePoint, prop, setField, settle, typeInput } from './helpers.mjs';
+import { clickWorld, close, docShapes, focusCanvas, open, pagePoint, prop, setField, typeInput } from './helpers.mjs';
 
 const PI = Math.PI;
 

@@ -4,7 +4,7 @@
  * merging, handles and the report. Closed forms are named beside each check.
  */
 import assert from 'node:assert/strict';
-import { clickWorld, close, doc, docShapes, focusCanvas, open, pagePoint, prop, propUnit, setField, settle, typeInput } from './helpers.mjs';
+import { close, doc, docShapes, focusCanvas, open, pagePoint, prop, propUnit, settle, typeInput } from './helpers.mjs';
 
 const PI = Math.PI;
 const plateAndHole = (op) =>
