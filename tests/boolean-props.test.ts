@@ -5,7 +5,7 @@
 import fc from 'fast-check';
 import polygonClipping, { type MultiPolygon, type Polygon } from 'polygon-clipping';
 import { describe, expect, it } from 'vitest';
-import { booleanRegions } from '../src/boolean';
+import { booleanRegions, resolveOutline } from '../src/boolean';
 import type { Contour, Region } from '../src/geometry/contour';
 import { regionMoments } from '../src/moments/kernel';
 import { bulgedPolygon, circle, maxRelDiff, plateWithHole, rect, ring, rotated, roundedRect, sumMoments } from './fixtures/boolean/shapes';
@@ -181,6 +181,36 @@ describe('straight-sided polygons against polygon-clipping', () => {
         }
       }),
       { numRuns: 300, seed: 42 },
+    );
+  });
+});
+
+describe('fuzzed garbage input never throws or yields NaN', () => {
+  // Project rule: fuzzed input never crashes the engine or yields NaN (no external value needed:
+  // the check is that every output number is finite and every bulge is within [-1, 1]).
+  const num = fc.oneof(
+    fc.double({ min: -2, max: 2, noNaN: true }),
+    fc.constantFrom(0, 1, -1, 0.5, 1e-300, -1e-300, 1e12, Number.NaN, Number.POSITIVE_INFINITY),
+    fc.integer({ min: -2, max: 2 }),
+  );
+  const contourArb = fc
+    .array(fc.tuple(num, num, fc.oneof(fc.constant(0), num, fc.double({ min: -5, max: 5, noNaN: true }))), { minLength: 0, maxLength: 7 })
+    .map((v) => ({ xy: Float64Array.from(v.flatMap((p) => [p[0], p[1]])), bulge: Float64Array.from(v.map((p) => p[2])) }) as Contour);
+  const regionArb = fc.array(contourArb, { minLength: 0, maxLength: 3 });
+  it('booleanRegions and resolveOutline', () => {
+    fc.assert(
+      fc.property(regionArb, fc.array(regionArb, { maxLength: 3 }), fc.constantFrom('union', 'difference', 'intersection') as fc.Arbitrary<'union' | 'difference' | 'intersection'>, (a, clips, op) => {
+        const outs = [booleanRegions(a, clips, op), resolveOutline(a).region];
+        for (const r of outs) {
+          for (const c of r) {
+            for (const v of c.xy) expect(Number.isFinite(v)).toBe(true);
+            if (c.bulge) for (const b of c.bulge) expect(Math.abs(b) <= 1 + 1e-12).toBe(true);
+          }
+          const m = regionMoments(r);
+          for (const v of Object.values(m)) expect(Number.isFinite(v)).toBe(true);
+        }
+      }),
+      { numRuns: 400, seed: 99 },
     );
   });
 });

@@ -640,7 +640,7 @@ function tracePath(ctx: Ctx, path: IntPoint[]): Contour | null {
     if (want > 0 && d < 0) d += 2 * Math.PI;
     else if (want < 0 && d > 0) d -= 2 * Math.PI;
     if (Math.abs(d) > Math.PI * (1 + 1e-12)) pushArc(oxy, ob, ax, ay, bx, by, d);
-    else ob.push(Math.tan(d / 4));
+    else ob.push(Math.max(-1, Math.min(1, Math.tan(d / 4)))); // a half circle may round past 1
   }
   const n = ob.length;
   if (n < 2) return null;

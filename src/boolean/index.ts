@@ -17,6 +17,20 @@ function boundsOverlap(ba: Bounds | null, b: Region): boolean {
   return !(bb.xmin > ba.xmax || bb.xmax < ba.xmin || bb.ymin > ba.ymax || bb.ymax < ba.ymin);
 }
 
+/** True when every number is finite and every bulge within [-1, 1] (safe to hand back as is). */
+function isClean(r: Region): boolean {
+  for (const c of r) {
+    for (const v of c.xy) if (!Number.isFinite(v)) return false;
+    if (c.bulge) for (const b of c.bulge) if (!(Math.abs(b) <= 1)) return false;
+  }
+  return true;
+}
+
+/** A region returned unchanged, or rebuilt when it holds unusable numbers. */
+function passThrough(r: Region): Region {
+  return isClean(r) ? r.slice() : runBoolean([{ contours: r, group: 0 }], 'union').region;
+}
+
 /** subject OP (union of clips). Inputs: well-formed regions (signed contours). */
 export function booleanRegions(subject: Region, clips: Region[], op: BoolOp): Region {
   let cl = clips.filter((c) => c.length > 0);
@@ -24,9 +38,9 @@ export function booleanRegions(subject: Region, clips: Region[], op: BoolOp): Re
     // Clips that cannot touch the subject change nothing.
     const sb = regionBounds(subject);
     cl = cl.filter((c) => boundsOverlap(sb, c));
-    if (cl.length === 0) return op === 'difference' ? subject.slice() : [];
+    if (cl.length === 0) return op === 'difference' ? passThrough(subject) : [];
     if (subject.length === 0) return [];
-  } else if (cl.length === 0) return subject.slice();
+  } else if (cl.length === 0) return passThrough(subject);
   const clipContours: Contour[] = [];
   for (const r of cl) for (const c of r) clipContours.push(c);
   return runBoolean([{ contours: subject, group: 0 }, { contours: clipContours, group: 1 }], op).region;
