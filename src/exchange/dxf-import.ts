@@ -220,6 +220,9 @@ function importUnsafe(text: string, opts: DxfImportOptions): DxfImport {
   const contours: Contour[] = [];
   const areas: number[] = [];
   const kept: JoinedLoop[] = [];
+  // Loops seen so far, by the grid cell of their bounding box's lower-left corner, to find repeats.
+  const seen = new Map<string, number[]>();
+  const cell = 8 * tol;
   for (const loop of joined.loops) {
     let c = contourFrom(loop.xy, loop.bulge);
     const n = c.xy.length >> 1;
@@ -229,14 +232,30 @@ function importUnsafe(text: string, opts: DxfImportOptions): DxfImport {
       continue;
     }
     if (a < 0) c = reverseContour(c);
-    // A loop that repeats an earlier one (same area and bounds) is left out.
-    const dup = contours.findIndex((d, i) => Math.abs(areas[i] - Math.abs(a)) <= 1e-9 * Math.abs(a) && sameBox(d, c, tol));
+    // A loop that repeats an earlier one (same area and vertex box) is left out.
+    const box = vertexBox(c);
+    const ci = Math.floor(box[0] / cell), cj = Math.floor(box[2] / cell);
+    let dup = -1;
+    for (let di = -1; di <= 1 && dup < 0; di++) {
+      for (let dj = -1; dj <= 1 && dup < 0; dj++) {
+        for (const k of seen.get(`${ci + di},${cj + dj}`) ?? []) {
+          if (Math.abs(areas[k] - Math.abs(a)) <= 1e-9 * Math.abs(a) && vertexBox(contours[k]).every((v, i) => Math.abs(v - box[i]) <= tol)) {
+            dup = k;
+            break;
+          }
+        }
+      }
+    }
     if (dup >= 0) {
       for (const s of loop.sources) {
         problems.push({ source: s, message: `repeats the outline of ${describeSource(kept[dup].sources[0])} and was left out`, points: loop.xy.slice() });
       }
       continue;
     }
+    const key = `${ci},${cj}`;
+    const list = seen.get(key);
+    if (list) list.push(contours.length);
+    else seen.set(key, [contours.length]);
     contours.push(c);
     areas.push(Math.abs(a));
     kept.push(loop);
@@ -279,19 +298,17 @@ function pairs(xy: number[]): [number, number][] {
   return out;
 }
 
-function sameBox(a: Contour, b: Contour, tol: number): boolean {
-  const box = (c: Contour) => {
-    let x0 = Infinity, x1 = -Infinity, y0 = Infinity, y1 = -Infinity;
-    for (let i = 0; i < c.xy.length; i += 2) {
-      x0 = Math.min(x0, c.xy[i]);
-      x1 = Math.max(x1, c.xy[i]);
-      y0 = Math.min(y0, c.xy[i + 1]);
-      y1 = Math.max(y1, c.xy[i + 1]);
-    }
-    return [x0, x1, y0, y1];
-  };
-  const p = box(a), q = box(b);
-  return p.every((v, i) => Math.abs(v - q[i]) <= tol);
+/** [xmin, xmax, ymin, ymax] of a contour's vertices. */
+function vertexBox(c: Contour): [number, number, number, number] {
+  let x0 = Infinity, x1 = -Infinity, y0 = Infinity, y1 = -Infinity;
+  for (let i = 0; i < c.xy.length; i += 2) {
+    const x = c.xy[i], y = c.xy[i + 1];
+    if (x < x0) x0 = x;
+    if (x > x1) x1 = x;
+    if (y < y0) y0 = y;
+    if (y > y1) y1 = y;
+  }
+  return [x0, x1, y0, y1];
 }
 
 function scalePiece(p: Piece, k: number): void {
