@@ -693,6 +693,7 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
   buildCarriers(ctx, groups);
   buildArrangement(ctx);
   const { subj, clip } = buildPaths(ctx);
+  ClipperLib.use_xyz = true; // module-wide flag: set again in case another user turned it off
   const cpr = new ClipperLib.Clipper();
   cpr.ZFillFunction = (b1, t1, b2, t2, pt) => {
     ctx.zf.push(b1.Z ?? 0, t1.Z ?? 0, b2.Z ?? 0, t2.Z ?? 0);
