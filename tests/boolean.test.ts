@@ -223,6 +223,34 @@ describe('composite sections built by union', () => {
   });
 });
 
+describe('exact placement', () => {
+  it('surviving source vertices keep their exact coordinates; new vertices lie on both carriers', () => {
+    // Exactness contract of the module (no external value: bitwise equality with the inputs and
+    // the analytic line-circle intersection, Gere & Goodno App. D circle x^2 + y^2 = r^2).
+    const a = rect(0.1234567891234, -0.3333333333333, 2.7182818284590, 1.4142135623730);
+    const cx = 2.2360679774997, cy = 1.7320508075688, r = 0.9;
+    const out = booleanRegions([a], [[circle(cx, cy, r)]], 'union');
+    const src = new Set<string>();
+    for (const c of [a, circle(cx, cy, r)]) for (let i = 0; i < c.xy.length; i += 2) src.add(`${c.xy[i]},${c.xy[i + 1]}`);
+    let kept = 0, cut = 0;
+    for (const c of out) {
+      for (let i = 0; i < c.xy.length; i += 2) {
+        const x = c.xy[i], y = c.xy[i + 1];
+        if (src.has(`${x},${y}`)) kept++;
+        else {
+          cut++;
+          // A new vertex: on the circle and on an edge of the rectangle.
+          expect(Math.abs(Math.hypot(x - cx, y - cy) - r)).toBeLessThan(1e-15 * 4);
+          const onEdge = Math.min(Math.abs(x - 2.7182818284590), Math.abs(y - 1.4142135623730));
+          expect(onEdge).toBeLessThan(1e-15 * 4);
+        }
+      }
+    }
+    expect(kept).toBeGreaterThanOrEqual(4);
+    expect(cut).toBe(2);
+  });
+});
+
 describe('degenerate inputs never throw or give NaN', () => {
   const sq = (x: number, y: number, s = 1) => [rect(x, y, x + s, y + s)];
   const ops = ['union', 'difference', 'intersection'] as const;
