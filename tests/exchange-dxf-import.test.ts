@@ -278,6 +278,8 @@ describe('LINE and ARC entities in random order', () => {
     expect(far.shapes).toHaveLength(0);
     expect(far.problems.length).toBe(8);
     expect(far.problems.some((p) => /open end/.test(p.message))).toBe(true);
+    // The message gives the size of the gap so the user knows what tolerance would close it.
+    expect(far.problems.some((p) => /nearest other end is 0.00001 away/.test(p.message))).toBe(true);
   });
 });
 

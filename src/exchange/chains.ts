@@ -188,13 +188,19 @@ export function joinPieces(pieces: Piece[], tol: number): JoinResult {
     else byGroup.set(g, [k]);
   });
 
+  let hinted = 0;
   for (const list of byGroup.values()) {
     const bad: string[] = [];
     for (const k of list) {
       for (const e of [2 * k, 2 * k + 1]) {
         const m = members.get(node[e])!;
         const at = `(${fmt(pts[2 * e])}, ${fmt(pts[2 * e + 1])})`;
-        if (m.length === 1) bad.push(`open end at ${at}: no other entity ends within ${fmt(tol)}`);
+        if (m.length === 1) {
+          // The gap size helps choose a tolerance; searched for the first 200 loose ends only.
+          const near = hinted++ < 200 ? nearestOtherEnd(pts, e) : Infinity;
+          const hint = Number.isFinite(near) ? ` (the nearest other end is ${fmt(near)} away)` : '';
+          bad.push(`open end at ${at}: no other entity ends within ${fmt(tol)}${hint}`);
+        }
         else if (m.length > 2) bad.push(`${m.length} ends meet at ${at}, so the outline branches and cannot be closed`);
       }
     }
@@ -207,6 +213,18 @@ export function joinPieces(pieces: Piece[], tol: number): JoinResult {
     loops.push(walk(open, list[0], pts, node, members));
   }
   return { loops, unjoined };
+}
+
+/** Distance from end e to the nearest end of any other piece (Infinity if there is none). */
+function nearestOtherEnd(pts: number[], e: number): number {
+  const x = pts[2 * e], y = pts[2 * e + 1];
+  let best = Infinity;
+  for (let q = 0; q < pts.length >> 1; q++) {
+    if (q >> 1 === e >> 1) continue;
+    const d = Math.hypot(pts[2 * q] - x, pts[2 * q + 1] - y);
+    if (d < best) best = d;
+  }
+  return best;
 }
 
 /** Walk a closed group from piece `first`, joining each end to the other end at its node. */
