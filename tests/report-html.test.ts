@@ -92,6 +92,15 @@ describe('numbers against closed forms', () => {
     // 100 mm wide fits 1:1 (ISO 5455 full size) in the 144 mm wide drawing area.
     expect(html).toContain('data-scale="1:1"');
   });
+
+  test('Q/b at the neutral axis of a b × h rectangle: Q = bh²/8, Q/b = h²/8 (Gere & Goodno, shear formula)', () => {
+    const doc: SectionDocument = { format: 'kern-section', version: 1, units: 'mm', shapes: [{ id: 'r', type: 'rectangle', at: [0, 0], width: 100, height: 50 }] };
+    const html = render(doc, { axis: 'y', at: 25 });
+    const cell = (label: string) => new RegExp(`<td>${label}</td><td class="num">([^<]*)</td>`).exec(html)?.[1];
+    expect(cell('First moment Q of that area about the centroidal axis')).toBe(formatNumber((100 * 50 ** 2) / 8));
+    expect(cell('Q/b')).toBe(formatNumber(50 ** 2 / 8));
+    expect(cell('Cut width b')).toBe('100');
+  });
 });
 
 describe('escaping: document strings are text, never markup', () => {
