@@ -51,11 +51,16 @@ interface Ctx {
   carriers: Carrier[];
   /** Per contour: the carrier ids in order. */
   loops: { group: number; ids: number[] }[];
+  /** Per carrier: first and last carrier id of its loop (ids of one loop are consecutive). */
+  loopLo: number[];
+  loopHi: number[];
+  /** Inputs are well-formed loops: neighbours on a loop meet only at their shared vertex. */
+  trustLoops: boolean;
   nx: number[];
   ny: number[];
   ncar: number[][];
   parent: number[];
-  splits: number[][];
+  splits: (number[] | null)[];
   /** Per carrier: largest chord sagitta allowed (absolute). */
   sag: number[];
   contact: boolean;
@@ -157,13 +162,17 @@ function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
         car.n0 = nodes[i];
         car.n1 = nodes[j];
         ctx.carriers.push(car);
-        ctx.splits.push([]);
+        ctx.splits.push(null);
         ctx.sag.push(car.kind === ARC ? SAG_MAX * car.r : 0);
         ctx.ncar[nodes[i]].push(id);
         ctx.ncar[nodes[j]].push(id);
         ids.push(id);
       }
       ctx.loops.push({ group: g.group, ids });
+      for (let k = 0; k < ids.length; k++) {
+        ctx.loopLo.push(ids[0]);
+        ctx.loopHi.push(ids[ids.length - 1]);
+      }
     }
   }
 }
@@ -176,7 +185,7 @@ function endpointNode(ctx: Ctx, c: Carrier, x: number, y: number): number {
 }
 
 function addSplit(ctx: Ctx, c: Carrier, node: number): void {
-  ctx.splits[c.id].push(node);
+  (ctx.splits[c.id] ??= []).push(node);
   ctx.ncar[node].push(c.id);
 }
 
@@ -284,6 +293,10 @@ function buildArrangement(ctx: Ctx): void {
       const b = cs[order[q]];
       if (b.xmin > a.xmax + eps) break;
       if (b.ymin > a.ymax + eps || b.ymax < a.ymin - eps) continue;
+      if (ctx.trustLoops && ctx.loopLo[a.id] === ctx.loopLo[b.id]) {
+        const d = Math.abs(a.id - b.id);
+        if (d === 1 || d === ctx.loopHi[a.id] - ctx.loopLo[a.id]) continue;
+      }
       intersectPair(ctx, a, b);
     }
   }
@@ -338,7 +351,7 @@ function buildPaths(ctx: Ctx): { subj: IntPoint[][]; clip: IntPoint[][] } {
       if (r0 === r1) continue; // collapsed by merging
       const own = [id];
       const inner: { u: number; n: number }[] = [];
-      for (const s of ctx.splits[id]) {
+      for (const s of ctx.splits[id] ?? []) {
         const rs = find(ctx, s);
         if (rs === r0 || rs === r1) continue;
         const u = paramOf(c, ctx.nx[rs], ctx.ny[rs]);
@@ -687,7 +700,7 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
   const scale = INT_RANGE / ext;
   const ctx: Ctx = {
     mode, ext, eps: REL_EPS * ext, unit: 1 / scale, ox: (xmin + xmax) / 2, oy: (ymin + ymax) / 2, scale,
-    carriers: [], loops: [], nx: [], ny: [], ncar: [], parent: [], splits: [], sag: [], contact: false,
+    carriers: [], loops: [], nx: [], ny: [], ncar: [], parent: [], splits: [], sag: [], contact: false, loopLo: [], loopHi: [], trustLoops: mode !== 'evenodd',
     rx: [], ry: [], rX: [], rY: [], rExact: [], rCar: [], zf: [],
   };
   buildCarriers(ctx, groups);
