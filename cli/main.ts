@@ -16,6 +16,7 @@ import {
   type SectionDocument,
   type SectionProperties,
 } from '../src';
+import { CAUTION_TEXT } from '../src/report/caution';
 
 const USAGE = `Usage:
   kern props FILE [--json]                 section properties of a section document (.json)
@@ -25,7 +26,8 @@ const USAGE = `Usage:
   kern inertia FILE --through X,Y --angle DEG [--json]
                                            moment of inertia about the axis through (X, Y) at DEG
                                            degrees from +x (parallel-axis transfer)
-  kern report FILE --out report.html [--pdf out.pdf]
+  kern report FILE --out report.html [--pdf out.pdf] [--cut y=VALUE|x=VALUE] [--paper a4|letter]
+                                           self-contained HTML report, optionally printed to PDF
 Options: --units U  (mm, cm, m, in, ft) for a DXF file that does not state its units`;
 
 export class UsageError extends Error {}
@@ -133,7 +135,6 @@ async function evaluateFile(file: string | undefined, units: string | undefined)
   return { doc: loaded.doc, ev, props: ev.props, warnings: loaded.warnings };
 }
 
-const CAUTION = 'Geometric properties only. The design must be checked against the applicable code by a qualified engineer.';
 
 export async function main(argv: string[]): Promise<number> {
   const [cmd, ...rest] = argv;
@@ -153,7 +154,7 @@ export async function main(argv: string[]): Promise<number> {
       out(`${r.doc.name ?? a.positional[0]} (${r.doc.units})`);
       out(table(rows));
       for (const w of [...r.warnings, ...r.ev.warnings.map(formatIssue)]) out(`warning: ${w}`);
-      out(CAUTION);
+      out(CAUTION_TEXT);
       return 0;
     }
     if (cmd === 'cut') {

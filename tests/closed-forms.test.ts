@@ -6,7 +6,7 @@
  */
 import { afterAll, describe, it } from 'vitest';
 import { contourFrom, polygonContour, reverseContour, rotateRegion } from '../src/geometry/contour';
-import { cutSection, inertiaAboutAxis } from '../src/properties/section';
+import { cutSection, inertiaAboutAxis, principal } from '../src/properties/section';
 import { circle, close, props, rect, sector, segment, worst } from './helpers';
 
 const PI = Math.PI;
@@ -288,4 +288,17 @@ describe('shear flow quantities at a cut', () => {
 
 afterAll(() => {
   console.log(`closed-forms: largest relative error ${worst.value.toExponential(2)}`);
+});
+
+describe('principal angle conventions', () => {
+  it('a section with Iy > Ix and Ixy = ±round-off reports θ = 90°', () => {
+    // Gere & Goodno, Sec. 12.8: θp from tan 2θp = −2Ixy/(Ix − Iy); with Ixy = 0 and Iy > Ix the
+    // major axis is the y axis. The range (−90°, 90°] makes that +90°, never −90°.
+    for (const eps of [1e-17, -1e-17, 0]) {
+      const p = principal(2, 5, eps);
+      close(p.theta, Math.PI / 2, 1e-15);
+      close(p.I1, 5, 1e-15);
+    }
+    close(principal(5, 2, 0).theta, 0, 1e-15, 1);
+  });
 });

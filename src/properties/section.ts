@@ -55,8 +55,11 @@ export function principal(Ix: number, Iy: number, Ixy: number) {
   const half = (Ix - Iy) / 2;
   const R = Math.hypot(half, Ixy);
   let theta = 0;
-  // Isotropic sections (circle, square, ...) have every axis principal: report θ = 0.
-  if (R > 1e-12 * Math.abs(avg)) theta = Math.atan2(-Ixy, half) / 2;
+  // Isotropic sections (circle, square, ...) have every axis principal: report θ = 0. A product
+  // of inertia that is zero up to round-off counts as zero, so a section with Iy > Ix reports
+  // θ = 90° whichever sign the round-off had.
+  const ixy = Math.abs(Ixy) <= 1e-14 * (Math.abs(Ix) + Math.abs(Iy)) ? 0 : Ixy;
+  if (R > 1e-12 * Math.abs(avg)) theta = Math.atan2(-ixy, half) / 2;
   if (theta <= -Math.PI / 2) theta += Math.PI;
   return { I1: avg + R, I2: avg - R, theta };
 }
