@@ -6,7 +6,7 @@
 import { memo, useEffect, useRef } from 'react';
 import { Layer, Shape as KShape, Stage } from 'react-konva';
 import type Konva from 'konva';
-import { shapeToRegion, formatNumber, type Evaluation, type Op, type Region, type SectionProperties, type Units } from '../../src';
+import { shapeToRegion, formatNumber, formatProperty, PROPERTY_CATALOG, type Evaluation, type Op, type Region, type SectionProperties, type Units } from '../../src';
 import { useEditor, useEditorShallow, useEditorState, useResults, useTransient } from '../store/hooks';
 import { shapeHandles } from '../shapes';
 import { gridStep, toWorld, zoomAt, type ViewTransform } from '../view';
@@ -16,6 +16,18 @@ import { INK, hatch, opStyle, traceRegion } from './paint';
 import { cutSection } from '../../src';
 
 type SceneFn = (ctx: CanvasRenderingContext2D) => void;
+
+const THETA = PROPERTY_CATALOG.find((i) => i.key === 'theta')!;
+
+/** Text on a pale plate so it reads over hatching and grid. */
+function label(ctx: CanvasRenderingContext2D, text: string, x: number, y: number, color: string) {
+  ctx.font = '11px ui-sans-serif, system-ui, sans-serif';
+  const w = ctx.measureText(text).width;
+  ctx.fillStyle = 'rgba(245, 244, 239, 0.88)';
+  ctx.fillRect(x - 3, y - 11, w + 6, 15);
+  ctx.fillStyle = color;
+  ctx.fillText(text, x, y);
+}
 
 /** A Konva shape that paints with a plain 2D context. */
 function Paint({ paint }: { paint: SceneFn }) {
@@ -233,7 +245,7 @@ function PrincipalNode({ p, v }: { p: SectionProperties; v: ViewTransform }) {
           ctx.fillText(name, x + dx + 4, y + dy - 4);
         }
         ctx.setLineDash([]);
-        ctx.fillText(`θ = ${formatNumber(p.theta, 4)}°`, x + 10, y + 16);
+        ctx.fillText(`θ = ${formatProperty(THETA, p, 'mm').text}°`, x + 10, y + 16);
       }}
     />
   );
@@ -263,10 +275,12 @@ function FibreNode({ p, v, units }: { p: SectionProperties; v: ViewTransform; un
         ctx.stroke();
         ctx.setLineDash([]);
         const f = (n: number) => `${formatNumber(n, 4)} ${units}`;
-        ctx.fillText(`c top ${f(p.fibres.top)}`, X(b.xmax) + pad + 4, Y(b.ymax) + 4);
-        ctx.fillText(`c bottom ${f(p.fibres.bottom)}`, X(b.xmax) + pad + 4, Y(b.ymin) + 4);
-        ctx.fillText(`c left ${f(p.fibres.left)}`, X(b.xmin) - 4 - 90, Y(b.ymax) - pad - 4);
-        ctx.fillText(`c right ${f(p.fibres.right)}`, X(b.xmax) + 4, Y(b.ymax) - pad - 4);
+        label(ctx, `c top ${f(p.fibres.top)}`, X(b.xmax) + pad + 4, Y(b.ymax) + 4, INK.fibre);
+        label(ctx, `c bottom ${f(p.fibres.bottom)}`, X(b.xmax) + pad + 4, Y(b.ymin) + 4, INK.fibre);
+        const left = `c left ${f(p.fibres.left)}`;
+        ctx.font = '11px ui-sans-serif, system-ui, sans-serif';
+        label(ctx, left, X(b.xmin) - ctx.measureText(left).width - 6, Y(b.ymax) - pad - 4, INK.fibre);
+        label(ctx, `c right ${f(p.fibres.right)}`, X(b.xmax) + 6, Y(b.ymax) - pad - 4, INK.fibre);
       }}
     />
   );
@@ -303,9 +317,8 @@ function CutNode({ ev, p, at, v, units, width }: { ev: Evaluation; p: SectionPro
         ctx.fillStyle = INK.cut;
         ctx.fillRect(6, sy - 5, 10, 10);
         if (cut) {
-          ctx.font = '11px ui-sans-serif, system-ui, sans-serif';
-          const t = `cut y = ${formatNumber(at, 5)}   b = ${formatNumber(cut.width, 5)} ${units}   Q = ${formatNumber(cut.Q, 5)} ${units}³   A beyond = ${formatNumber(cut.area, 5)} ${units}²`;
-          ctx.fillText(t, 22, sy - 6);
+          const t = `cut y = ${formatNumber(at, 5)}   b = ${formatNumber(cut.width, 5)} ${units}   Q = ${formatNumber(cut.Q, 5)} ${units}³   A above = ${formatNumber(cut.area, 5)} ${units}²`;
+          label(ctx, t, 24, sy - 7, INK.cut);
         }
       }}
     />

@@ -34,7 +34,7 @@ export function CutPanel() {
   } catch {
     cut = null;
   }
-  const W = 280, H = 150, pad = 26;
+  const W = 300, H = 150, pad = 30;
   const b = ev.props.bounds;
   const qMax = Math.max(...pts.map((p) => Math.abs(p.Q)), 1e-300);
   const wMax = Math.max(...pts.map((p) => p.width), 1e-300);
@@ -58,11 +58,13 @@ export function CutPanel() {
         <path d={line((p) => XW(p.width))} className="plot-b" />
         <path d={line((p) => XQ(p.Q))} className="plot-q" />
         <line x1={pad} x2={W - pad} y1={Y(at)} y2={Y(at)} className="plot-cut" />
-        <text x={W - pad} y={12} textAnchor="end" className="plot-legend q">Q (max {formatNumber(qMax, 4)} {units}³)</text>
-        <text x={W - pad} y={24} textAnchor="end" className="plot-legend b">b (max {formatNumber(wMax, 4)} {units})</text>
         <text x={4} y={Y(b.ymax) + 4} className="plot-tick">{formatNumber(b.ymax, 4)}</text>
         <text x={4} y={Y(b.ymin)} className="plot-tick">{formatNumber(b.ymin, 4)}</text>
       </svg>
+      <p className="plot-legend-row">
+        <span className="plot-key q">Q</span> first moment above the cut, max {formatNumber(qMax, 4)} {units}³ ·{' '}
+        <span className="plot-key b">b</span> width, max {formatNumber(wMax, 4)} {units}; depth runs upwards
+      </p>
     </section>
   );
 }

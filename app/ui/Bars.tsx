@@ -10,9 +10,11 @@ export function TopBar() {
   return (
     <header className="topbar">
       <div className="brand">
-        <span className="brand-mark" aria-hidden>
-          ⌖
-        </span>
+        <svg className="brand-mark" width="18" height="18" viewBox="0 0 18 18" aria-hidden>
+          {/* A section outline with its centroid: the product in one glyph. */}
+          <path d="M3 3h12v3H10.5v6H15v3H3v-3h4.5V6H3z" fill="none" stroke="currentColor" strokeWidth="1.4" />
+          <circle cx="9" cy="9" r="1.6" fill="currentColor" />
+        </svg>
         Kern
       </div>
       <div className="doc-name" title="Section name">
