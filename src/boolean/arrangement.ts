@@ -1,0 +1,220 @@
+/**
+ * Steps 1 and 2: exact carriers from the source contours, then every contact between carriers
+ * (crossings, touches, overlaps) computed once and shared as an exact node by both sides.
+ */
+import { arcFromChord, pushArc } from '../geometry/contour';
+import {
+  ARC, curveIntersections, distToCarrier, implicitAt, makeArc, makeLine, paramOf, polishIntersection,
+  sameCurve, type Carrier,
+} from './carriers';
+import { type Ctx, type SourceGroup, find, union, newNode, SAG_MAX, SAG_FLOOR, FLAT_RADIUS } from './context';
+
+/** Step 1: carriers and vertex nodes from the source contours. */
+export function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
+  const eps = ctx.eps;
+  for (const g of groups) {
+    for (const c of g.contours) {
+      const n = c.xy.length >> 1;
+      if (n < 2) continue;
+      // Expand arcs over 180 degrees, then drop repeated vertices (zero-length edges).
+      const xy: number[] = [], bl: number[] = [];
+      for (let i = 0; i < n; i++) {
+        const ax = c.xy[2 * i], ay = c.xy[2 * i + 1];
+        const j = (i + 1) % n;
+        const bx = c.xy[2 * j], by = c.xy[2 * j + 1];
+        const b = c.bulge ? c.bulge[i] : 0;
+        if (!Number.isFinite(ax) || !Number.isFinite(ay)) continue;
+        xy.push(ax, ay);
+        if (Number.isFinite(b) && b !== 0 && Math.abs(b) > 1) pushArc(xy, bl, ax, ay, bx, by, 4 * Math.atan(b));
+        else bl.push(Number.isFinite(b) ? b : 0);
+      }
+      const vx: number[] = [], vy: number[] = [], vb: number[] = [];
+      const m0 = xy.length >> 1;
+      for (let i = 0; i < m0; i++) {
+        const x = xy[2 * i], y = xy[2 * i + 1];
+        const k = vx.length;
+        if (k > 0 && Math.hypot(x - vx[k - 1], y - vy[k - 1]) <= eps) {
+          vb[k - 1] = bl[i]; // the zero-length edge goes; the next edge starts at the kept vertex
+          continue;
+        }
+        vx.push(x);
+        vy.push(y);
+        vb.push(bl[i]);
+      }
+      // Closing duplicates; the surviving last vertex keeps its own outgoing bulge only if distinct.
+      while (vx.length > 1 && Math.hypot(vx[vx.length - 1] - vx[0], vy[vy.length - 1] - vy[0]) <= eps) {
+        vx.pop();
+        vy.pop();
+        vb.pop();
+      }
+      const m = vx.length;
+      if (m < 2) continue;
+      const nodes: number[] = [];
+      for (let i = 0; i < m; i++) nodes.push(newNode(ctx, vx[i], vy[i]));
+      const ids: number[] = [];
+      for (let i = 0; i < m; i++) {
+        const j = (i + 1) % m;
+        const ax = vx[i], ay = vy[i], bx = vx[j], by = vy[j];
+        const L = Math.hypot(bx - ax, by - ay);
+        const b = vb[i];
+        const id = ctx.carriers.length;
+        let car: Carrier;
+        // A nearly flat arc (radius far beyond the extent, where centre-based formulas lose
+        // their digits) is traced as its chord and gets its sweep back on output.
+        const phi = b !== 0 ? 4 * Math.atan(b) : 0;
+        const rr = phi !== 0 ? L / (2 * Math.sin(Math.abs(phi) / 2)) : Infinity;
+        if (phi !== 0 && rr <= FLAT_RADIUS * ctx.ext) {
+          const { cx, cy, r } = arcFromChord(ax, ay, bx, by, phi);
+          car = makeArc(id, g.group, ax, ay, bx, by, cx, cy, r, phi);
+        } else car = makeLine(id, g.group, ax, ay, bx, by, phi);
+        car.n0 = nodes[i];
+        car.n1 = nodes[j];
+        ctx.carriers.push(car);
+        ctx.splits.push(null);
+        ctx.sag.push(car.kind === ARC ? SAG_MAX * car.r : 0);
+        ctx.ncar[nodes[i]].push(id);
+        ctx.ncar[nodes[j]].push(id);
+        ids.push(id);
+      }
+      ctx.loops.push({ group: g.group, ids });
+      for (let k = 0; k < ids.length; k++) {
+        ctx.loopLo.push(ids[0]);
+        ctx.loopHi.push(ids[ids.length - 1]);
+      }
+    }
+  }
+}
+
+function endpointNode(ctx: Ctx, c: Carrier, x: number, y: number): number {
+  const d0 = Math.hypot(x - c.ax, y - c.ay), d1 = Math.hypot(x - c.bx, y - c.by);
+  if (d0 <= ctx.eps && d0 <= d1) return c.n0;
+  if (d1 <= ctx.eps) return c.n1;
+  return -1;
+}
+
+function addSplit(ctx: Ctx, c: Carrier, node: number): void {
+  (ctx.splits[c.id] ??= []).push(node);
+  ctx.ncar[node].push(c.id);
+}
+
+/** A common point p of carriers a and b: share it as one exact node. */
+function sharePoint(ctx: Ctx, a: Carrier, b: Carrier, x: number, y: number): void {
+  const ea = endpointNode(ctx, a, x, y), eb = endpointNode(ctx, b, x, y);
+  if (ea >= 0 && eb >= 0) {
+    if (find(ctx, ea) !== find(ctx, eb)) {
+      union(ctx, ea, eb);
+      ctx.contact = true;
+    }
+    return;
+  }
+  ctx.contact = true;
+  if (ea >= 0) addSplit(ctx, b, ea);
+  else if (eb >= 0) addSplit(ctx, a, eb);
+  else {
+    const n = newNode(ctx, x, y);
+    addSplit(ctx, a, n);
+    addSplit(ctx, b, n);
+  }
+}
+
+function intersectPair(ctx: Ctx, a: Carrier, b: Carrier): void {
+  const eps = ctx.eps;
+  if (sameCurve(a, b, eps)) {
+    // Overlapping collinear lines or co-circular arcs: each one's ends split the other.
+    if (distToCarrier(a, b.ax, b.ay) <= eps) sharePoint(ctx, a, b, b.ax, b.ay);
+    if (distToCarrier(a, b.bx, b.by) <= eps) sharePoint(ctx, a, b, b.bx, b.by);
+    if (distToCarrier(b, a.ax, a.ay) <= eps) sharePoint(ctx, a, b, a.ax, a.ay);
+    if (distToCarrier(b, a.bx, a.by) <= eps) sharePoint(ctx, a, b, a.bx, a.by);
+    return;
+  }
+  if (a.kind === ARC && b.kind === ARC) refineNested(ctx, a, b);
+  if (a.kind === ARC) refineNearVertex(ctx, a, b);
+  if (b.kind === ARC) refineNearVertex(ctx, b, a);
+  const pts = curveIntersections(a, b, eps);
+  for (let k = 0; k < pts.length; k += 2) {
+    let x = pts[k], y = pts[k + 1];
+    let ea = endpointNode(ctx, a, x, y), eb = endpointNode(ctx, b, x, y);
+    // Neighbours meeting at their shared vertex: nothing to do.
+    if (ea >= 0 && eb >= 0 && find(ctx, ea) === find(ctx, eb)) continue;
+    [x, y] = polishIntersection(a, b, x, y);
+    // Prefer an exact source vertex that lies on the other carrier (touching vertex).
+    ea = endpointNode(ctx, a, x, y);
+    eb = endpointNode(ctx, b, x, y);
+    if (ea >= 0) {
+      x = ctx.nx[ea];
+      y = ctx.ny[ea];
+    } else if (eb >= 0) {
+      x = ctx.nx[eb];
+      y = ctx.ny[eb];
+    }
+    if (distExact(a, x, y) <= eps && distExact(b, x, y) <= eps) sharePoint(ctx, a, b, x, y);
+  }
+}
+
+/** Distance to the carrier's true curve within its range (a flat arc is not its chord here). */
+function distExact(c: Carrier, x: number, y: number): number {
+  if (c.kind === ARC || c.flat === 0) return distToCarrier(c, x, y);
+  const u = paramOf(c, x, y);
+  if (u < 0 || u > 1) return Math.min(Math.hypot(x - c.ax, y - c.ay), Math.hypot(x - c.bx, y - c.by));
+  const [f, gx, gy] = implicitAt(c, x, y);
+  return Math.abs(f) / Math.hypot(gx, gy);
+}
+
+/**
+ * Nested, nearly tangent circles: the outer arc's chords cut inwards by up to the sagitta and
+ * would cross the inner arc where the exact arcs do not meet. Refine the outer arc's chords so
+ * that their sagitta stays below the gap (down to a floor; below it, tracing snaps the crossings).
+ */
+function refineNested(ctx: Ctx, a: Carrier, b: Carrier): void {
+  const D = Math.hypot(a.cx - b.cx, a.cy - b.cy);
+  const gap = Math.abs(a.r - b.r) - D;
+  const outer = a.r >= b.r ? a : b;
+  if (!(gap > 0) || gap >= 2 * SAG_MAX * outer.r) return;
+  const want = Math.max(gap / 2.5, SAG_FLOOR * outer.r);
+  if (want < ctx.sag[outer.id]) ctx.sag[outer.id] = want;
+}
+
+/**
+ * A vertex of b just inside arc a (closer than a's chord sagitta) would poke out of a's chords.
+ * Refine a so that its chords pass inside the vertex.
+ */
+function refineNearVertex(ctx: Ctx, a: Carrier, b: Carrier): void {
+  for (let k = 0; k < 2; k++) {
+    const x = k === 0 ? b.ax : b.bx, y = k === 0 ? b.ay : b.by;
+    const gap = a.r - Math.hypot(x - a.cx, y - a.cy);
+    if (!(gap > ctx.eps) || gap >= 1.5 * ctx.sag[a.id]) continue;
+    const u = paramOf(a, x, y);
+    if (u < 0 || u > 1) continue;
+    const want = Math.max(gap / 2.5, SAG_FLOOR * a.r);
+    if (want < ctx.sag[a.id]) ctx.sag[a.id] = want;
+  }
+}
+
+/** Step 2: all pairwise contacts, with a sweep over x as the broad phase. */
+export function buildArrangement(ctx: Ctx): void {
+  const cs = ctx.carriers;
+  const order = cs.map((_, i) => i).sort((i, j) => cs[i].xmin - cs[j].xmin);
+  const eps = ctx.eps;
+  for (let p = 0; p < order.length; p++) {
+    const a = cs[order[p]];
+    for (let q = p + 1; q < order.length; q++) {
+      const b = cs[order[q]];
+      if (b.xmin > a.xmax + eps) break;
+      if (b.ymin > a.ymax + eps || b.ymax < a.ymin - eps) continue;
+      if (ctx.trustLoops && ctx.loopLo[a.id] === ctx.loopLo[b.id]) {
+        const d = Math.abs(a.id - b.id);
+        if (d === 1 || d === ctx.loopHi[a.id] - ctx.loopLo[a.id]) continue;
+      }
+      intersectPair(ctx, a, b);
+    }
+  }
+  // Merged nodes: the representative carries every member's carriers.
+  const nn = ctx.nx.length;
+  for (let i = 0; i < nn; i++) {
+    const r = find(ctx, i);
+    if (r !== i) {
+      for (const c of ctx.ncar[i]) if (!ctx.ncar[r].includes(c)) ctx.ncar[r].push(c);
+      ctx.ncar[i] = [];
+    }
+  }
+}

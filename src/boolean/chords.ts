@@ -1,0 +1,88 @@
+/**
+ * Step 3: integer chord paths for clipper. Each carrier is cut at its nodes, arc pieces become
+ * short chords, and every point is tagged (Z = record index + 1) with its vertex record.
+ */
+import type { IntPoint } from 'clipper-lib';
+import { ARC, paramOf, pointAt } from './carriers';
+import { type Ctx, find, MAX_STEP, SAG_MAX } from './context';
+
+function pushVertex(ctx: Ctx, path: IntPoint[], x: number, y: number, exact: boolean, car: number[]): void {
+  const X = Math.round((x - ctx.ox) * ctx.scale), Y = Math.round((y - ctx.oy) * ctx.scale);
+  const last = path.length ? path[path.length - 1] : null;
+  if (last && last.X === X && last.Y === Y) {
+    mergeRecord(ctx, (last.Z as number) - 1, x, y, exact, car);
+    return;
+  }
+  const id = ctx.rx.length;
+  ctx.rx.push(x);
+  ctx.ry.push(y);
+  ctx.rX.push(X);
+  ctx.rY.push(Y);
+  ctx.rExact.push(exact);
+  ctx.rCar.push(car);
+  path.push({ X, Y, Z: id + 1 });
+}
+
+function mergeRecord(ctx: Ctx, id: number, x: number, y: number, exact: boolean, car: number[]): void {
+  if (exact && !ctx.rExact[id]) {
+    ctx.rx[id] = x;
+    ctx.ry[id] = y;
+    ctx.rExact[id] = true;
+  }
+  const merged = ctx.rCar[id].slice();
+  for (const c of car) if (!merged.includes(c)) merged.push(c);
+  ctx.rCar[id] = merged;
+}
+
+/** Step 3: integer chord paths, one per source contour. */
+export function buildPaths(ctx: Ctx): { subj: IntPoint[][]; clip: IntPoint[][] } {
+  const subj: IntPoint[][] = [], clip: IntPoint[][] = [];
+  const cs = ctx.carriers;
+  for (const loop of ctx.loops) {
+    const path: IntPoint[] = [];
+    for (const id of loop.ids) {
+      const c = cs[id];
+      const r0 = find(ctx, c.n0), r1 = find(ctx, c.n1);
+      if (r0 === r1) continue; // collapsed by merging
+      const own = [id];
+      const inner: { u: number; n: number }[] = [];
+      for (const s of ctx.splits[id] ?? []) {
+        const rs = find(ctx, s);
+        if (rs === r0 || rs === r1) continue;
+        const u = paramOf(c, ctx.nx[rs], ctx.ny[rs]);
+        inner.push({ u: Math.min(1, Math.max(0, u)), n: rs });
+      }
+      inner.sort((p, q) => p.u - q.u);
+      const seq: { u: number; n: number }[] = [{ u: 0, n: r0 }];
+      for (const s of inner) if (s.n !== seq[seq.length - 1].n) seq.push(s);
+      seq.push({ u: 1, n: r1 });
+      for (let k = 0; k + 1 < seq.length; k++) {
+        const nd = seq[k].n;
+        pushVertex(ctx, path, ctx.nx[nd], ctx.ny[nd], true, ctx.ncar[nd]);
+        if (c.kind !== ARC) continue;
+        const ua = seq[k].u, ub = seq[k + 1].u;
+        const dphi = Math.abs(c.phi) * (ub - ua);
+        const sr = ctx.sag[id] / c.r;
+        const step = sr >= SAG_MAX ? MAX_STEP : 2 * Math.acos(1 - sr);
+        let cnt = Math.ceil(dphi / step);
+        // At least two chords while the piece is visibly curved at the integer scale.
+        if (cnt < 2 && c.r * (1 - Math.cos(dphi / 2)) * ctx.scale > 0.5) cnt = 2;
+        for (let j = 1; j < cnt; j++) {
+          const [x, y] = pointAt(c, ua + ((ub - ua) * j) / cnt);
+          pushVertex(ctx, path, x, y, false, own);
+        }
+      }
+    }
+    // Close: a last vertex equal to the first merges into it.
+    while (path.length > 1) {
+      const a = path[path.length - 1], b = path[0];
+      if (a.X !== b.X || a.Y !== b.Y) break;
+      const ra = (a.Z as number) - 1;
+      mergeRecord(ctx, (b.Z as number) - 1, ctx.rx[ra], ctx.ry[ra], ctx.rExact[ra], ctx.rCar[ra]);
+      path.pop();
+    }
+    if (path.length < 3) continue;
+    (loop.group === 0 ? subj : clip).push(path);
+  }
+  return { subj, clip };
+}

@@ -1,0 +1,86 @@
+/**
+ * Shared state of one boolean call: tolerances, carriers, exact nodes (with union-find for
+ * coincident points), per-carrier split points and the vertex records behind clipper's Z tags.
+ */
+import type { Carrier } from './carriers';
+import type { Contour } from '../geometry/contour';
+
+export type Mode = 'union' | 'difference' | 'intersection' | 'evenodd';
+
+/** Largest integer coordinate used (clipper JS leaves its fast path above 47453132). */
+export const INT_RANGE = 4e7;
+/** Largest angle (radians) spanned by one chord: sagitta <= (1 - cos(0.1)) r ~ 5e-3 r. */
+export const MAX_STEP = 0.2;
+export const SAG_MAX = 1 - Math.cos(MAX_STEP / 2);
+/** Smallest relative sagitta used when refining near-tangent arcs (caps the chord count). */
+export const SAG_FLOOR = 1e-6;
+/** Arcs with a radius above this multiple of the extent are traced as their chords. */
+export const FLAT_RADIUS = 1e5;
+/** Exact-geometry tolerance relative to the extent: points closer than this are one point. */
+export const REL_EPS = 1e-10;
+
+export interface SourceGroup {
+  contours: readonly Contour[];
+  group: number;
+}
+
+export interface Ctx {
+  mode: Mode;
+  ext: number;
+  eps: number;
+  unit: number;
+  ox: number;
+  oy: number;
+  scale: number;
+  carriers: Carrier[];
+  /** Per contour: the carrier ids in order. */
+  loops: { group: number; ids: number[] }[];
+  /** Per carrier: first and last carrier id of its loop (ids of one loop are consecutive). */
+  loopLo: number[];
+  loopHi: number[];
+  /** Inputs are well-formed loops: neighbours on a loop meet only at their shared vertex. */
+  trustLoops: boolean;
+  nx: number[];
+  ny: number[];
+  ncar: number[][];
+  parent: number[];
+  splits: (number[] | null)[];
+  /** Per carrier: largest chord sagitta allowed (absolute). */
+  sag: number[];
+  contact: boolean;
+  // Vertex records (one per clipper input point); Z = index + 1.
+  rx: number[];
+  ry: number[];
+  rX: number[];
+  rY: number[];
+  rExact: boolean[];
+  rCar: number[][];
+  // ZFill records: four vertex Zs per crossing.
+  zf: number[];
+}
+
+export function find(ctx: Ctx, n: number): number {
+  const p = ctx.parent;
+  while (p[n] !== n) {
+    p[n] = p[p[n]];
+    n = p[n];
+  }
+  return n;
+}
+
+export function union(ctx: Ctx, a: number, b: number): void {
+  a = find(ctx, a);
+  b = find(ctx, b);
+  if (a === b) return;
+  if (a < b) ctx.parent[b] = a;
+  else ctx.parent[a] = b;
+}
+
+export function newNode(ctx: Ctx, x: number, y: number): number {
+  const id = ctx.nx.length;
+  ctx.nx.push(x);
+  ctx.ny.push(y);
+  ctx.ncar.push([]);
+  ctx.parent.push(id);
+  return id;
+}

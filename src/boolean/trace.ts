@@ -1,0 +1,289 @@
+/**
+ * Step 5: clipper output paths back to exact contours. Each output edge is traced to its carrier
+ * (tags first, geometry and exact side probes when tags are missing or ambiguous), runs on one
+ * carrier become one exact segment, and run ends land on exact nodes or carrier intersections.
+ */
+import type { IntPoint } from 'clipper-lib';
+import { pushArc, type Contour } from '../geometry/contour';
+import { regionMomentsAbout } from '../moments/kernel';
+import {
+  ARC, LINE, curveIntersections, distToCarrier, distToCurve, nearestPoint, paramOf, polishIntersection,
+  sameCurve, windingOf, wrapAngle, type Carrier,
+} from './carriers';
+import { type Ctx, find, SAG_MAX } from './context';
+
+function intersectLists(a: number[], b: number[]): number[] {
+  const out: number[] = [];
+  for (const x of a) if (b.includes(x)) out.push(x);
+  return out;
+}
+
+function unionLists(a: number[], b: number[]): number[] {
+  const out = a.slice();
+  for (const x of b) if (!out.includes(x)) out.push(x);
+  return out;
+}
+
+function recCarriers(ctx: Ctx, z: number | undefined): number[] {
+  if (!z || z <= 0 || z > ctx.rCar.length) return [];
+  return ctx.rCar[z - 1];
+}
+
+function edgeCarriers(ctx: Ctx, zb: number | undefined, zt: number | undefined): number[] {
+  const a = recCarriers(ctx, zb), b = recCarriers(ctx, zt);
+  const common = intersectLists(a, b);
+  return common.length ? common : unionLists(a, b);
+}
+
+/** Exact classification of a point against the operation's result. */
+function classify(ctx: Ctx, x: number, y: number): boolean {
+  let w0 = 0, w1 = 0;
+  for (const c of ctx.carriers) {
+    if (c.group === 0) w0 += windingOf(c, x, y);
+    else w1 += windingOf(c, x, y);
+  }
+  switch (ctx.mode) {
+    case 'union': return w0 !== 0 || w1 !== 0;
+    case 'difference': return w0 !== 0 && w1 === 0;
+    case 'intersection': return w0 !== 0 && w1 !== 0;
+    default: return (w0 & 1) === 1;
+  }
+}
+
+/** Midpoint of carrier c between the points p and q that lie on it. */
+function pieceMid(c: Carrier, px: number, py: number, qx: number, qy: number): [number, number] {
+  if (c.kind === LINE) return [(px + qx) / 2, (py + qy) / 2];
+  const tp = Math.atan2(py - c.cy, px - c.cx);
+  const d = wrapAngle(Math.atan2(qy - c.cy, qx - c.cx) - tp);
+  // The piece lies inside the carrier's sweep: choose the direction that keeps it there.
+  const up = paramOf(c, px, py), uq = paramOf(c, qx, qy);
+  let dd = d;
+  const want = Math.sign(c.phi) * Math.sign(uq - up);
+  if (want > 0 && dd < 0) dd += 2 * Math.PI;
+  else if (want < 0 && dd > 0) dd -= 2 * Math.PI;
+  const t = tp + dd / 2;
+  return [c.cx + c.r * Math.cos(t), c.cy + c.r * Math.sin(t)];
+}
+
+/**
+ * Several carriers join p and q (a sliver thinner than a chord, coincident edges, or an arc and its
+ * own chord): the true boundary has the result just on its left and not on its right. Each
+ * candidate is probed at the middle of its piece, closer to it than to any other candidate.
+ */
+function resolveTie(ctx: Ctx, all: number[], px: number, py: number, qx: number, qy: number): number {
+  const cs = ctx.carriers;
+  // Coincident carriers (same line or same circle) are interchangeable: keep one of each.
+  const cands: number[] = [];
+  for (const c of all) if (!cands.some((d) => sameCurve(cs[c], cs[d], ctx.eps))) cands.push(c);
+  if (cands.length === 1) return cands[0];
+  const L = Math.hypot(qx - px, qy - py);
+  if (!(L > 0)) return cands[0];
+  const nx = -(qy - py) / L, ny = (qx - px) / L; // left normal; the tangent at a piece middle is parallel to q - p
+  const mids = cands.map((c) => pieceMid(cs[c], px, py, qx, qy));
+  let fallback = -1;
+  for (let k = 0; k < cands.length; k++) {
+    const [mx, my] = mids[k];
+    let delta = 0.25 * L;
+    for (let o = 0; o < cands.length; o++) {
+      if (o === k) continue;
+      const d = Math.hypot(mids[o][0] - mx, mids[o][1] - my);
+      if (d > 100 * ctx.eps) delta = Math.min(delta, 0.25 * d);
+    }
+    if (!(delta > 10 * ctx.eps)) continue;
+    const left = classify(ctx, mx + delta * nx, my + delta * ny);
+    const right = classify(ctx, mx - delta * nx, my - delta * ny);
+    if (left && !right) return cands[k];
+    if (fallback < 0 && left !== right) fallback = k;
+  }
+  return cands[fallback >= 0 ? fallback : 0];
+}
+
+function carrierTol(ctx: Ctx, c: Carrier): number {
+  // Chord sagitta for an arc; for a flat arc traced as its chord, the arc's own sagitta.
+  const sag = c.kind === ARC ? SAG_MAX * c.r * 1.5 : (Math.abs(c.flat) * c.len) / 6;
+  return 3 * ctx.unit + sag + ctx.eps;
+}
+
+function assignEdge(ctx: Ctx, si: number[], sj: number[], px: number, py: number, qx: number, qy: number): number {
+  const cs = ctx.carriers;
+  // The clipper edge is one chord: its ends and its middle lie on the carrier to chord accuracy
+  // (this tells an arc from a line that joins the same two points).
+  const mx = (px + qx) / 2, my = (py + qy) / 2;
+  const fits = (c: number): boolean => {
+    const t = carrierTol(ctx, cs[c]);
+    return distToCarrier(cs[c], mx, my) <= t && distToCarrier(cs[c], px, py) <= t && distToCarrier(cs[c], qx, qy) <= t;
+  };
+  // Fast path: both ends are plain chord points (or nodes) of one and the same carrier.
+  if (si.length === 1 && sj.length === 1 && si[0] === sj[0]) return si[0];
+  let common = intersectLists(si, sj);
+  if (common.length === 1 && fits(common[0])) return common[0];
+  common = common.filter(fits);
+  // Collinear vertices dropped by clipper: the edge may span several carriers of one line.
+  const pool = common.length ? common : unionLists(si, sj);
+  const fit = common.length ? common : pool.filter(fits);
+  if (fit.length === 1) return fit[0];
+  if (fit.length > 1) return resolveTie(ctx, fit, px, py, qx, qy);
+  // Nothing fits within tolerance: the carrier nearest to both ends (all carriers if no tags).
+  const search = pool.length ? pool : cs.map((c) => c.id);
+  let best = search[0], bd = Infinity;
+  for (const c of search) {
+    const d = Math.max(distToCurve(cs[c], px, py), distToCurve(cs[c], qx, qy), distToCurve(cs[c], mx, my));
+    if (d < bd) {
+      bd = d;
+      best = c;
+    }
+  }
+  return best;
+}
+
+/** Exact position of the vertex where carrier a hands over to carrier b. */
+function placeVertex(ctx: Ctx, a: number, b: number, px: number, py: number, exact: boolean, car: number[]): [number, number] {
+  if (exact && car.includes(a) && car.includes(b)) return [px, py];
+  const ca = ctx.carriers[a], cb = ctx.carriers[b];
+  // Carriers that share a source vertex (or a merged node) meet there exactly.
+  for (const na of [ca.n0, ca.n1]) {
+    const ra = find(ctx, na);
+    if (ra !== find(ctx, cb.n0) && ra !== find(ctx, cb.n1)) continue;
+    const x = ctx.nx[ra], y = ctx.ny[ra];
+    if (Math.hypot(x - px, y - py) <= 8 * ctx.unit) return [x, y];
+  }
+  if (!sameCurve(ca, cb, ctx.eps)) {
+    const pts = curveIntersections(ca, cb, 1e3 * ctx.eps);
+    const k = nearestPoint(pts, px, py);
+    if (k >= 0) {
+      const [x, y] = polishIntersection(ca, cb, pts[k], pts[k + 1]);
+      let lim = 8 * ctx.unit;
+      if (ca.kind === ARC) lim += 0.2 * ca.r;
+      if (cb.kind === ARC) lim += 0.2 * cb.r;
+      if (Math.hypot(x - px, y - py) <= lim) return [x, y];
+    }
+    // Near-tangent circles with no common point: the point of closest approach.
+    if (ca.kind === ARC && cb.kind === ARC) {
+      const d = Math.hypot(cb.cx - ca.cx, cb.cy - ca.cy);
+      if (d > 0) {
+        // Apart: towards the other centre. Nested: the small circle's far side, the big one's near side.
+        const nested = d < Math.abs(ca.r - cb.r) + ctx.eps;
+        const sgn = !nested || ca.r >= cb.r ? 1 : -1;
+        const ux = (cb.cx - ca.cx) / d, uy = (cb.cy - ca.cy) / d;
+        const x = ca.cx + sgn * ca.r * ux, y = ca.cy + sgn * ca.r * uy;
+        if (Math.hypot(x - px, y - py) <= 0.2 * Math.min(ca.r, cb.r) + 8 * ctx.unit) return [x, y];
+      }
+    }
+  }
+  if (exact) return [px, py];
+  return projectOnto(ca, px, py);
+}
+
+function projectOnto(c: Carrier, x: number, y: number): [number, number] {
+  if (c.kind === LINE) {
+    const u = paramOf(c, x, y);
+    return [c.ax + u * (c.bx - c.ax), c.ay + u * (c.by - c.ay)];
+  }
+  const d = Math.hypot(x - c.cx, y - c.cy);
+  if (d === 0) return [c.ax, c.ay];
+  return [c.cx + ((x - c.cx) * c.r) / d, c.cy + ((y - c.cy) * c.r) / d];
+}
+
+/** Carriers passing through (x, y) within tolerance: the fallback for a missing or wrong tag. */
+function carriersNear(ctx: Ctx, x: number, y: number): number[] {
+  const out: number[] = [];
+  for (const c of ctx.carriers) {
+    const t = carrierTol(ctx, c);
+    if (x < c.xmin - t || x > c.xmax + t || y < c.ymin - t || y > c.ymax + t) continue;
+    if (distToCarrier(c, x, y) <= t) out.push(c.id);
+  }
+  return out;
+}
+
+/** Step 5: one clipper output path back to an exact contour (or null when degenerate). */
+export function tracePath(ctx: Ctx, path: IntPoint[]): Contour | null {
+  const m = path.length;
+  if (m < 3) return null;
+  const px = new Float64Array(m), py = new Float64Array(m);
+  const ex: boolean[] = new Array(m);
+  const sets: number[][] = new Array(m);
+  for (let i = 0; i < m; i++) {
+    const p = path[i];
+    const z = p.Z ?? 0;
+    px[i] = p.X / ctx.scale + ctx.ox;
+    py[i] = p.Y / ctx.scale + ctx.oy;
+    ex[i] = false;
+    if (z > 0 && z <= ctx.rx.length) {
+      const r = z - 1;
+      // A tag is trusted only when it belongs to this very point.
+      if (ctx.rX[r] === p.X && ctx.rY[r] === p.Y) {
+        px[i] = ctx.rx[r];
+        py[i] = ctx.ry[r];
+        ex[i] = ctx.rExact[r];
+        sets[i] = ctx.rCar[r];
+      } else sets[i] = [];
+    } else if (z < 0 && -z * 4 <= ctx.zf.length) {
+      const k = (-z - 1) * 4;
+      sets[i] = unionLists(edgeCarriers(ctx, ctx.zf[k], ctx.zf[k + 1]), edgeCarriers(ctx, ctx.zf[k + 2], ctx.zf[k + 3]));
+    } else sets[i] = [];
+    if (sets[i].length === 0) sets[i] = carriersNear(ctx, px[i], py[i]);
+  }
+  const edge = new Int32Array(m);
+  for (let i = 0; i < m; i++) {
+    const j = i + 1 === m ? 0 : i + 1;
+    edge[i] = assignEdge(ctx, sets[i], sets[j], px[i], py[i], px[j], py[j]);
+  }
+  let start = -1;
+  for (let i = 0; i < m; i++) {
+    if (edge[i] !== edge[(i + m - 1) % m]) {
+      start = i;
+      break;
+    }
+  }
+  if (start < 0) return null; // one carrier cannot close a loop
+  // Run starts (vertex indices) and their carriers.
+  const runV: number[] = [], runC: number[] = [];
+  for (let k = 0; k < m; k++) {
+    const i = (start + k) % m;
+    if (k === 0 || edge[i] !== edge[(i + m - 1) % m]) {
+      runV.push(i);
+      runC.push(edge[i]);
+    }
+  }
+  const R = runV.length;
+  const vx: number[] = [], vy: number[] = [];
+  for (let k = 0; k < R; k++) {
+    const i = runV[k];
+    const prev = runC[(k + R - 1) % R];
+    const [x, y] = placeVertex(ctx, prev, runC[k], px[i], py[i], ex[i], sets[i]);
+    vx.push(x);
+    vy.push(y);
+  }
+  // Segments; zero-length ones are dropped.
+  const oxy: number[] = [], ob: number[] = [];
+  for (let k = 0; k < R; k++) {
+    const k2 = (k + 1) % R;
+    const ax = vx[k], ay = vy[k], bx = vx[k2], by = vy[k2];
+    if (Math.hypot(bx - ax, by - ay) <= ctx.eps) continue;
+    const c = ctx.carriers[runC[k]];
+    oxy.push(ax, ay);
+    if (c.kind === LINE) {
+      if (c.flat === 0) ob.push(0);
+      else ob.push(Math.tan((c.flat * (paramOf(c, bx, by) - paramOf(c, ax, ay))) / 4));
+      continue;
+    }
+    const u0 = paramOf(c, ax, ay), u1 = paramOf(c, bx, by);
+    let d = wrapAngle(Math.atan2(by - c.cy, bx - c.cx) - Math.atan2(ay - c.cy, ax - c.cx));
+    const want = Math.sign(c.phi) * Math.sign(u1 - u0);
+    if (want > 0 && d < 0) d += 2 * Math.PI;
+    else if (want < 0 && d > 0) d -= 2 * Math.PI;
+    if (Math.abs(d) > Math.PI * (1 + 1e-12)) pushArc(oxy, ob, ax, ay, bx, by, d);
+    else ob.push(Math.max(-1, Math.min(1, Math.tan(d / 4)))); // a half circle may round past 1
+  }
+  const n = ob.length;
+  if (n < 2) return null;
+  let anyArc = false;
+  for (const b of ob) if (b !== 0 && Number.isFinite(b)) anyArc = true;
+  if (n === 2 && !anyArc) return null;
+  const ct: Contour = { xy: Float64Array.from(oxy), bulge: anyArc ? Float64Array.from(ob) : null };
+  for (const v of ct.xy) if (!Number.isFinite(v)) return null;
+  if (ct.bulge) for (const v of ct.bulge) if (!Number.isFinite(v)) return null;
+  const A = regionMomentsAbout([ct], ct.xy[0], ct.xy[1]).m00;
+  if (!(Math.abs(A) > 4 * ctx.unit * ctx.unit)) return null; // zero-area sliver
+  return ct;
+}
