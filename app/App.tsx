@@ -51,6 +51,12 @@ export function App({ editor }: { editor: Editor }) {
         return;
       }
       const st = editor.store.getState();
+      if (k === 'escape' && st.tool !== 'select') {
+        // Escape with nothing half-drawn leaves the drawing tool.
+        e.preventDefault();
+        editor.run('tool.select');
+        return;
+      }
       const drawing = st.tool !== 'select';
       if (!e.ctrlKey && !e.metaKey && !e.altKey && TYPED_START.test(e.key) && (drawing || (e.key === '@' && st.selected.length))) {
         const input = document.getElementById('typed-input') as HTMLInputElement | null;
