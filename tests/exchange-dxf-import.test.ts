@@ -516,3 +516,79 @@ describe('other entity forms', () => {
     expect(r.problems[0].handle).toBe('<img src=x>');
   });
 });
+
+// ---------------------------------------------------------------------------------------------
+describe('block references and hidden layers', () => {
+  // A block "BOLTHOLE" (base point (1, 1)) holding a circle r = 2.5 centred on (1, 1) and a nested
+  // block "MARK" with a short construction LINE on layer HIDDEN, which is switched off (colour −7).
+  const tables = ['0', 'SECTION', '2', 'TABLES', '0', 'TABLE', '2', 'LAYER', '70', 2,
+    '0', 'LAYER', '2', 'PLATE', '70', 0, '62', 7,
+    '0', 'LAYER', '2', 'HIDDEN', '70', 0, '62', -7,
+    '0', 'ENDTAB', '0', 'ENDSEC'];
+  const blocks = ['0', 'SECTION', '2', 'BLOCKS',
+    '0', 'BLOCK', '8', '0', '2', 'BOLTHOLE', '70', 0, '10', 1, '20', 1, '30', 0,
+    '0', 'CIRCLE', '5', 'B1', '8', '0', '10', 1, '20', 1, '30', 0, '40', 2.5,
+    '0', 'INSERT', '5', 'B2', '8', '0', '2', 'MARK', '10', 1, '20', 1, '30', 0,
+    '0', 'ENDBLK', '5', 'B3', '8', '0',
+    '0', 'BLOCK', '8', '0', '2', 'MARK', '70', 0, '10', 0, '20', 0, '30', 0,
+    '0', 'LINE', '5', 'B4', '8', 'HIDDEN', '10', -1, '20', 0, '11', 1, '21', 0,
+    '0', 'ENDBLK', '5', 'B5', '8', '0',
+    '0', 'ENDSEC'];
+  const plate = ['0', 'LWPOLYLINE', '5', 'P1', '8', 'PLATE', '90', 4, '70', 1, '10', 0, '20', 0, '10', 100, '20', 0, '10', 100, '20', 50, '10', 0, '20', 50];
+  const insert = (h: string, x: number, y: number, s: number, rot: number, sy = s) =>
+    ['0', 'INSERT', '5', h, '8', 'PLATE', '2', 'BOLTHOLE', '10', x, '20', y, '30', 0, '41', s, '42', sy, '43', 1, '50', rot];
+  const file = (...ents: (string | number)[][]) =>
+    dxf(...HEADER_MM, ...tables, ...blocks, '0', 'SECTION', '2', 'ENTITIES', ...ents.flat(), '0', 'ENDSEC', '0', 'EOF');
+
+  test('inserted holes land where the references place them, scaled and rotated', () => {
+    // Scale 2 makes r = 5; the base point (1, 1) goes to the insertion point, so rotation about it does not move the centre.
+    const r = ok(importDxf(file(plate, insert('I1', 20, 25, 2, 0), insert('I2', 50, 25, 2, 90), insert('I3', 80, 25, -2, 30, 2))));
+    expect(r.problems).toEqual([]);
+    expect(r.shapes.map((s) => s.op ?? 'add')).toEqual(['add', 'subtract', 'subtract', 'subtract']);
+    const centres = r.shapes.slice(1).map((s) => (s.type === 'circle' ? [s.center[0], s.center[1], s.radius] : null));
+    for (const [c, x] of [[centres[0], 20], [centres[1], 50], [centres[2], 80]] as const) {
+      expect(Math.abs(c![0] - x)).toBeLessThan(1e-12);
+      expect(Math.abs(c![1] - 25)).toBeLessThan(1e-12);
+      expect(Math.abs(c![2] - 5)).toBeLessThan(1e-12);
+    }
+    const p = evaluated(r);
+    close(p.area, 5000 - 3 * Math.PI * 25, 1e-13); // rectangle bh less three circles πr² (composite method)
+    close(p.Ix, (100 * 50 ** 3) / 12 - (3 * Math.PI * 5 ** 4) / 4, 1e-13); // bh³/12 − 3·πr⁴/4, all on the x axis through y = 25
+    // The hidden construction line inside the nested block is counted, not used.
+    expect(r.ignored).toEqual([{ type: 'LINE on a hidden layer', count: 3 }]);
+    expect(r.warnings.join(' ')).toMatch(/off or frozen/);
+  });
+
+  test('unequal x and y scale, a missing block and a block that contains itself are reported', () => {
+    const selfRef = dxf(...HEADER_MM, '0', 'SECTION', '2', 'BLOCKS', '0', 'BLOCK', '2', 'LOOP', '10', 0, '20', 0,
+      '0', 'INSERT', '5', 'L2', '2', 'LOOP', '10', 0, '20', 0, '0', 'ENDBLK', '0', 'ENDSEC',
+      '0', 'SECTION', '2', 'ENTITIES', '0', 'INSERT', '5', 'L1', '8', 'X', '2', 'LOOP', '10', 0, '20', 0, '0', 'ENDSEC', '0', 'EOF');
+    const a = ok(importDxf(file(plate, insert('U1', 20, 25, 2, 0, 3))));
+    expect(a.problems.map((p) => p.handle)).toEqual(['U1']);
+    expect(a.problems[0].message).toMatch(/unequally/);
+    expect(a.problems[0].points).toEqual([[20, 25]]);
+    const b = ok(importDxf(file(plate, ['0', 'INSERT', '5', 'M1', '8', 'PLATE', '2', 'NOSUCH', '10', 1, '20', 2])));
+    expect(b.problems[0].message).toMatch(/does not define/);
+    const c = ok(importDxf(selfRef));
+    expect(c.problems.map((p) => p.handle)).toEqual(['L2']);
+    expect(c.problems[0].message).toMatch(/contains itself/);
+  });
+});
+
+describe('a block bomb', () => {
+  test('blocks that insert each other ten times over 12 levels stop at the entity budget', () => {
+    // Block Bk holds ten references to B(k+1); B12 holds a circle: 10^12 circles if expanded.
+    const defs: (string | number)[] = ['0', 'SECTION', '2', 'BLOCKS'];
+    for (let k = 1; k <= 12; k++) {
+      defs.push('0', 'BLOCK', '2', `B${k}`, '10', 0, '20', 0);
+      if (k < 12) for (let j = 0; j < 10; j++) defs.push('0', 'INSERT', '2', `B${k + 1}`, '10', j, '20', 0);
+      else defs.push('0', 'CIRCLE', '10', 0, '20', 0, '40', 0.1);
+      defs.push('0', 'ENDBLK');
+    }
+    defs.push('0', 'ENDSEC');
+    const text = dxf(...defs, '0', 'SECTION', '2', 'ENTITIES', '0', 'INSERT', '5', 'X', '2', 'B1', '10', 0, '20', 0, '0', 'ENDSEC', '0', 'EOF');
+    const r = ok(importDxf(text));
+    expect(r.warnings.join(' ')).toMatch(/more than 200000 entities/);
+  });
+});
+

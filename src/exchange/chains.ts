@@ -16,6 +16,8 @@ export interface PieceSource {
   handle: string;
   layer: string;
   line: number;
+  /** Name of the block the entity belongs to, when it came in through a block reference. */
+  block?: string;
 }
 
 /** A run of lines and arcs. Open: n vertices, n − 1 bulges. Closed: n vertices, n bulges. |bulge| ≤ 1. */
@@ -129,7 +131,8 @@ function fmt(v: number): string {
 
 export function describeSource(s: PieceSource): string {
   const handle = s.handle ? `handle ${s.handle}, ` : '';
-  return `${s.type} (${handle}layer ${s.layer}, line ${s.line})`;
+  const block = s.block !== undefined ? `, in block ${s.block}` : '';
+  return `${s.type} (${handle}layer ${s.layer}, line ${s.line}${block})`;
 }
 
 /** Join open pieces into loops; closed pieces pass straight through. */

@@ -148,50 +148,13 @@ function importUnsafe(text: string, opts: DxfImportOptions): DxfImport {
     units = opts.targetUnits;
   }
 
-  // Entities -> pieces.
+  // Entities -> pieces (block references expanded).
   const pieces: Piece[] = [];
-  for (const ent of scan.entities) {
-    const source: PieceSource = { type: ent.type, handle: ent.handle ?? '', layer: ent.layer, line: ent.line };
-    if (ent.paperSpace) {
-      ignore(`${ent.type} in paper space`);
-      continue;
-    }
-    if (ent.text === null) {
-      if (ANNOTATION.has(ent.type)) ignore(ent.type);
-      else problems.push({ source, message: `${ent.type} entities are not supported; draw the outline with lines, arcs, circles or polylines`, points: [] });
-      continue;
-    }
-    if (ent.damage) {
-      problems.push({ source, message: `could not be read: ${ent.damage}`, points: [] });
-      continue;
-    }
-    let parsed: ParsedEntity | undefined;
-    try {
-      const dxf = new DxfParser().parse(ent.text) as unknown as { entities?: ParsedEntity[] } | null;
-      parsed = dxf?.entities?.[0];
-    } catch (e) {
-      const why = e instanceof Error ? e.message : String(e);
-      const text = /n must be greater than 0/.test(why) ? 'it has no vertices (group 90 is missing or 0)' : why;
-      problems.push({ source, message: `could not be read: ${text}`, points: [] });
-      continue;
-    }
-    if (!parsed) {
-      problems.push({ source, message: 'could not be read', points: [] });
-      continue;
-    }
-    if (ent.type === 'LWPOLYLINE' && (parsed.vertices?.length ?? 0) !== ent.vertexGroups) {
-      problems.push({ source, message: `could not be read: it has ${ent.vertexGroups} vertices but its vertex count (group 90) says otherwise`, points: entityPoints(parsed) });
-      continue;
-    }
-    try {
-      const made = entityPieces(parsed, ent, source);
-      if (made === 'ignore') ignore(ent.type);
-      else for (const p of made) pieces.push(p);
-    } catch (e) {
-      if (!(e instanceof EntityProblem)) throw e;
-      problems.push({ source, message: e.message, points: entityPoints(parsed) });
-    }
-  }
+  const ctx: Collect = { scan, problems, ignore, pieces, stack: [], budget: MAX_ENTITIES };
+  for (const ent of scan.entities) collect(ent, ctx, IDENTITY, null);
+  if (ctx.budget < 0) warnings.push(`The drawing expands to more than ${MAX_ENTITIES} entities through its block references; the rest were left out.`);
+  const hiddenUsed = [...ignored.keys()].filter((key) => key.endsWith(' on a hidden layer'));
+  if (hiddenUsed.length > 0) warnings.push('Entities on layers that are off or frozen were left out, as the CAD program hides them.');
 
   // Scale into the result's units, then pick the tolerance.
   if (k !== 1) for (const p of pieces) scalePiece(p, k);
@@ -290,6 +253,146 @@ function importUnsafe(text: string, opts: DxfImportOptions): DxfImport {
     ignored: [...ignored.entries()].map(([type, count]) => ({ type, count })),
     tol,
   };
+}
+
+/** A similarity map p -> (a·x + b·y + e, c·x + d·y + f) with uniform scale |s|. */
+interface Xform {
+  a: number;
+  b: number;
+  c: number;
+  d: number;
+  e: number;
+  f: number;
+}
+const IDENTITY: Xform = { a: 1, b: 0, c: 0, d: 1, e: 0, f: 0 };
+
+/** outer ∘ inner: apply inner first. */
+function compose(o: Xform, i: Xform): Xform {
+  return {
+    a: o.a * i.a + o.b * i.c,
+    b: o.a * i.b + o.b * i.d,
+    c: o.c * i.a + o.d * i.c,
+    d: o.c * i.b + o.d * i.d,
+    e: o.a * i.e + o.b * i.f + o.e,
+    f: o.c * i.e + o.d * i.f + o.f,
+  };
+}
+
+function transformPiece(p: Piece, t: Xform): Piece {
+  if (t === IDENTITY) return p;
+  const xy = p.xy.slice();
+  for (let i = 0; i < xy.length; i += 2) {
+    const x = xy[i], y = xy[i + 1];
+    xy[i] = t.a * x + t.b * y + t.e;
+    xy[i + 1] = t.c * x + t.d * y + t.f;
+  }
+  const det = t.a * t.d - t.b * t.c;
+  const bulge = det < 0 ? p.bulge.map((v) => -v) : p.bulge.slice();
+  const out: Piece = { ...p, xy, bulge };
+  if (p.circle) {
+    const { cx, cy, r } = p.circle;
+    out.circle = { cx: t.a * cx + t.b * cy + t.e, cy: t.c * cx + t.d * cy + t.f, r: r * Math.sqrt(Math.abs(det)) };
+  }
+  return out;
+}
+
+interface Collect {
+  scan: Extract<ReturnType<typeof scanDxf>, { ok: true }>;
+  problems: { source: PieceSource; message: string; points: number[] }[];
+  ignore: (kind: string) => void;
+  pieces: Piece[];
+  /** Names of the blocks being expanded (to refuse a block that contains itself). */
+  stack: string[];
+  /** Entities still allowed to be read (guards against block references that multiply without end). */
+  budget: number;
+}
+
+/** Most entities read, counting each entity once per block reference that places it. */
+export const MAX_ENTITIES = 200_000;
+
+/** Largest nesting of block references that is expanded. */
+const MAX_BLOCK_DEPTH = 16;
+
+function transformPoints(xy: number[], t: Xform): number[] {
+  const out = xy.slice();
+  for (let i = 0; i + 1 < out.length; i += 2) {
+    out[i] = t.a * xy[i] + t.b * xy[i + 1] + t.e;
+    out[i + 1] = t.c * xy[i] + t.d * xy[i + 1] + t.f;
+  }
+  return out;
+}
+
+/**
+ * One entity into pieces (in world coordinates through `t`), or into a problem or an ignored
+ * count. `inherit` is the layer of the block reference when expanding a block: entities on
+ * layer 0 inside a block take the layer of the reference (DXF reference, "BLOCK" notes).
+ */
+function collect(ent: ScannedEntity, ctx: Collect, t: Xform, inherit: { layer: string; block: string } | null): void {
+  const layer = inherit && ent.layer === '0' ? inherit.layer : ent.layer;
+  const source: PieceSource = { type: ent.type, handle: ent.handle ?? '', layer, line: ent.line, block: inherit?.block };
+  if (--ctx.budget < 0) return;
+  const report = (message: string, points: number[] = []): void => {
+    ctx.problems.push({ source, message, points: transformPoints(points, t) });
+  };
+  if (ent.paperSpace) return ctx.ignore(`${ent.type} in paper space`);
+  if (ctx.scan.hiddenLayers.has(layer)) return ctx.ignore(`${ent.type} on a hidden layer`);
+  if (ent.text === null) {
+    if (ANNOTATION.has(ent.type)) return ctx.ignore(ent.type);
+    return report(`${ent.type} entities are not supported; draw the outline with lines, arcs, circles or polylines`);
+  }
+  if (ent.damage) return report(`could not be read: ${ent.damage}`);
+  let parsed: ParsedEntity | undefined;
+  try {
+    const dxf = new DxfParser().parse(ent.text) as unknown as { entities?: ParsedEntity[] } | null;
+    parsed = dxf?.entities?.[0];
+  } catch (e) {
+    const why = e instanceof Error ? e.message : String(e);
+    return report(`could not be read: ${/n must be greater than 0/.test(why) ? 'it has no vertices (group 90 is missing or 0)' : why}`);
+  }
+  if (!parsed) return report('could not be read');
+  if (ent.type === 'LWPOLYLINE' && (parsed.vertices?.length ?? 0) !== ent.vertexGroups) {
+    return report(`could not be read: it has ${ent.vertexGroups} vertices but its vertex count (group 90) says otherwise`, entityPoints(parsed));
+  }
+  if (ent.type === 'INSERT') return expandInsert(parsed, ent, ctx, t, source, report);
+  try {
+    const made = entityPieces(parsed, ent, source);
+    if (made === 'ignore') ctx.ignore(ent.type);
+    else for (const p of made) ctx.pieces.push(transformPiece(p, t));
+  } catch (e) {
+    if (!(e instanceof EntityProblem)) throw e;
+    report(e.message, entityPoints(parsed));
+  }
+}
+
+/** A block reference: its block's entities placed by position, rotation and a uniform scale. */
+function expandInsert(e: ParsedEntity, ent: ScannedEntity, ctx: Collect, t: Xform, source: PieceSource, report: (m: string, pts?: number[]) => void): void {
+  const ins = e as ParsedEntity & { name?: string; xScale?: number; yScale?: number; rotation?: number; columnCount?: number; rowCount?: number };
+  const name = ins.name ?? '';
+  const block = ctx.scan.blocks.get(name);
+  const at = ins.position && finite(ins.position.x, ins.position.y) ? [ins.position.x, ins.position.y] : [];
+  if (!block) return report(`refers to a block "${name}" that the file does not define`, at);
+  if (ctx.stack.includes(name) || ctx.stack.length >= MAX_BLOCK_DEPTH) return report(`refers to block "${name}", which contains itself or is nested too deeply`, at);
+  if ((ins.columnCount ?? 1) > 1 || (ins.rowCount ?? 1) > 1) return report('is an arrayed block reference (MINSERT), which is not expanded; explode it in the CAD program', at);
+  const sx = ins.xScale ?? 1, sy = ins.yScale ?? 1, rot = ((ins.rotation ?? 0) * Math.PI) / 180;
+  if (!finite(sx, sy, rot) || sx === 0 || sy === 0 || at.length === 0) return report('has an invalid position, scale or rotation', at);
+  if (Math.abs(Math.abs(sx) - Math.abs(sy)) > 1e-9 * Math.max(Math.abs(sx), Math.abs(sy))) {
+    return report(`scales block "${name}" unequally in x and y (${sx}, ${sy}), which would turn its arcs into ellipses; explode it in the CAD program`, at);
+  }
+  let m: 1 | -1;
+  try {
+    m = ocsMirror(ent);
+  } catch (err) {
+    return report((err as Error).message, at);
+  }
+  // World = OCS mirror ∘ translate(position) ∘ rotate ∘ scale ∘ translate(−base).
+  const cs = Math.cos(rot), sn = Math.sin(rot);
+  const [bx, by] = block.base;
+  const local: Xform = { a: cs * sx, b: -sn * sy, c: sn * sx, d: cs * sy, e: at[0], f: at[1] };
+  const placed = compose(local, { a: 1, b: 0, c: 0, d: 1, e: -bx, f: -by });
+  const world = compose(t, compose({ a: m, b: 0, c: 0, d: 1, e: 0, f: 0 }, placed));
+  ctx.stack.push(name);
+  for (const child of block.entities) collect(child, ctx, world, { layer: source.layer, block: name });
+  ctx.stack.pop();
 }
 
 function pairs(xy: number[]): [number, number][] {
@@ -422,8 +525,6 @@ function entityPieces(e: ParsedEntity, ent: ScannedEntity, source: PieceSource):
       throw new EntityProblem('is an ellipse; only circular arcs can be imported exactly (convert it to arcs or a polyline)');
     case 'SPLINE':
       throw new EntityProblem('is a spline; only lines and circular arcs can be imported exactly (convert it to a polyline with arcs)');
-    case 'INSERT':
-      throw new EntityProblem('is a block reference; blocks are not expanded (explode the block in the CAD program)');
     default:
       if (ANNOTATION.has(ent.type)) return 'ignore';
       throw new EntityProblem(`${ent.type} entities are not supported`);

@@ -34,10 +34,20 @@ export interface ScannedEntity {
   vertexGroups: number;
 }
 
+export interface ScannedBlock {
+  name: string;
+  /** Base point (group 10/20 of the BLOCK record): the block's own origin. */
+  base: [number, number];
+  entities: ScannedEntity[];
+}
+
 export interface DxfScan {
   header: Map<string, string>;
   entities: ScannedEntity[];
   hasEntitiesSection: boolean;
+  /** Layers that are off (negative colour, group 62) or frozen (group 70 bit 1) in the LAYER table. */
+  hiddenLayers: Set<string>;
+  blocks: Map<string, ScannedBlock>;
 }
 
 export type DxfScanResult = ({ ok: true } & DxfScan) | { ok: false; error: string };
@@ -120,6 +130,8 @@ function findBinary(s: string): number {
 function structure(groups: DxfGroup[]): DxfScanResult {
   const header = new Map<string, string>();
   const entities: ScannedEntity[] = [];
+  const hiddenLayers = new Set<string>();
+  const blocks = new Map<string, ScannedBlock>();
   let hasEntitiesSection = false;
   let k = 0;
   while (k < groups.length) {
@@ -136,13 +148,69 @@ function structure(groups: DxfGroup[]): DxfScanResult {
         hasEntitiesSection = true;
         const r = readEntities(groups, k + 2, end, entities);
         if (r) return { ok: false, error: r };
+      } else if (name.value === 'TABLES') readLayers(groups, k + 2, end, hiddenLayers);
+      else if (name.value === 'BLOCKS') {
+        const r = readBlocks(groups, k + 2, end, blocks);
+        if (r) return { ok: false, error: r };
       }
       k = end + 1;
       continue;
     }
     k++;
   }
-  return { ok: true, header, entities, hasEntitiesSection };
+  return { ok: true, header, entities, hasEntitiesSection, hiddenLayers, blocks };
+}
+
+/** LAYER records of the TABLES section: names of layers that are off or frozen. */
+function readLayers(groups: DxfGroup[], from: number, to: number, hidden: Set<string>): void {
+  let inLayer = false;
+  let name: string | null = null, off = false;
+  const close = () => {
+    if (inLayer && name !== null && off) hidden.add(name);
+    name = null;
+    off = false;
+  };
+  for (let i = from; i < to; i++) {
+    const g = groups[i];
+    if (g.code === 0) {
+      close();
+      inLayer = g.value === 'LAYER';
+      continue;
+    }
+    if (!inLayer) continue;
+    if (g.code === 2) name = g.value;
+    else if (g.code === 62 && Number(g.value) < 0) off = true;
+    else if (g.code === 70 && (Number(g.value) & 1) === 1) off = true;
+  }
+  close();
+}
+
+/** BLOCK ... ENDBLK definitions of the BLOCKS section, each with its base point and entities. */
+function readBlocks(groups: DxfGroup[], from: number, to: number, blocks: Map<string, ScannedBlock>): string | null {
+  let i = from;
+  while (i < to) {
+    const g = groups[i];
+    if (!(g.code === 0 && g.value === 'BLOCK')) {
+      i++;
+      continue;
+    }
+    let name = '', bx = 0, by = 0;
+    let j = i + 1;
+    for (; j < to && groups[j].code !== 0; j++) {
+      const h = groups[j];
+      if (h.code === 2) name = h.value;
+      else if (h.code === 10) bx = Number(h.value);
+      else if (h.code === 20) by = Number(h.value);
+    }
+    let end = j;
+    while (end < to && !(groups[end].code === 0 && groups[end].value === 'ENDBLK')) end++;
+    const entities: ScannedEntity[] = [];
+    const r = readEntities(groups, j, end, entities);
+    if (r) return r;
+    if (name && !blocks.has(name)) blocks.set(name, { name, base: [Number.isFinite(bx) ? bx : 0, Number.isFinite(by) ? by : 0], entities });
+    i = end + 1;
+  }
+  return null;
 }
 
 function findEndSec(groups: DxfGroup[], from: number): number {
