@@ -341,15 +341,8 @@ function collect(ent: ScannedEntity, ctx: Collect, t: Xform, inherit: { layer: s
     return report(`${ent.type} entities are not supported; draw the outline with lines, arcs, circles or polylines`);
   }
   if (ent.damage) return report(`could not be read: ${ent.damage}`);
-  let parsed: ParsedEntity | undefined;
-  try {
-    const dxf = new DxfParser().parse(ent.text) as unknown as { entities?: ParsedEntity[] } | null;
-    parsed = dxf?.entities?.[0];
-  } catch (e) {
-    const why = e instanceof Error ? e.message : String(e);
-    return report(`could not be read: ${/n must be greater than 0/.test(why) ? 'it has no vertices (group 90 is missing or 0)' : why}`);
-  }
-  if (!parsed) return report('could not be read');
+  const parsed = parseOnce(ent);
+  if (typeof parsed === 'string') return report(parsed);
   if (ent.type === 'LWPOLYLINE' && (parsed.vertices?.length ?? 0) !== ent.vertexGroups) {
     return report(`could not be read: it has ${ent.vertexGroups} vertices but its vertex count (group 90) says otherwise`, entityPoints(parsed));
   }
@@ -362,6 +355,25 @@ function collect(ent: ScannedEntity, ctx: Collect, t: Xform, inherit: { layer: s
     if (!(e instanceof EntityProblem)) throw e;
     report(e.message, entityPoints(parsed));
   }
+}
+
+/** Parsed entities, so an entity placed by many block references is parsed once. */
+const PARSED = new WeakMap<ScannedEntity, ParsedEntity | string>();
+
+/** dxf-parser's reading of one entity, or the message saying why it could not be read. */
+function parseOnce(ent: ScannedEntity): ParsedEntity | string {
+  const hit = PARSED.get(ent);
+  if (hit !== undefined) return hit;
+  let out: ParsedEntity | string;
+  try {
+    const dxf = new DxfParser().parse(ent.text!) as unknown as { entities?: ParsedEntity[] } | null;
+    out = dxf?.entities?.[0] ?? 'could not be read';
+  } catch (e) {
+    const why = e instanceof Error ? e.message : String(e);
+    out = `could not be read: ${/n must be greater than 0/.test(why) ? 'it has no vertices (group 90 is missing or 0)' : why}`;
+  }
+  PARSED.set(ent, out);
+  return out;
 }
 
 /** A block reference: its block's entities placed by position, rotation and a uniform scale. */
