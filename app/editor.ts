@@ -13,7 +13,7 @@ import { createLiveResults, type ResultsHandle } from './store/evaluation';
 import { createEditorStore, type EditorStore, type ToolId } from './store/store';
 import { newShapeId } from './shapes';
 import { CircleTool, PathTool, PolygonTool, ProfileTool, RectangleTool } from './tools/draw';
-import { SelectTool } from './tools/select';
+import { SelectTool } from './tools/select/index';
 import type { Tool, ToolEnv, Transient } from './tools/types';
 
 export interface Editor {

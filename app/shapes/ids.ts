@@ -1,0 +1,10 @@
+import type { SectionDocument } from '../../src';
+
+/** A fresh id that the document does not use yet: `s1`, `s2`, ... */
+export function newShapeId(doc: SectionDocument, taken: Set<string> = new Set()): string {
+  const used = new Set(doc.shapes.map((s) => s.id));
+  for (let k = doc.shapes.length + 1; ; k++) {
+    const id = `s${k}`;
+    if (!used.has(id) && !taken.has(id)) return id;
+  }
+}
