@@ -72,6 +72,7 @@ export function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
         ctx.carriers.push(car);
         ctx.splits.push(null);
         ctx.sag.push(car.kind === ARC ? SAG_MAX * car.r : 0);
+        ctx.side.push(0);
         ctx.ncar[nodes[i]].push(id);
         ctx.ncar[nodes[j]].push(id);
         ids.push(id);
@@ -161,32 +162,41 @@ function distExact(c: Carrier, x: number, y: number): number {
 }
 
 /**
- * Nested, nearly tangent circles: the outer arc's chords cut inwards by up to the sagitta and
- * would cross the inner arc where the exact arcs do not meet. Refine the outer arc's chords so
- * that their sagitta stays below the gap (down to a floor; below it, tracing snaps the crossings).
+ * Which side an arc's chords must keep to. Inscribed chords cut inside the circle by up to the
+ * sagitta, circumscribed ones (tangent segments) stay outside it. Features that come closer to
+ * an arc than the sagitta, without meeting it, demand a side: a nested circle just inside wants
+ * the outer arc circumscribed and the inner one inscribed; a vertex just inside wants the arc
+ * circumscribed, one just outside wants it inscribed. Both demands at once: finer chords.
  */
+export const INSCRIBE = 1;
+export const CIRCUMSCRIBE = 2;
+
+function demand(ctx: Ctx, c: Carrier, side: number, gap: number): void {
+  ctx.side[c.id] |= side;
+  const want = Math.max(gap / 2.5, SAG_FLOOR * c.r);
+  if (want < ctx.sag[c.id]) ctx.sag[c.id] = want;
+}
+
+/** Nested, nearly tangent circles (the inner within a sagitta of the outer). */
 function refineNested(ctx: Ctx, a: Carrier, b: Carrier): void {
   const D = Math.hypot(a.cx - b.cx, a.cy - b.cy);
   const gap = Math.abs(a.r - b.r) - D;
-  const outer = a.r >= b.r ? a : b;
+  const outer = a.r >= b.r ? a : b, inner = outer === a ? b : a;
   if (!(gap > 0) || gap >= 2 * SAG_MAX * outer.r) return;
-  const want = Math.max(gap / 2.5, SAG_FLOOR * outer.r);
-  if (want < ctx.sag[outer.id]) ctx.sag[outer.id] = want;
+  demand(ctx, outer, CIRCUMSCRIBE, gap);
+  demand(ctx, inner, INSCRIBE, gap);
 }
 
-/**
- * A vertex of b just inside arc a (closer than a's chord sagitta) would poke out of a's chords.
- * Refine a so that its chords pass inside the vertex.
- */
+/** Vertices of b within a sagitta of arc a, inside or outside. */
 function refineNearVertex(ctx: Ctx, a: Carrier, b: Carrier): void {
   for (let k = 0; k < 2; k++) {
     const x = k === 0 ? b.ax : b.bx, y = k === 0 ? b.ay : b.by;
-    const gap = a.r - Math.hypot(x - a.cx, y - a.cy);
-    if (!(gap > ctx.eps) || gap >= 1.5 * ctx.sag[a.id]) continue;
+    const d = Math.hypot(x - a.cx, y - a.cy);
+    const gap = Math.abs(a.r - d);
+    if (!(gap > ctx.eps) || gap >= 1.5 * SAG_MAX * a.r || !(d > 0)) continue;
     const u = paramOf(a, x, y);
-    if (u < 0 || u > 1) continue;
-    const want = Math.max(gap / 2.5, SAG_FLOOR * a.r);
-    if (want < ctx.sag[a.id]) ctx.sag[a.id] = want;
+    if (u <= 0 || u >= 1) continue;
+    demand(ctx, a, d < a.r ? CIRCUMSCRIBE : INSCRIBE, gap);
   }
 }
 

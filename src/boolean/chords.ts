@@ -4,6 +4,7 @@
  */
 import type { IntPoint } from 'clipper-lib';
 import { ARC, paramOf, pointAt } from './carriers';
+import { CIRCUMSCRIBE, INSCRIBE } from './arrangement';
 import { type Ctx, find, MAX_STEP, SAG_MAX } from './context';
 
 function pushVertex(ctx: Ctx, path: IntPoint[], x: number, y: number, exact: boolean, car: number[]): void {
@@ -62,11 +63,22 @@ export function buildPaths(ctx: Ctx): { subj: IntPoint[][]; clip: IntPoint[][] }
         if (c.kind !== ARC) continue;
         const ua = seq[k].u, ub = seq[k + 1].u;
         const dphi = Math.abs(c.phi) * (ub - ua);
-        const sr = ctx.sag[id] / c.r;
+        // Finer chords only when both sides are demanded (see arrangement.ts).
+        const both = ctx.side[id] === (INSCRIBE | CIRCUMSCRIBE);
+        const sr = both ? ctx.sag[id] / c.r : SAG_MAX;
         const step = sr >= SAG_MAX ? MAX_STEP : 2 * Math.acos(1 - sr);
         let cnt = Math.ceil(dphi / step);
         // At least two chords while the piece is visibly curved at the integer scale.
         if (cnt < 2 && c.r * (1 - Math.cos(dphi / 2)) * ctx.scale > 0.5) cnt = 2;
+        if (ctx.side[id] === CIRCUMSCRIBE && cnt >= 1) {
+          // Tangent segments: corners at the middle angles, pushed out to r / cos(half step).
+          const sec = 1 / Math.cos(dphi / cnt / 2);
+          for (let j = 0; j < cnt; j++) {
+            const t = c.t0 + c.phi * (ua + ((ub - ua) * (j + 0.5)) / cnt);
+            pushVertex(ctx, path, c.cx + c.r * sec * Math.cos(t), c.cy + c.r * sec * Math.sin(t), false, own);
+          }
+          continue;
+        }
         for (let j = 1; j < cnt; j++) {
           const [x, y] = pointAt(c, ua + ((ub - ua) * j) / cnt);
           pushVertex(ctx, path, x, y, false, own);

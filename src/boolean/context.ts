@@ -47,6 +47,8 @@ export interface Ctx {
   splits: (number[] | null)[];
   /** Per carrier: largest chord sagitta allowed (absolute). */
   sag: number[];
+  /** Per carrier: sides demanded for its chords (INSCRIBE | CIRCUMSCRIBE bits, arrangement.ts). */
+  side: number[];
   contact: boolean;
   // Vertex records (one per clipper input point); Z = index + 1.
   rx: number[];
