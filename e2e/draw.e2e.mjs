@@ -193,6 +193,33 @@ export const tests = [
     },
   },
   {
+    name: 'every other profile placed by click with its default dimensions',
+    async run(t) {
+      const { page } = await open(t);
+      // Areas by decomposition into rectangles, quarter annuli and quarter-circular spandrels of
+      // area (1 − π/4)·r² (Gere & Goodno, App. E; composite areas §12.3).
+      const sp = (r) => (1 - PI / 4) * r * r;
+      const cases = {
+        channel: (s) => 2 * s.flangeWidth * s.flangeThickness + (s.depth - 2 * s.flangeThickness) * s.webThickness + 2 * sp(s.rootRadius),
+        angle: (s) => s.thickness * (s.legVertical + s.legHorizontal - s.thickness) + sp(s.rootRadius),
+        tee: (s) => s.flangeWidth * s.flangeThickness + (s.depth - s.flangeThickness) * s.stemThickness + 2 * sp(s.rootRadius),
+        'rect-tube': (s) => {
+          const ri = Math.max(s.outerRadius - s.wall, 0);
+          return s.width * s.height - (4 - PI) * s.outerRadius ** 2 - ((s.width - 2 * s.wall) * (s.height - 2 * s.wall) - (4 - PI) * ri * ri);
+        },
+        rectangle: (s) => s.width * s.height - (4 - PI) * (s.cornerRadius ?? 0) ** 2,
+      };
+      for (const [type, area] of Object.entries(cases)) {
+        await page.evaluate(() => window.__kern.editor.run('file.new'));
+        await page.selectOption('[data-testid="profile-type"]', type);
+        await clickWorld(page, 0, 0);
+        const s = (await docShapes(page))[0];
+        assert.equal(s.type, type);
+        close(await prop(page, 'area'), area(s), `${type} area`);
+      }
+    },
+  },
+  {
     name: 'round tube placed by typed point',
     async run(t) {
       const { page } = await open(t);
