@@ -153,7 +153,8 @@ export function sectionProperties(region: Region): SectionProperties {
     fibres: { top, bottom, left, right },
   };
   // A section far smaller than its distance from the origin loses its digits in the coordinates.
-  const tooSmall = !(top > 0 && bottom > 0 && left > 0 && right > 0) || !allFinite(out);
+  const far = Math.max(Math.abs(bounds.xmin), Math.abs(bounds.xmax), Math.abs(bounds.ymin), Math.abs(bounds.ymax));
+  const tooSmall = !(extent > 1e-9 * far) || !allFinite(out);
   if (tooSmall) {
     throw new SectionError(
       `The section is too small to compute where it lies: its size (${extent.toPrecision(3)}) is lost in its coordinates. Move it nearer the origin or change the units.`,
