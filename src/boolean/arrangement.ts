@@ -73,6 +73,7 @@ export function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
         ctx.splits.push(null);
         ctx.sag.push(car.kind === ARC ? SAG_MAX * car.r : 0);
         ctx.side.push(0);
+        ctx.chordSag.push(0);
         ctx.ncar[nodes[i]].push(id);
         ctx.ncar[nodes[j]].push(id);
         ids.push(id);
@@ -152,6 +153,16 @@ function intersectPair(ctx: Ctx, a: Carrier, b: Carrier): void {
   }
 }
 
+/** Ends of b that lie on a (and ends of a on b), away from their shared vertex. */
+function touchEnds(ctx: Ctx, a: Carrier, b: Carrier): void {
+  const eps = ctx.eps;
+  const ends: [Carrier, Carrier, number, number][] = [[a, b, b.ax, b.ay], [a, b, b.bx, b.by], [b, a, a.ax, a.ay], [b, a, a.bx, a.by]];
+  for (const [on, of, x, y] of ends) {
+    if (endpointNode(ctx, on, x, y) >= 0) continue; // the shared vertex (or a merged one)
+    if (distExact(on, x, y) <= eps) sharePoint(ctx, on, of, x, y);
+  }
+}
+
 /** Distance to the carrier's true curve within its range (a flat arc is not its chord here). */
 function distExact(c: Carrier, x: number, y: number): number {
   if (c.kind === ARC || c.flat === 0) return distToCarrier(c, x, y);
@@ -213,7 +224,12 @@ export function buildArrangement(ctx: Ctx): void {
       if (b.ymin > a.ymax + eps || b.ymax < a.ymin - eps) continue;
       if (ctx.trustLoops && ctx.loopLo[a.id] === ctx.loopLo[b.id]) {
         const d = Math.abs(a.id - b.id);
-        if (d === 1 || d === ctx.loopHi[a.id] - ctx.loopLo[a.id]) continue;
+        if (d === 1 || d === ctx.loopHi[a.id] - ctx.loopLo[a.id]) {
+          // Neighbours on a well-formed loop meet at their shared vertex; only a far end lying
+          // on the other one (a pinched loop) is left to find.
+          touchEnds(ctx, a, b);
+          continue;
+        }
       }
       intersectPair(ctx, a, b);
     }

@@ -49,6 +49,8 @@ export interface Ctx {
   sag: number[];
   /** Per carrier: sides demanded for its chords (INSCRIBE | CIRCUMSCRIBE bits, arrangement.ts). */
   side: number[];
+  /** Per carrier: largest distance between its chords and the exact arc (set when chording). */
+  chordSag: number[];
   contact: boolean;
   // Vertex records (one per clipper input point); Z = index + 1.
   rx: number[];

@@ -54,7 +54,7 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
   const scale = INT_RANGE / ext;
   const ctx: Ctx = {
     mode, ext, eps: REL_EPS * ext, unit: 1 / scale, ox: (xmin + xmax) / 2, oy: (ymin + ymax) / 2, scale,
-    carriers: [], loops: [], nx: [], ny: [], ncar: [], parent: [], splits: [], sag: [], side: [], contact: false, loopLo: [], loopHi: [], trustLoops: mode !== 'evenodd',
+    carriers: [], loops: [], nx: [], ny: [], ncar: [], parent: [], splits: [], sag: [], side: [], chordSag: [], contact: false, loopLo: [], loopHi: [], trustLoops: mode !== 'evenodd',
     rx: [], ry: [], rX: [], rY: [], rExact: [], rCar: [], zf: [],
   };
   buildCarriers(ctx, groups);

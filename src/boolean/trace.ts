@@ -10,7 +10,7 @@ import {
   ARC, LINE, curveIntersections, distToCarrier, distToCurve, nearestPoint, paramOf, polishIntersection,
   sameCurve, windingOf, wrapAngle, type Carrier,
 } from './carriers';
-import { type Ctx, find, SAG_MAX } from './context';
+import { type Ctx, find } from './context';
 
 function intersectLists(a: number[], b: number[]): number[] {
   const out: number[] = [];
@@ -100,7 +100,7 @@ function resolveTie(ctx: Ctx, all: number[], px: number, py: number, qx: number,
 
 function carrierTol(ctx: Ctx, c: Carrier): number {
   // Chord sagitta for an arc; for a flat arc traced as its chord, the arc's own sagitta.
-  const sag = c.kind === ARC ? SAG_MAX * c.r * 1.5 : (Math.abs(c.flat) * c.len) / 6;
+  const sag = c.kind === ARC ? 1.5 * ctx.chordSag[c.id] : (Math.abs(c.flat) * c.len) / 6;
   return 3 * ctx.unit + sag + ctx.eps;
 }
 
