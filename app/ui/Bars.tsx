@@ -4,6 +4,7 @@ import { formatNumber, type ProfileShape } from '../../src';
 import { PROFILE_TYPE_LIST, SHAPE_KIND_LABEL } from '../shapes';
 import { useEditor, useEditorState, useTransient } from '../store/hooks';
 import { CommandButton } from './CommandButton';
+import { KeysHelp } from './KeysHelp';
 
 export function TopBar() {
   const name = useEditorState((s) => s.doc.name);
@@ -31,6 +32,7 @@ export function TopBar() {
         <CommandButton name="redo" />
       </div>
       <div className="spacer" />
+      <KeysHelp />
       <CommandButton name="report.open" className="primary">
         Report
       </CommandButton>

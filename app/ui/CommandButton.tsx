@@ -3,11 +3,13 @@ import type { ReactNode } from 'react';
 import { registry } from '../commands/commands';
 import { useEditor, useEditorState } from '../store/hooks';
 
+const NAMES: Record<string, string> = { mod: 'Ctrl', shift: 'Shift', alt: 'Alt', arrowleft: '←', arrowright: '→', arrowup: '↑', arrowdown: '↓' };
+
 export function keyHint(keys: string[] | undefined): string {
   if (!keys?.length) return '';
   return keys[0]
     .split('+')
-    .map((p) => (p === 'mod' ? 'Ctrl' : p === 'shift' ? 'Shift' : p === 'alt' ? 'Alt' : p.length === 1 ? p.toUpperCase() : p[0].toUpperCase() + p.slice(1)))
+    .map((p) => NAMES[p] ?? (p.length === 1 ? p.toUpperCase() : p[0].toUpperCase() + p.slice(1)))
     .join('+');
 }
 
