@@ -25,33 +25,15 @@ import {
   type ProfileType,
 } from '../src/document/profiles';
 import type { IShape, PathShape, ProfileShape } from '../src/document/types';
-import { contourFrom, pushArc, sweepThrough, type Contour } from '../src/geometry/contour';
+import { type Contour } from '../src/geometry/contour';
+import { pathContour } from '../src/document/shapes';
 import { regionMoments, type RawMoments } from '../src/moments/kernel';
 
 // ---------------------------------------------------------------------------------------------
 // Helpers: path -> contour, moments, closed forms.
 
-/** PathShape to Contour: lines get bulge 0, an arc through `via` gets tan(sweep/4), split > 180°. */
-function pathToContour(p: PathShape): Contour {
-  const xy: number[] = [];
-  const bulge: number[] = [];
-  let [cx, cy] = p.start;
-  xy.push(cx, cy);
-  for (const s of p.segments) {
-    const [tx, ty] = s.to;
-    if (s.via) {
-      const phi = sweepThrough(cx, cy, s.via[0], s.via[1], tx, ty);
-      if (!Number.isFinite(phi)) throw new Error('degenerate arc');
-      pushArc(xy, bulge, cx, cy, tx, ty, phi);
-    } else bulge.push(0);
-    xy.push(tx, ty);
-    cx = tx;
-    cy = ty;
-  }
-  // The path closes on its start; the contour does not repeat the closing vertex.
-  xy.length -= 2;
-  return contourFrom(xy, bulge);
-}
+/** PathShape to Contour, as the engine builds it. */
+const pathToContour = (p: PathShape): Contour => pathContour(p.start, p.segments);
 
 function profileMoments(shape: ProfileShape): RawMoments {
   const { outer, holes } = profileToPaths(shape);
