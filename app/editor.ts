@@ -86,6 +86,8 @@ export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule
       tools[prev.tool].reset(env);
       transient.setState({ inputError: null });
     }
+    // Points held by a half-drawn shape are in the old units: start it again.
+    if (s.doc.units !== prev.doc.units) tool().reset(env);
     if (s.tool !== prev.tool || s.pathArc !== prev.pathArc || s.profileType !== prev.profileType) updatePrompt();
   });
   const unsubT = transient.subscribe((t, prev) => {

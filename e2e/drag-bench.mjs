@@ -4,7 +4,8 @@
  * it with Playwright mouse moves and returns the 95th-percentile interval between animation
  * frames during the drag, measured from requestAnimationFrame timestamps in the page.
  *
- *   import { measureDragFrames } from './e2e/drag-bench.mjs';
+ *   import { dragFrameP95, measureDragFrames } from './e2e/drag-bench.mjs';
+ *   const p95 = await dragFrameP95();                      // the number alone
  *   const { p95 } = await measureDragFrames();            // builds and serves the app itself
  *   const { p95 } = await measureDragFrames({ url });      // or uses a running server
  *
@@ -139,6 +140,11 @@ export async function measureDragFrames({ url, moves = 180, browser: given, quer
     if (!given) await browser.close();
     if (app) await app.close();
   }
+}
+
+/** The figure for `npm run bench`: the raw 95th-percentile frame interval in ms. */
+export async function dragFrameP95(opts) {
+  return (await measureDragFrames(opts)).p95;
 }
 
 if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {
