@@ -7,7 +7,7 @@ import type { IntPoint } from 'clipper-lib';
 import { pushArc, type Contour } from '../geometry/contour';
 import { regionMomentsAbout } from '../moments/kernel';
 import {
-  ARC, LINE, curveIntersections, distToCarrier, distToCurve, nearestPoint, paramOf, polishIntersection,
+  ARC, LINE, curveIntersections, distToCurve, nearestPoint, paramOf, polishIntersection,
   sameCurve, windingOf, wrapAngle, type Carrier,
 } from './carriers';
 import { type Ctx, find } from './context';
@@ -104,15 +104,24 @@ function carrierTol(ctx: Ctx, c: Carrier): number {
   return 3 * ctx.unit + sag + ctx.eps;
 }
 
+/**
+ * Point (x, y) lies on carrier c to chord accuracy: across the curve within the chord sagitta,
+ * along it within a few integer units of its ends (the sagitta does not widen the range).
+ */
+function onCarrier(ctx: Ctx, c: Carrier, x: number, y: number): boolean {
+  const slack = (3 * ctx.unit + ctx.eps) / (c.len || 1);
+  const u = paramOf(c, x, y);
+  if (u < -slack || u > 1 + slack) return false;
+  return distToCurve(c, x, y) <= carrierTol(ctx, c);
+}
+
 function assignEdge(ctx: Ctx, si: number[], sj: number[], px: number, py: number, qx: number, qy: number): number {
   const cs = ctx.carriers;
   // The clipper edge is one chord: its ends and its middle lie on the carrier to chord accuracy
   // (this tells an arc from a line that joins the same two points).
   const mx = (px + qx) / 2, my = (py + qy) / 2;
-  const fits = (c: number): boolean => {
-    const t = carrierTol(ctx, cs[c]);
-    return distToCarrier(cs[c], mx, my) <= t && distToCarrier(cs[c], px, py) <= t && distToCarrier(cs[c], qx, qy) <= t;
-  };
+  const fits = (c: number): boolean =>
+    onCarrier(ctx, cs[c], mx, my) && onCarrier(ctx, cs[c], px, py) && onCarrier(ctx, cs[c], qx, qy);
   // Fast path: both ends are plain chord points (or nodes) of one and the same carrier.
   if (si.length === 1 && sj.length === 1 && si[0] === sj[0]) return si[0];
   let common = intersectLists(si, sj);
@@ -190,7 +199,7 @@ function carriersNear(ctx: Ctx, x: number, y: number): number[] {
   for (const c of ctx.carriers) {
     const t = carrierTol(ctx, c);
     if (x < c.xmin - t || x > c.xmax + t || y < c.ymin - t || y > c.ymax + t) continue;
-    if (distToCarrier(c, x, y) <= t) out.push(c.id);
+    if (onCarrier(ctx, c, x, y)) out.push(c.id);
   }
   return out;
 }
