@@ -45,13 +45,26 @@ export function UnitSwitch() {
   );
 }
 
+/** Shown while the results trail the document (during a drag the engine runs beside the pointer). */
+function Pending() {
+  const docNow = useEditorState((s) => s.doc);
+  const docShown = useResults((r) => r.doc);
+  return (
+    <span className={`pending${docNow === docShown ? '' : ' on'}`} data-testid="results-pending" aria-live="off">
+      updating
+    </span>
+  );
+}
+
 export function ResultsPanel() {
   const ev = useResults((r) => r.evaluation);
   const ms = useResults((r) => r.lastMs);
   return (
     <section className="panel-section results" data-testid="results">
       <div className="results-head">
-        <h2>Section properties</h2>
+        <h2>
+          Section properties <Pending />
+        </h2>
         <UnitSwitch />
       </div>
       {ev.message && (

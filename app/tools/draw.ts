@@ -282,11 +282,17 @@ export class PathTool extends BaseTool {
     if (this.via) markers.push(this.via);
     this.draft(env, { shape: this.draftShape(this.hover), chain: this.hover ? [...chain, this.hover] : chain, markers });
   }
-  protected accept(env: ToolEnv, p: Point): string | null {
+  protected accept(env: ToolEnv, p: Point, how: 'click' | 'typed'): string | null {
     if (!this.start) {
       this.start = p;
       this.show(env);
       return null;
+    }
+    if (how === 'click' && this.downAt && this.segments.length >= 1 && !same(p, this.start) && !(this.arcMode(env) && !this.via)) {
+      // A click near the start closes the path even when point snapping is off.
+      const st = env.store.getState();
+      const fx = st.ox + this.start[0] * st.scale, fy = st.oy - this.start[1] * st.scale;
+      if (Math.hypot(fx - this.downAt[0], fy - this.downAt[1]) <= CLOSE_PX) p = this.start;
     }
     if (this.arcMode(env) && !this.via) {
       if (same(p, this.last()!)) return 'The arc’s middle point must differ from its start.';
