@@ -99,5 +99,21 @@ export function buildPaths(ctx: Ctx): { subj: IntPoint[][]; clip: IntPoint[][] }
     if (path.length < 3) continue;
     (loop.group === 0 ? subj : clip).push(path);
   }
+  // Records of different loops at one integer point (clipper keeps one tag there): each gets
+  // the carriers of all of them.
+  const at = new Map<number, number>();
+  for (let r = 0; r < ctx.rX.length; r++) {
+    const key = ctx.rX[r] * 1e8 + ctx.rY[r];
+    const first = at.get(key);
+    if (first === undefined) at.set(key, r);
+    else {
+      const merged = ctx.rCar[first].slice();
+      for (const c of ctx.rCar[r]) if (!merged.includes(c)) merged.push(c);
+      ctx.rCar[first] = merged;
+      ctx.rCar[r] = merged;
+      ctx.shared.push(first, r);
+    }
+  }
+  for (let k = 0; k < ctx.shared.length; k += 2) ctx.rCar[ctx.shared[k + 1]] = ctx.rCar[ctx.shared[k]];
   return { subj, clip };
 }

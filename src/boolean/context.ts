@@ -59,6 +59,8 @@ export interface Ctx {
   rY: number[];
   rExact: boolean[];
   rCar: number[][];
+  /** Pairs (first record, later record) of records at the same integer point. */
+  shared: number[];
   // ZFill records: four vertex Zs per crossing.
   zf: number[];
 }

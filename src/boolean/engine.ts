@@ -55,7 +55,7 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
   const ctx: Ctx = {
     mode, ext, eps: REL_EPS * ext, unit: 1 / scale, ox: (xmin + xmax) / 2, oy: (ymin + ymax) / 2, scale,
     carriers: [], loops: [], nx: [], ny: [], ncar: [], parent: [], splits: [], sag: [], side: [], chordSag: [], contact: false, loopLo: [], loopHi: [], trustLoops: mode !== 'evenodd',
-    rx: [], ry: [], rX: [], rY: [], rExact: [], rCar: [], zf: [],
+    rx: [], ry: [], rX: [], rY: [], rExact: [], rCar: [], shared: [], zf: [],
   };
   buildCarriers(ctx, groups);
   buildArrangement(ctx);

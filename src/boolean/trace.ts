@@ -129,7 +129,9 @@ function assignEdge(ctx: Ctx, si: number[], sj: number[], px: number, py: number
   common = common.filter(fits);
   // Collinear vertices dropped by clipper: the edge may span several carriers of one line.
   const pool = common.length ? common : unionLists(si, sj);
-  const fit = common.length ? common : pool.filter(fits);
+  let fit = common.length ? common : pool.filter(fits);
+  // Tags of coincident points can name other carriers: look at every carrier through the middle.
+  if (fit.length === 0) fit = carriersNear(ctx, mx, my).filter(fits);
   if (fit.length === 1) return fit[0];
   if (fit.length > 1) return resolveTie(ctx, fit, px, py, qx, qy);
   // Nothing fits within tolerance: the carrier nearest to both ends (all carriers if no tags).
