@@ -106,46 +106,28 @@ const GridNode = memo(function GridNode({ v, width, height, units }: { v: ViewTr
   );
 });
 
-const ShapeNode = memo(function ShapeNode({ region, op, v, error }: { region: Region; op: Op; v: ViewTransform; error: boolean }) {
-  return (
-    <Paint
-      paint={(ctx) => {
-        const st = opStyle(op);
-        ctx.beginPath();
-        traceRegion(ctx, region, v);
-        if (st.fill !== 'none') {
-          ctx.fillStyle = hatch(ctx, st.fill);
-          ctx.fill('evenodd');
-        }
-        ctx.setLineDash(st.dash);
-        ctx.strokeStyle = error ? INK.error : st.line;
-        ctx.lineWidth = 1;
-        ctx.stroke();
-      }}
-    />
-  );
-});
+/** Paint one shape's own outline, hatched by its operation. */
+function paintShape(ctx: CanvasRenderingContext2D, region: Region, op: Op, v: ViewTransform, error: boolean) {
+  const st = opStyle(op);
+  ctx.beginPath();
+  traceRegion(ctx, region, v);
+  if (st.fill !== 'none') {
+    ctx.fillStyle = hatch(ctx, st.fill);
+    ctx.fill('evenodd');
+  }
+  ctx.setLineDash(st.dash);
+  ctx.strokeStyle = error ? INK.error : st.line;
+  ctx.lineWidth = 1;
+  ctx.stroke();
+  ctx.setLineDash([]);
+}
 
-const ResultNode = memo(function ResultNode({ region, v, outline }: { region: Region; v: ViewTransform; outline: boolean }) {
-  return (
-    <Paint
-      paint={(ctx) => {
-        ctx.beginPath();
-        traceRegion(ctx, region, v);
-        if (!outline) {
-          ctx.fillStyle = INK.resultFill;
-          ctx.fill('nonzero');
-        } else {
-          ctx.strokeStyle = INK.resultLine;
-          ctx.lineWidth = 1.6;
-          ctx.lineJoin = 'round';
-          ctx.stroke();
-        }
-      }}
-    />
-  );
-});
-
+/**
+ * The section: the combined result's fill, every shape's own outline (drawn from the current
+ * document, so a dragged shape follows the pointer at once), then the result's outline. One
+ * Konva node for all of it: the layer repaints as a whole anyway, and one node keeps the
+ * reconciler's work per pointer move constant.
+ */
 function ShapesLayer() {
   const editor = useEditor();
   const v = useEditorShallow((s) => ({ scale: s.scale, ox: s.ox, oy: s.oy }));
@@ -153,15 +135,22 @@ function ShapesLayer() {
   const region = useResults((r) => r.evaluation.region);
   const doc = useEditorState((s) => s.doc);
   const shapes = editor.results.shapesOf(doc);
-  const ops = new Map(doc.shapes.map((s) => [s.id, s.op ?? 'add']));
   return (
-    <>
-      <ResultNode region={region} v={v} outline={false} />
-      {shapes.map((s) => (
-        <ShapeNode key={s.id} region={s.region} op={ops.get(s.id) ?? 'add'} v={v} error={!!s.error} />
-      ))}
-      <ResultNode region={region} v={v} outline />
-    </>
+    <Paint
+      paint={(ctx) => {
+        ctx.beginPath();
+        traceRegion(ctx, region, v);
+        ctx.fillStyle = INK.resultFill;
+        ctx.fill('nonzero');
+        shapes.forEach((s, i) => paintShape(ctx, s.region, doc.shapes[i]?.op ?? 'add', v, !!s.error));
+        ctx.beginPath();
+        traceRegion(ctx, region, v);
+        ctx.strokeStyle = INK.resultLine;
+        ctx.lineWidth = 1.6;
+        ctx.lineJoin = 'round';
+        ctx.stroke();
+      }}
+    />
   );
 }
 
