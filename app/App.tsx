@@ -12,6 +12,8 @@ import { EditorContext } from './store/hooks';
 import { StatusBar, ToolRail, TopBar } from './ui/Bars';
 import { Notice } from './ui/Notice';
 import { ReportOverlay } from './ui/ReportOverlay';
+import { ExchangeDialogs } from './exchange/ExchangeDialogs';
+import { TitleBlockDialog } from './ui/TitleBlock';
 
 function isField(t: EventTarget | null): boolean {
   return t instanceof HTMLInputElement || t instanceof HTMLTextAreaElement || t instanceof HTMLSelectElement;
@@ -97,6 +99,8 @@ export function App({ editor }: { editor: Editor }) {
         </aside>
         <StatusBar />
         <ReportOverlay />
+        <ExchangeDialogs />
+        <TitleBlockDialog />
         <input
           ref={fileInput}
           type="file"

@@ -12,6 +12,7 @@ import { shapeHandles } from '../shapes';
 import { gridStep, toWorld, zoomAt, type ViewTransform } from '../view';
 import type { Draft } from '../tools/types';
 import type { SnapResult } from './snap';
+import { ProblemLayer } from './ProblemLayer';
 import { INK, hatch, opStyle, traceRegion } from './paint';
 import { cutSection } from '../../src';
 
@@ -595,6 +596,7 @@ export function Canvas() {
         <Layer listening={false}>
           <ShapesLayer />
           <OverlayLayer />
+          <ProblemLayer />
           <InteractionLayer />
         </Layer>
       </Stage>

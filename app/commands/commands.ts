@@ -29,6 +29,7 @@ import {
   translateShape,
 } from '../shapes';
 import { CommandRegistry, type CommandContext } from './registry';
+import { registerExchangeCommands } from '../exchange/commands';
 
 const hasSelection = (ctx: CommandContext) => ctx.store.getState().selected.length > 0;
 
@@ -431,6 +432,7 @@ export function buildRegistry(): CommandRegistry {
   });
   r.register({ name: 'report.open', label: 'Report', group: 'file', keys: ['mod+p'], perform: (c) => c.openReport?.() });
   r.register({ name: 'notice.dismiss', label: 'Dismiss', group: 'view', perform: (c) => c.store.setState({ notice: null }) });
+  registerExchangeCommands(r);
   return r;
 }
 

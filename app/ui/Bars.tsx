@@ -28,6 +28,11 @@ export function TopBar() {
         <CommandButton name="file.demo">Demo</CommandButton>
       </div>
       <div className="group">
+        <CommandButton name="file.importDxf">Import DXF…</CommandButton>
+        <CommandButton name="file.export">Export…</CommandButton>
+        <CommandButton name="doc.titleBlock">Title block…</CommandButton>
+      </div>
+      <div className="group">
         <CommandButton name="undo" />
         <CommandButton name="redo" />
       </div>

@@ -1,0 +1,8 @@
+/** React adapter for the exchange UI state. */
+import { useStore } from 'zustand';
+import { useEditor } from '../store/hooks';
+import { exchangeStore, type ExchangeState } from './state';
+
+export function useExchange<T>(selector: (s: ExchangeState) => T): T {
+  return useStore(exchangeStore(useEditor().store), selector);
+}
