@@ -89,11 +89,15 @@ export function App({ editor }: { editor: Editor }) {
           <Notice />
         </main>
         <aside className="panel" aria-label="Selection and results">
-          <div className="panel-scroll">
+          {/* Two scroll areas: editing above, results below, so the numbers stay in view
+              while a shape is edited. */}
+          <div className="panel-scroll panel-edit">
             <SelectionPanel />
+            <ShapeList />
+          </div>
+          <div className="panel-scroll panel-results">
             <ResultsPanel />
             <CutPanel />
-            <ShapeList />
           </div>
           <Caution />
         </aside>
