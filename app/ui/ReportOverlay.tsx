@@ -2,10 +2,14 @@
 import { useEffect, useRef, useState } from 'react';
 import { loadReportRenderer } from '../report';
 import { useEditor, useEditorState } from '../store/hooks';
+import { withPaperSize, type Paper } from '../exchange/paper';
+import { CommandButton } from './CommandButton';
 
 export function ReportOverlay() {
   const editor = useEditor();
   const open = useEditorState((s) => s.reportOpen);
+  const doc = useEditorState((s) => s.doc);
+  const [paper, setPaper] = useState<Paper>('A4');
   const [html, setHtml] = useState<string | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
   const frame = useRef<HTMLIFrameElement>(null);
@@ -29,7 +33,7 @@ export function ReportOverlay() {
     return () => {
       live = false;
     };
-  }, [open, editor]);
+  }, [open, editor, doc]);
   if (!open) return null;
   const close = () => editor.store.setState({ reportOpen: false });
   return (
@@ -38,6 +42,11 @@ export function ReportOverlay() {
         <div className="overlay-head">
           <h2>Report</h2>
           <div className="spacer" />
+          <CommandButton name="doc.titleBlock" />
+          <select data-testid="report-paper" aria-label="Paper size" value={paper} onChange={(e) => setPaper(e.target.value as Paper)}>
+            <option value="A4">A4</option>
+            <option value="Letter">US Letter</option>
+          </select>
           <button className="btn" disabled={!html} onClick={() => frame.current?.contentWindow?.print()}>
             Print / Save as PDF
           </button>
@@ -46,7 +55,7 @@ export function ReportOverlay() {
           </button>
         </div>
         {problem && <p className="hint">{problem}</p>}
-        {html && <iframe ref={frame} title="Section report" className="report-frame" srcDoc={html} />}
+        {html && <iframe ref={frame} title="Section report" className="report-frame" srcDoc={withPaperSize(html, paper)} sandbox="allow-same-origin allow-modals" />}
         {!html && !problem && <p className="hint">Preparing the report…</p>}
       </div>
     </div>
