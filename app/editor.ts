@@ -3,7 +3,7 @@
  * the command context. Nothing here depends on React, so the tests build the same editor.
  */
 import { createStore, type StoreApi } from 'zustand/vanilla';
-import { formatIssue, validateShape, type Point, type SectionDocument, type Shape } from '../src';
+import { formatIssue, unitFactor, validateShape, type Point, type SectionDocument, type Shape } from '../src';
 import { registry } from './commands/commands';
 import type { CommandContext, FileIO } from './commands/registry';
 import { parsePointInput } from './expr';
@@ -86,8 +86,13 @@ export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule
       tools[prev.tool].reset(env);
       transient.setState({ inputError: null });
     }
-    // Points held by a half-drawn shape are in the old units: start it again.
-    if (s.doc.units !== prev.doc.units) tool().reset(env);
+    if (s.doc.units !== prev.doc.units) {
+      // Points held by a half-drawn shape are in the old units: start it again.
+      tool().reset(env);
+      // Keep the picture the same physical size on screen (on a unit switch, its undo and redo).
+      const f = unitFactor(prev.doc.units, s.doc.units);
+      store.setState({ scale: s.scale / f, cutAt: s.cutAt === null ? null : s.cutAt * f });
+    }
     if (s.tool !== prev.tool || s.pathArc !== prev.pathArc || s.profileType !== prev.profileType) updatePrompt();
   });
   const unsubT = transient.subscribe((t, prev) => {

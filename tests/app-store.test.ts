@@ -308,3 +308,18 @@ describe('autosave', () => {
     expect(st.m.get(REJECTED_KEY)).toMatch(/furlong/);
   });
 });
+
+describe('view follows the units', () => {
+  it('keeps the picture size on a unit switch and on its undo', () => {
+    const e = editorWith([rect('a', 0, 0, 100, 200)]);
+    e.store.setState({ scale: 2, cutAt: 50 });
+    e.run('units.set', 'cm');
+    // 1 cm = 10 mm (SI): ten times the pixels per unit, the cut at 5 cm.
+    expect(e.store.getState().scale).toBeCloseTo(20, 12);
+    expect(e.store.getState().cutAt).toBeCloseTo(5, 12);
+    undo(e.store);
+    expect(e.store.getState().doc.units).toBe('mm');
+    expect(e.store.getState().scale).toBeCloseTo(2, 12);
+    expect(e.store.getState().cutAt).toBeCloseTo(50, 12);
+  });
+});

@@ -9,7 +9,6 @@ import {
   parseDocument,
   regionBounds,
   UNITS,
-  unitFactor,
   type Bounds,
   type Op,
   type SectionDocument,
@@ -395,11 +394,8 @@ export function buildRegistry(): CommandRegistry {
       if (!(UNITS as readonly string[]).includes(u)) return;
       const s = c.store.getState();
       if (s.doc.units === u) return;
-      const next = convertDocumentUnits(s.doc, u);
-      // Keep the picture where it was: the same physical size on screen.
-      const f = unitFactor(s.doc.units, u);
-      commit(c.store, next);
-      c.store.setState({ scale: s.scale / f, cutAt: s.cutAt === null ? null : s.cutAt * f });
+      // The view follows the units (editor.ts), also on undo and redo.
+      commit(c.store, convertDocumentUnits(s.doc, u));
     },
   });
   // files
