@@ -254,6 +254,26 @@ export const tests = [
     },
   },
   {
+    name: 'principal axes of a rotated rectangle, overlays toggle',
+    async run(t) {
+      const { page, errors } = await open(t, { seed: doc([{ id: 'r', type: 'rectangle', at: [0, 0], width: 20, height: 100, rotation: 30 }]) });
+      const b = 20, h = 100;
+      // A rectangle's principal axes run along its sides (Gere & Goodno, §12.9): θ = 30°, I1 = b·h³/12, I2 = h·b³/12.
+      close(await prop(page, 'theta'), 30, 'θ of I1 from x');
+      close(await prop(page, 'I1'), (b * h ** 3) / 12, 'I1 = b·h³/12');
+      close(await prop(page, 'I2'), (h * b ** 3) / 12, 'I2 = h·b³/12');
+      // Rotated axes: Ix = (I1 + I2)/2 + (I1 − I2)/2·cos 2θ (Gere & Goodno, §12.8).
+      close(await prop(page, 'Ix'), ((b * h ** 3) / 12 + (h * b ** 3) / 12) / 2 + (((b * h ** 3) / 12 - (h * b ** 3) / 12) / 2) * Math.cos(Math.PI / 3), 'Ix by the rotation of axes');
+      for (const name of ['view.principal', 'view.fibres', 'view.centroid']) {
+        const before = await page.getAttribute(`[data-command="${name}"]`, 'aria-pressed');
+        await page.click(`[data-command="${name}"]`);
+        assert.notEqual(await page.getAttribute(`[data-command="${name}"]`, 'aria-pressed'), before, `${name} toggles`);
+      }
+      await settle(page);
+      assert.deepEqual(errors, []);
+    },
+  },
+  {
     name: 'permanent caution, report overlay, first start shows the demo',
     async run(t) {
       const { page } = await open(t, { seed: null, view: null });
