@@ -163,6 +163,7 @@ export function createLiveResults(store: EditorStore, opts: { schedule?: Schedul
         inFlight = { seq: -1, doc: store.getState().doc };
         setTimeout(() => {
           inFlight = null;
+          if (dead) return;
           if (store.getState().doc !== results.getState().doc) send(store.getState().doc);
         }, gap);
       }
