@@ -1,7 +1,8 @@
 /**
  * DXF import and drawing export in the browser: a hand-written plate with holes (LWPOLYLINE with
- * bulges) through the file chooser, a file without units, an unclosed chain, files that cannot be
- * read, a cut-out dropped onto a section, SVG/PNG/JSON downloads, and export → import round trip.
+ * bulges) through the file chooser, a bar drawn as LINE and ARC entities in random order, a file
+ * without units, an unclosed chain, files that cannot be read, a cut-out dropped onto a section,
+ * SVG/PNG/JSON downloads, and export → import round trip.
  * Closed forms are named beside each check.
  */
 import assert from 'node:assert/strict';
@@ -88,6 +89,28 @@ export const tests = [
       await page.click('[data-command="redo"]');
       close(await prop(page, 'area'), cf.A, 'redo brings the import back');
       assert.deepEqual(errors, []);
+    },
+  },
+  {
+    name: 'DXF import: separate LINE and ARC entities in random order are joined into one outline',
+    async run(t) {
+      const { page } = await open(t);
+      await importThroughChooser(page, FIX('lines-arcs.dxf'));
+      await page.waitForSelector('[data-testid="dxf-review"]');
+      assert.match(await page.textContent('[data-testid="dxf-summary"]'), /Found 1 closed outline \(/);
+      assert.equal(await page.$('[data-testid="dxf-problems"]'), null, 'nothing left out');
+      await page.click('[data-testid="dxf-apply"]');
+      // 80 × 40 bar plus a R20 semicircle on x = 80 (composite method; semicircle: area πr²/2,
+      // centroid 4r/3π from the diameter, I about the symmetry axis πr⁴/8, I about its centroidal
+      // axis parallel to the diameter (π/8 − 8/9π)r⁴ — Gere & Goodno, App. E).
+      const r = 20, As = (PI * r * r) / 2, c = (4 * r) / (3 * PI);
+      const A = 3200 + As;
+      const xc = (3200 * 40 + As * (80 + c)) / A;
+      close(await prop(page, 'area'), A, 'A = b·h + πr²/2');
+      close(await prop(page, 'centroid.x'), xc, 'x̄ = ΣAᵢxᵢ / ΣAᵢ');
+      close(await prop(page, 'centroid.y'), 20, 'ȳ = 20 by symmetry');
+      close(await prop(page, 'Ix'), (80 * 40 ** 3) / 12 + (PI * r ** 4) / 8, 'Ix = bh³/12 + πr⁴/8');
+      close(await prop(page, 'Iy'), (40 * 80 ** 3) / 12 + 3200 * (40 - xc) ** 2 + (PI / 8 - 8 / (9 * PI)) * r ** 4 + As * (80 + c - xc) ** 2, 'Iy by the parallel-axis theorem');
     },
   },
   {
