@@ -150,6 +150,29 @@ export const tests = [
     },
   },
   {
+    name: 'a dragged shape snaps its corner onto another shape’s corner',
+    async run(t) {
+      const { page } = await open(t, {
+        seed: doc([
+          { id: 'a', type: 'rectangle', at: [0, 0], width: 100, height: 60 },
+          { id: 'b', type: 'rectangle', at: [150.3, 0.7], width: 40, height: 40 },
+        ]),
+      });
+      await page.click('[data-command="snap.grid"]'); // only the geometry pulls
+      const [x0, y0] = await pagePoint(page, 170, 20);
+      await page.mouse.move(x0, y0);
+      await page.mouse.down();
+      // Bring b's lower-left corner (150.3, 0.7) to about (101.5, 61) — near a's corner (100, 60).
+      const [x1, y1] = await pagePoint(page, 170 - 48.8, 20 + 60.3);
+      await page.mouse.move(x1, y1, { steps: 6 });
+      const snap = await page.evaluate(() => window.__kern.editor.transient.getState().snap);
+      assert.equal(snap?.kind, 'vertex', 'the target corner is shown during the drag');
+      await page.mouse.up();
+      const b = (await docShapes(page))[1];
+      assert.deepEqual(b.at, [100, 60], 'corner on corner, exactly');
+    },
+  },
+  {
     name: 'unit switching converts the section and shows units with powers',
     async run(t) {
       const { page } = await open(t, { seed: rect100x60 });
