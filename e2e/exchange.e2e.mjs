@@ -95,11 +95,18 @@ export const tests = [
     name: 'DXF import: separate LINE and ARC entities in random order are joined into one outline',
     async run(t) {
       const { page } = await open(t);
+      // Keyboard: Escape cancels the review and adds nothing; Enter confirms (the confirm button has the focus).
+      await importThroughChooser(page, FIX('lines-arcs.dxf'));
+      await page.waitForSelector('[data-testid="dxf-review"]');
+      await page.keyboard.press('Escape');
+      await page.waitForSelector('[data-testid="dxf-review"]', { state: 'detached' });
+      assert.equal((await docShapes(page)).length, 0, 'Escape adds nothing');
       await importThroughChooser(page, FIX('lines-arcs.dxf'));
       await page.waitForSelector('[data-testid="dxf-review"]');
       assert.match(await page.textContent('[data-testid="dxf-summary"]'), /Found 1 closed outline \(/);
       assert.equal(await page.$('[data-testid="dxf-problems"]'), null, 'nothing left out');
-      await page.click('[data-testid="dxf-apply"]');
+      await page.keyboard.press('Enter');
+      await page.waitForSelector('[data-testid="dxf-review"]', { state: 'detached' });
       // 80 × 40 bar plus a R20 semicircle on x = 80 (composite method; semicircle: area πr²/2,
       // centroid 4r/3π from the diameter, I about the symmetry axis πr⁴/8, I about its centroidal
       // axis parallel to the diameter (π/8 − 8/9π)r⁴ — Gere & Goodno, App. E).

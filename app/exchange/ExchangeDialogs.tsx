@@ -13,6 +13,23 @@ import { useExchange } from './hooks';
 import { exchangeStore, type PendingImport } from './state';
 import './exchange.css';
 
+/** Keyboard: a dialog takes the focus when it opens, and Escape closes it. */
+const focusIn = (...selectors: string[]) => (el: HTMLElement | null) => {
+  if (!el || el.contains(document.activeElement)) return;
+  for (const sel of selectors) {
+    const target = el.querySelector<HTMLElement>(sel);
+    if (target) return target.focus();
+  }
+};
+const focusFirst = focusIn('button:not(:disabled)');
+const focusPrimary = focusIn('.btn.primary:not(:disabled)', 'button:not(:disabled)');
+function escapeTo(close: () => void) {
+  return (e: React.KeyboardEvent) => {
+    e.stopPropagation();
+    if (e.key === 'Escape') close();
+  };
+}
+
 export function ExchangeDialogs() {
   return (
     <>
@@ -65,7 +82,7 @@ function ImportDialog() {
 function UnitsDialog({ p }: { p: Extract<PendingImport, { stage: 'units' }> }) {
   const editor = useEditor();
   return (
-    <div className="overlay" role="dialog" aria-label="Units of the DXF file" data-testid="dxf-units-dialog">
+    <div className="overlay" role="dialog" aria-modal="true" aria-label="Units of the DXF file" data-testid="dxf-units-dialog" ref={focusFirst} onKeyDown={escapeTo(() => cancelImport(editor.ctx))}>
       <div className="overlay-card xc-card">
         <div className="overlay-head">
           <h2>Units of “{p.fileName}”</h2>
@@ -127,7 +144,7 @@ function ReviewDialog({ p }: { p: Extract<PendingImport, { stage: 'review' }> })
       ? `Read in ${p.sourceUnits}${p.unitsFromFile ? ' (as the file states)' : ' (as you chose)'}.`
       : `Read in ${p.sourceUnits}${p.unitsFromFile ? ' (as the file states)' : ' (as you chose)'} and converted to ${p.targetUnits}.`;
   return (
-    <div className="overlay xc-side" role="dialog" aria-label="Import DXF" data-testid="dxf-review">
+    <div className="overlay xc-side" role="dialog" aria-modal="true" aria-label="Import DXF" data-testid="dxf-review" ref={focusPrimary} onKeyDown={escapeTo(() => cancelImport(editor.ctx))}>
       <div className="overlay-card xc-card">
         <div className="overlay-head">
           <h2>Import “{p.fileName}”</h2>
@@ -229,7 +246,7 @@ function ExportDialog() {
   const size = empty ? null : pngSize(region, Number(ppu));
   const problem = empty ? null : pngProblem(size);
   return (
-    <div className="overlay" role="dialog" aria-label="Export" data-testid="export-dialog" onKeyDown={(e) => e.key === 'Escape' && close()}>
+    <div className="overlay" role="dialog" aria-modal="true" aria-label="Export" data-testid="export-dialog" ref={focusFirst} onKeyDown={escapeTo(close)}>
       <div className="overlay-card xc-card">
         <div className="overlay-head">
           <h2>Export the section</h2>

@@ -67,7 +67,21 @@ export function TitleBlockDialog() {
     exchangeStore(editor.store).setState({ titleOpen: false });
   };
   return (
-    <div className="overlay" style={{ zIndex: 30 }} role="dialog" aria-label="Title block" data-testid="title-dialog">
+    <div
+      className="overlay"
+      style={{ zIndex: 30 }}
+      role="dialog"
+      aria-modal="true"
+      aria-label="Title block"
+      data-testid="title-dialog"
+      ref={(el) => {
+        if (el && !el.contains(document.activeElement)) el.querySelector('input')?.focus();
+      }}
+      onKeyDown={(e) => {
+        e.stopPropagation();
+        if (e.key === 'Escape') close();
+      }}
+    >
       <div className="overlay-card xc-card">
         <div className="overlay-head">
           <h2>Title block</h2>
