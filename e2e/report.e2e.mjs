@@ -138,6 +138,16 @@ export const tests = [
       }
       const scale = await frame.getAttribute('[data-scale]', 'data-scale');
       assert.match(scale, /^\d+(\.\d+)?:\d+(\.\d+)?$/, `a drawing scale like 1:2 (${scale})`);
+      // The stated scale is the drawn one: the figure's viewBox is in paper millimetres (width in mm
+      // equals the viewBox width), and the section path is scaled by k mm of paper per mm of section.
+      const fig = await frame.evaluate(() => {
+        const svg = document.querySelector('.figure svg');
+        const m = /matrix\(([^ ]+) 0 0 ([^ ]+) /.exec(svg.querySelector('path.section').getAttribute('transform'));
+        return { width: svg.getAttribute('width'), vb: svg.getAttribute('viewBox').split(' ').map(Number), k: Number(m[1]), k2: Number(m[2]) };
+      });
+      const [num, den] = scale.split(':').map(Number);
+      assert.equal(fig.width, `${fig.vb[2]}mm`, 'one viewBox unit is one millimetre of paper');
+      assert.ok(Math.abs(fig.k - num / den) < 1e-12 && fig.k2 === fig.k, `path scale ${fig.k} = ${scale} (document in mm)`);
       const html = await page.getAttribute('[data-testid="report-overlay"] iframe', 'srcdoc');
       assert.match(html, /@page \{ size: A4 portrait; \}/);
 
