@@ -124,7 +124,8 @@ export function createLiveResults(store: EditorStore, opts: { schedule?: Schedul
     const sent = new Map<string, Shape>();
     let seq = 0;
     let inFlight: { seq: number; doc: SectionDocument } | null = null;
-    let queued = false;
+    /** Holds the worker's slot during the pause between evaluations. */
+    const PAUSE = { seq: -1, doc: first };
     const send = (doc: SectionDocument) => {
       const changed: Record<string, Shape> = {};
       const ids = new Set<string>();
@@ -148,25 +149,22 @@ export function createLiveResults(store: EditorStore, opts: { schedule?: Schedul
     w.onmessage = (e: MessageEvent<WorkerResponse>) => {
       const res = e.data;
       const job = inFlight;
-      if (job && res.seq === job.seq) {
+      // Only the answer to the request in flight counts (the start-up answer has none).
+      if (!job || res.seq !== job.seq) return;
+      let evaluation: Evaluation;
+      if (res.ok) evaluation = { region: res.region, props: res.props, message: res.message, warnings: res.warnings, shapes: shapesOf(job.doc) };
+      else evaluation = evaluateSync(job.doc); // the worker failed: fall back on the main thread
+      results.setState({ doc: job.doc, evaluation, lastMs: res.ms, count: results.getState().count + 1 });
+      inFlight = null;
+      if (store.getState().doc === job.doc) return;
+      // The document moved on meanwhile (a drag). Leave the processor to the pointer for
+      // DUTY_GAP times as long as the engine just took, then evaluate the latest document:
+      // on a small machine a worker that never rests would starve the frames.
+      inFlight = PAUSE;
+      setTimeout(() => {
         inFlight = null;
-        let evaluation: Evaluation;
-        if (res.ok) evaluation = { region: res.region, props: res.props, message: res.message, warnings: res.warnings, shapes: shapesOf(job.doc) };
-        else evaluation = evaluateSync(job.doc); // the worker failed: fall back on the main thread
-        results.setState({ doc: job.doc, evaluation, lastMs: res.ms, count: results.getState().count + 1 });
-      }
-      if (queued || store.getState().doc !== results.getState().doc) {
-        queued = false;
-        // Leave the processor to the pointer for as long as the engine just took (at most
-        // 50% duty): on a small machine a busy worker would otherwise starve the frames.
-        const gap = Math.min(res.ms, 100) * DUTY_GAP;
-        inFlight = { seq: -1, doc: store.getState().doc };
-        setTimeout(() => {
-          inFlight = null;
-          if (dead) return;
-          if (store.getState().doc !== results.getState().doc) send(store.getState().doc);
-        }, gap);
-      }
+        if (!dead && store.getState().doc !== results.getState().doc) send(store.getState().doc);
+      }, Math.min(res.ms, 100) * DUTY_GAP);
     };
     w.onerror = () => {
       // A worker that cannot start (blocked by the page's policy): evaluate on the main thread.
@@ -178,8 +176,8 @@ export function createLiveResults(store: EditorStore, opts: { schedule?: Schedul
     const unsub = store.subscribe((s, prev) => {
       if (s.doc === prev.doc) return;
       if (dead) scheduleSync();
-      else if (inFlight) queued = true;
-      else send(s.doc);
+      else if (!inFlight) send(s.doc);
+      // else: the answer (or the end of the pause) sends the latest document.
     });
     dispose = () => {
       unsub();
