@@ -71,14 +71,17 @@ export function buildPaths(ctx: Ctx): { subj: IntPoint[][]; clip: IntPoint[][] }
         // At least two chords while the piece is visibly curved at the integer scale.
         if (cnt < 2 && c.r * (1 - Math.cos(dphi / 2)) * ctx.scale > 0.5) cnt = 2;
         const half = dphi / Math.max(cnt, 1) / 2;
-        const dev = ctx.side[id] === CIRCUMSCRIBE ? c.r * (1 / Math.cos(half) - 1) : c.r * (1 - Math.cos(half));
+        const dev = ctx.side[id] === CIRCUMSCRIBE ? 1.5 * c.r * (1 / Math.cos(half) - 1) : c.r * (1 - Math.cos(half));
         if (dev > ctx.chordSag[id]) ctx.chordSag[id] = dev;
         if (ctx.side[id] === CIRCUMSCRIBE && cnt >= 1) {
           // Tangent segments: corners at the middle angles, pushed out to r / cos(half step).
-          const sec = 1 / Math.cos(half);
+          // The first and last corners go out a little further, so the end segments leave the
+          // end tangents (a tangent neighbour line would make the node collinear for clipper).
+          const sec = 1 / Math.cos(half), secEnd = 1 + 1.5 * (sec - 1);
           for (let j = 0; j < cnt; j++) {
             const t = c.t0 + c.phi * (ua + ((ub - ua) * (j + 0.5)) / cnt);
-            pushVertex(ctx, path, c.cx + c.r * sec * Math.cos(t), c.cy + c.r * sec * Math.sin(t), false, own);
+            const rr = c.r * (j === 0 || j === cnt - 1 ? secEnd : sec);
+            pushVertex(ctx, path, c.cx + rr * Math.cos(t), c.cy + rr * Math.sin(t), false, own);
           }
           continue;
         }
