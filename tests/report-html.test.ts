@@ -146,3 +146,23 @@ describe('drawing scales (ISO 5455 series)', () => {
     expect(chooseScale(12000, 800, 150, 120).label).toBe('1:100'); // 120 × 8
   });
 });
+
+describe('report: area change per shape', () => {
+  test('the changes add up to the section area, and a hole removes only what it crosses', () => {
+    // Plate 100 × 20 with a Ø10 bore half off its top edge at (50, 20): the bore removes a half
+    // circle, π·5²/2 (Gere & Goodno, plane areas, semicircle).
+    const doc: SectionDocument = {
+      format: 'kern-section',
+      version: 1,
+      units: 'mm',
+      shapes: [
+        { id: 'p', type: 'rectangle', at: [0, 0], width: 100, height: 20 },
+        { id: 'b', type: 'circle', center: [50, 20], radius: 5, op: 'subtract' },
+      ],
+    };
+    const html = renderReportHtml({ doc, evaluation: evaluateDocument(doc), paper: 'A4' });
+    expect(html).toContain('<td class="num">+2000</td>');
+    expect(html).toContain(`<td class="num">−${formatNumber((Math.PI * 25) / 2)}</td>`);
+    expect(html).toMatch(/@page \{[^}]*size: A4 portrait;/);
+  });
+});

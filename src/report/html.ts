@@ -5,7 +5,7 @@
  * document is escaped, so a name is always shown as text.
  */
 import type { SectionDocument } from '../document/types';
-import type { Evaluation } from '../evaluate';
+import { createEvaluator, type Evaluation } from '../evaluate';
 import { formatIssue } from '../document/validate';
 import { regionMoments } from '../moments/kernel';
 import { PROPERTY_CATALOG, formatNumber, formatProperty, unitText, type PropertyInfo } from '../properties/catalog';
@@ -21,6 +21,8 @@ export interface ReportInput {
   cut?: { axis: 'x' | 'y'; at: number } | null;
   /** Shown in the footer when given (e.g. an ISO time stamp); never invented. */
   generated?: string;
+  /** Paper size for printing; the browser's default when absent. */
+  paper?: 'A4' | 'Letter';
 }
 
 export const METHOD_NOTE =
@@ -41,8 +43,8 @@ function cssString(s: string): string {
   return `"${Array.from(s).map((ch) => (/[A-Za-z0-9 ]/.test(ch) ? ch : `\\${ch.codePointAt(0)!.toString(16)} `)).join('')}"`;
 }
 
-const pageCss = (heading: string) => `
-@page { margin: 15mm 15mm 17mm;
+const pageCss = (heading: string, paper?: 'A4' | 'Letter') => `
+@page { margin: 15mm 15mm 17mm;${paper === 'A4' ? ' size: A4 portrait;' : paper === 'Letter' ? ' size: letter portrait;' : ''}
   @bottom-left { content: ${cssString(heading)}; font: 7.5pt Arial, sans-serif; color: #555; }
   @bottom-right { content: "Page " counter(page) " of " counter(pages); font: 7.5pt Arial, sans-serif; color: #555; } }
 `;
@@ -122,21 +124,30 @@ function propertyTable(input: ReportInput): string {
 function shapeTable(input: ReportInput): string {
   const { doc, evaluation } = input;
   const units = doc.units;
+  // What each shape changes: the section's area after it minus before it, in list order, so the
+  // column adds up to the final area and a checker can follow every step.
+  const stepper = createEvaluator();
+  let before = 0;
   const rows = doc.shapes.map((s, i) => {
     const res = evaluation.shapes.find((r) => r.id === s.id);
     let area = '—';
     if (res?.error) area = `error: ${res.error}`;
     else if (res && res.region.length > 0) area = formatNumber(Math.abs(regionMoments(res.region).m00));
+    const step = stepper.evaluate({ ...doc, shapes: doc.shapes.slice(0, i + 1) });
+    const after = step.region.length ? regionMoments(step.region).m00 : 0;
+    const change = after - before;
+    before = after;
+    const changeText = Math.abs(change) < 1e-12 * Math.max(after, 1e-300) ? '0' : `${change > 0 ? '+' : '−'}${formatNumber(Math.abs(change))}`;
     const name = s.name ? `${s.name} (${s.id})` : s.id;
     return (
       `<tr><td class="num">${i + 1}</td><td>${escapeHtml(name)}</td><td>${escapeHtml(shapeKind(s))}</td><td>${escapeHtml(shapeOperation(s))}</td>` +
-      `<td>${escapeHtml(shapeDimensions(s, units))}</td><td class="num">${escapeHtml(area)}</td></tr>`
+      `<td>${escapeHtml(shapeDimensions(s, units))}</td><td class="num">${escapeHtml(area)}</td><td class="num">${escapeHtml(changeText)}</td></tr>`
     );
   });
   return (
     `<section class="block"><h2>Input shapes</h2>` +
-    `<p class="small">Applied in this order to an empty section. Dimensions and coordinates in ${escapeHtml(units)}; area of each shape on its own in ${escapeHtml(unitText(units, 2))}.</p>` +
-    `<table class="shapes"><thead><tr><th>#</th><th>Name (id)</th><th>Kind</th><th>Operation</th><th>Dimensions and placement</th><th>Own area</th></tr></thead>` +
+    `<p class="small">Applied in this order to an empty section. Dimensions and coordinates in ${escapeHtml(units)}; areas in ${escapeHtml(unitText(units, 2))}: each shape on its own, and the change it makes to the section (these changes add up to the total area).</p>` +
+    `<table class="shapes"><thead><tr><th>#</th><th>Name (id)</th><th>Kind</th><th>Operation</th><th>Dimensions and placement</th><th>Own area</th><th>Area change</th></tr></thead>` +
     `<tbody>${rows.join('')}</tbody></table></section>`
   );
 }
@@ -176,7 +187,7 @@ export function renderReportHtml(input: ReportInput): string {
     `<!DOCTYPE html>\n<html lang="en"><head><meta charset="utf-8">` +
     `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">` +
     `<meta name="viewport" content="width=device-width, initial-scale=1">` +
-    `<title>${escapeHtml(`Section properties: ${heading}`)}</title><style>${pageCss(`Section properties: ${heading}${input.generated ? ` · generated ${input.generated}` : ''}`)}${CSS}</style></head>` +
+    `<title>${escapeHtml(`Section properties: ${heading}`)}</title><style>${pageCss(`Section properties: ${heading}${input.generated ? ` · generated ${input.generated}` : ''}`, input.paper)}${CSS}</style></head>` +
     `<body>${body.join('\n')}</body></html>\n`
   );
 }
