@@ -31,7 +31,22 @@ function passThrough(r: Region): Region {
   return isClean(r) ? r.slice() : runBoolean([{ contours: r, group: 0 }], 'union').region;
 }
 
-/** subject OP (union of clips). Inputs: well-formed regions (signed contours). */
+/** Bounds widened by a tolerance, so that touching boxes count as overlapping. */
+function widened(b: Bounds | null, tol: number): Bounds | null {
+  return b && { xmin: b.xmin - tol, xmax: b.xmax + tol, ymin: b.ymin - tol, ymax: b.ymax + tol };
+}
+function boxesMeet(a: Bounds | null, b: Bounds | null): boolean {
+  return !!a && !!b && !(b.xmin > a.xmax || b.xmax < a.xmin || b.ymin > a.ymax || b.ymax < a.ymin);
+}
+
+/**
+ * subject OP (union of clips). Inputs: well-formed regions (signed contours).
+ *
+ * Work is limited to what can change. For union and difference, a subject loop whose box meets no
+ * clip's box is kept as it is: nothing reaches the material or the hole it bounds, so the signed
+ * loops still add up to the right winding everywhere. For union, a clip that meets neither the
+ * subject's loops nor another clip is added as it is. Only the rest goes through clipper.
+ */
 export function booleanRegions(subject: Region, clips: Region[], op: BoolOp): Region {
   let cl = clips.filter((c) => c.length > 0);
   if (op !== 'union') {
@@ -41,9 +56,32 @@ export function booleanRegions(subject: Region, clips: Region[], op: BoolOp): Re
     if (cl.length === 0) return op === 'difference' ? passThrough(subject) : [];
     if (subject.length === 0) return [];
   } else if (cl.length === 0) return passThrough(subject);
+  const kept: Contour[] = [];
+  let subj: Region = subject;
+  if (op !== 'intersection' && isClean(subject) && cl.every(isClean)) {
+    const all = regionBounds([...subject, ...cl.flat()]);
+    const tol = all ? 1e-9 * Math.max(all.xmax - all.xmin, all.ymax - all.ymin) : 0;
+    const clipBoxes = cl.map((c) => widened(regionBounds(c), tol));
+    const subjBoxes = subject.map((c) => widened(regionBounds([c]), tol));
+    const active: Contour[] = [];
+    subject.forEach((c, k) => (clipBoxes.some((b) => boxesMeet(subjBoxes[k], b)) ? active.push(c) : kept.push(c)));
+    if (op === 'union') {
+      const busy: Region[] = [];
+      cl.forEach((c, k) => {
+        const alone = !subjBoxes.some((b) => boxesMeet(b, clipBoxes[k])) && !clipBoxes.some((b, j) => j !== k && boxesMeet(b, clipBoxes[k]));
+        if (alone) kept.push(...c);
+        else busy.push(c);
+      });
+      cl = busy;
+    }
+    subj = active;
+    if (cl.length === 0) return [...kept, ...subj];
+    if (subj.length === 0 && op === 'difference') return kept;
+  }
   const clipContours: Contour[] = [];
   for (const r of cl) for (const c of r) clipContours.push(c);
-  return runBoolean([{ contours: subject, group: 0 }, { contours: clipContours, group: 1 }], op).region;
+  const out = runBoolean([{ contours: subj, group: 0 }, { contours: clipContours, group: 1 }], op).region;
+  return kept.length ? [...kept, ...out] : out;
 }
 
 /**
