@@ -18,7 +18,8 @@ const ENGINE_FORBIDDEN = {
   ],
 };
 
-const DOM_GLOBALS = ['window', 'document', 'navigator', 'localStorage', 'sessionStorage', 'HTMLElement', 'HTMLCanvasElement', 'requestAnimationFrame', 'indexedDB', 'location'];
+// Node globals are refused too: the engine runs unchanged in a browser and in a worker.
+const DOM_GLOBALS = ['process', 'Buffer', 'window', 'document', 'navigator', 'localStorage', 'sessionStorage', 'HTMLElement', 'HTMLCanvasElement', 'requestAnimationFrame', 'indexedDB', 'location'];
 
 export default tseslint.config(
   { ignores: ['node_modules', 'dist', 'test-results', 'playwright-report', 'out'] },
@@ -36,7 +37,7 @@ export default tseslint.config(
     languageOptions: { globals: { ...globals.es2022 } },
     rules: {
       'no-restricted-imports': ['error', ENGINE_FORBIDDEN],
-      'no-restricted-globals': ['error', ...DOM_GLOBALS.map((name) => ({ name, message: 'src/ is the pure engine: no DOM.' }))],
+      'no-restricted-globals': ['error', ...DOM_GLOBALS.map((name) => ({ name, message: 'src/ is the pure engine: no DOM or Node globals.' }))],
     },
   },
 );

@@ -15,8 +15,9 @@ describe('lint layering rule', () => {
       expect(await ruleIds(`import x from '${mod}';\nexport const y = x;\n`, 'src/geometry/probe.ts')).toContain('no-restricted-imports');
     }
   });
-  it('refuses DOM globals in src/', async () => {
+  it('refuses DOM and Node globals in src/', async () => {
     expect(await ruleIds('export const w = window.innerWidth;\n', 'src/geometry/probe.ts')).toContain('no-restricted-globals');
+    expect(await ruleIds('export const d = process.env.DEBUG;\n', 'src/geometry/probe.ts')).toContain('no-restricted-globals');
   });
   it('allows the same imports in app/', async () => {
     expect(await ruleIds(`import { create } from 'zustand';\nexport const s = create;\n`, 'app/probe.ts')).not.toContain('no-restricted-imports');
