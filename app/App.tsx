@@ -14,6 +14,7 @@ import { Notice } from './ui/Notice';
 import { ReportOverlay } from './ui/ReportOverlay';
 import { ExchangeDialogs } from './exchange/ExchangeDialogs';
 import { TitleBlockDialog } from './ui/TitleBlock';
+import { downloadBlob } from './exchange/exports';
 
 function isField(t: EventTarget | null): boolean {
   return t instanceof HTMLInputElement || t instanceof HTMLTextAreaElement || t instanceof HTMLSelectElement;
@@ -30,16 +31,7 @@ export function App({ editor }: { editor: Editor }) {
         fileInput.current?.click();
         return Promise.resolve(null);
       },
-      download: (name, text) => {
-        const url = URL.createObjectURL(new Blob([text], { type: 'application/json' }));
-        const a = document.createElement('a');
-        a.href = url;
-        a.download = name;
-        document.body.appendChild(a);
-        a.click();
-        a.remove();
-        setTimeout(() => URL.revokeObjectURL(url), 1000);
-      },
+      download: (name, text) => downloadBlob(name, new Blob([text], { type: 'application/json' })),
     };
     editor.ctx.openReport = () => editor.store.setState({ reportOpen: true });
 
