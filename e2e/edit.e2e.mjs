@@ -21,6 +21,23 @@ async function selectInList(page, id) {
 
 export const tests = [
   {
+    name: 'the name field follows undo and redo (regression: it kept the undone name)',
+    async run(t) {
+      const { page } = await open(t, { seed: rect100x60 });
+      await selectInList(page, 'r');
+      await page.fill('[data-field="name"]', 'Base plate');
+      await page.press('[data-field="name"]', 'Enter');
+      await settle(page);
+      assert.equal((await docShapes(page))[0].name, 'Base plate');
+      await page.click('[data-command="undo"]');
+      await settle(page);
+      assert.equal(await page.inputValue('[data-field="name"]'), '', 'the field shows the name as it is after undo');
+      await page.click('[data-command="redo"]');
+      await settle(page);
+      assert.equal(await page.inputValue('[data-field="name"]'), 'Base plate');
+    },
+  },
+  {
     name: 'operation switches: add, subtract, intersect',
     async run(t) {
       const { page } = await open(t, { seed: plateAndHole() });

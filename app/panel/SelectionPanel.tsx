@@ -217,6 +217,7 @@ export function SelectionPanel() {
           <label className="field">
             <span className="field-label">Name</span>
             <input
+              key={one.name ?? ''} // remount when undo or redo changes the name
               data-field="name"
               defaultValue={one.name ?? ''}
               placeholder={shapeLabel(one, idx)}
