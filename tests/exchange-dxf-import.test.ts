@@ -592,3 +592,17 @@ describe('a block bomb', () => {
   });
 });
 
+
+describe('polylines drawn with a width', () => {
+  test('are imported as their centre line, with a warning that names them', () => {
+    // AutoCAD DXF Reference, LWPOLYLINE: group 43 is the constant width.
+    const r = ok(
+      importDxf(
+        wrap(['0', 'LWPOLYLINE', '5', 'W1', '8', '0', '90', '4', '70', '1', '43', '2.5', '10', '0', '20', '0', '10', '10', '20', '0', '10', '10', '20', '5', '10', '0', '20', '5']),
+      ),
+    );
+    expect(r.warnings.join('\n')).toMatch(/1 polyline is drawn with a width \(handle W1\); only the centre line was imported/);
+    // The centre line encloses a 10 × 5 rectangle: A = bh (Gere & Goodno, App. E).
+    expect(Math.abs(evaluated(r).area - 50)).toBeLessThan(1e-12);
+  });
+});

@@ -150,11 +150,15 @@ function importUnsafe(text: string, opts: DxfImportOptions): DxfImport {
 
   // Entities -> pieces (block references expanded).
   const pieces: Piece[] = [];
-  const ctx: Collect = { scan, problems, ignore, pieces, stack: [], budget: MAX_ENTITIES };
+  const ctx: Collect = { scan, problems, ignore, pieces, stack: [], budget: MAX_ENTITIES, wide: [] };
   for (const ent of scan.entities) collect(ent, ctx, IDENTITY, null);
   if (ctx.budget < 0) warnings.push(`The drawing expands to more than ${MAX_ENTITIES} entities through its block references; the rest were left out.`);
   const hiddenUsed = [...ignored.keys()].filter((key) => key.endsWith(' on a hidden layer'));
   if (hiddenUsed.length > 0) warnings.push('Entities on layers that are off or frozen were left out, as the CAD program hides them.');
+  if (ctx.wide.length > 0) {
+    const list = ctx.wide.slice(0, 5).join(', ') + (ctx.wide.length > 5 ? ', …' : '');
+    warnings.push(`${ctx.wide.length} polyline${ctx.wide.length > 1 ? 's are' : ' is'} drawn with a width (handle ${list}); only the centre line was imported, not the band the width draws.`);
+  }
 
   // Scale into the result's units, then pick the tolerance.
   if (k !== 1) for (const p of pieces) scalePiece(p, k);
@@ -305,6 +309,8 @@ interface Collect {
   stack: string[];
   /** Entities still allowed to be read (guards against block references that multiply without end). */
   budget: number;
+  /** Handles of polylines drawn with a width (only their centre line is imported). */
+  wide: string[];
 }
 
 /** Most entities read, counting each entity once per block reference that places it. */
@@ -347,6 +353,7 @@ function collect(ent: ScannedEntity, ctx: Collect, t: Xform, inherit: { layer: s
     return report(`could not be read: it has ${ent.vertexGroups} vertices but its vertex count (group 90) says otherwise`, entityPoints(parsed));
   }
   if (ent.type === 'INSERT') return expandInsert(parsed, ent, ctx, t, source, report);
+  if ((ent.type === 'LWPOLYLINE' || ent.type === 'POLYLINE') && hasWidth(parsed)) ctx.wide.push(ent.handle ?? '?');
   try {
     const made = entityPieces(parsed, ent, source);
     if (made === 'ignore') ctx.ignore(ent.type);
@@ -355,6 +362,14 @@ function collect(ent: ScannedEntity, ctx: Collect, t: Xform, inherit: { layer: s
     if (!(e instanceof EntityProblem)) throw e;
     report(e.message, entityPoints(parsed));
   }
+}
+
+/** True when a polyline has a constant width or any vertex with a start or end width. */
+function hasWidth(e: ParsedEntity): boolean {
+  const w = (e as { width?: number }).width;
+  if (typeof w === 'number' && w > 0) return true;
+  const vs = (e as { vertices?: { startWidth?: number; endWidth?: number }[] }).vertices ?? [];
+  return vs.some((v) => (v.startWidth ?? 0) > 0 || (v.endWidth ?? 0) > 0);
 }
 
 /** Parsed entities, so an entity placed by many block references is parsed once. */
