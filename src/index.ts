@@ -4,6 +4,7 @@ export { parseDocument, validateDocument, validateShape, formatIssue, type Issue
 export { shapeContours, pathContour } from './document/shapes';
 export { convertDocumentUnits, unitFactor } from './document/units';
 export { DEMO_DOCUMENT } from './document/demo';
+export { SHAPE_KIND_LABEL } from './document/labels';
 export { profileToPaths, validateProfile, ProfileError, PROFILE_DEFAULTS, PROFILE_FIELDS } from './document/profiles';
 export type { ProfileType, ProfileField, ProfileIssue, ProfilePaths } from './document/profiles';
 export { createEvaluator, evaluateDocument, type Evaluation, type Evaluator, type ShapeResult } from './evaluate';

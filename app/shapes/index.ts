@@ -2,24 +2,19 @@
  * Editor-side operations on shape records, dispatched to one module per shape kind. Each
  * returns a new record and never mutates its input.
  */
-import type { Point, ProfileShape, Shape } from '../../src';
+import { SHAPE_KIND_LABEL, type Point, type ProfileShape, type Shape } from '../../src';
 import { circleKind } from './circle';
 import type { Handle, HandleRef, PointMap, ShapeKind } from './kind';
 import { pathKind } from './path';
 import { polygonKind } from './polygon';
-import { PROFILE_LABEL, profileKind } from './profile';
+import { profileKind } from './profile';
 
 export type { Handle, HandleRef } from './kind';
 export { contourSignedArea, contourToPath, profileToOutline, regionToPaths } from './outline';
 
 export const PROFILE_TYPE_LIST = ['rectangle', 'i-beam', 'channel', 'angle', 'tee', 'rect-tube', 'round-tube', 'bent-plate'] as const;
 
-export const SHAPE_KIND_LABEL: Record<Shape['type'], string> = {
-  polygon: polygonKind.label,
-  circle: circleKind.label,
-  path: pathKind.label,
-  ...PROFILE_LABEL,
-};
+export { SHAPE_KIND_LABEL };
 
 export function isProfile(s: Shape): s is ProfileShape {
   return (PROFILE_TYPE_LIST as readonly string[]).includes(s.type);

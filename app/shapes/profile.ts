@@ -7,16 +7,6 @@
 import type { ProfileShape } from '../../src';
 import { normaliseDeg, type ShapeKind } from './kind';
 
-export const PROFILE_LABEL: Record<ProfileShape['type'], string> = {
-  rectangle: 'Rectangle',
-  'i-beam': 'I-beam',
-  channel: 'Channel',
-  angle: 'Angle',
-  tee: 'Tee',
-  'rect-tube': 'Rectangular tube',
-  'round-tube': 'Round tube',
-  'bent-plate': 'Bent plate',
-};
 
 export const profileKind: ShapeKind<ProfileShape> = {
   label: 'Profile',

@@ -2,20 +2,8 @@
 import type { Shape, Units } from '../document/types';
 import { PROFILE_FIELDS, type ProfileType } from '../document/profiles';
 import { formatNumber } from '../properties/catalog';
+import { SHAPE_KIND_LABEL } from '../document/labels';
 
-const KIND: Record<Shape['type'], string> = {
-  polygon: 'Polygon',
-  circle: 'Circle',
-  path: 'Outline (lines and arcs)',
-  rectangle: 'Rectangle',
-  'i-beam': 'I section',
-  channel: 'Channel',
-  angle: 'Angle',
-  tee: 'Tee',
-  'rect-tube': 'Rectangular tube',
-  'round-tube': 'Round tube',
-  'bent-plate': 'Bent plate',
-};
 
 const OP_TEXT = { add: 'add', subtract: 'subtract', intersect: 'intersect' } as const;
 
@@ -23,7 +11,7 @@ const n = (v: unknown) => (typeof v === 'number' ? formatNumber(v) : '?');
 const pt = (p: unknown) => (Array.isArray(p) ? `(${n(p[0])}, ${n(p[1])})` : '?');
 
 export function shapeKind(s: Shape): string {
-  return KIND[s.type] ?? String(s.type);
+  return SHAPE_KIND_LABEL[s.type] ?? String(s.type);
 }
 
 export function shapeOperation(s: Shape): string {
