@@ -2,7 +2,7 @@
  * The selected shape's numbers and the actions on the selection. Every edit is checked with the
  * engine's validateShape before it is applied; a refused edit changes nothing.
  */
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import {
   formatIssue,
   OPS,
@@ -10,7 +10,9 @@ import {
   shapeToRegion,
   validateShape,
   type Op,
+  type PathShape,
   type Point,
+  type PolygonShape,
   type ProfileShape,
   type Shape,
 } from '../../src';
@@ -19,16 +21,32 @@ import { evaluateExpression } from '../expr';
 import { commit } from '../store/history';
 import { useEditor, useEditorState } from '../store/hooks';
 import { isProfile, SHAPE_KIND_LABEL, shapeLabel } from '../shapes';
+import {
+  pathDeletePoint,
+  pathMakeArc,
+  pathMakeLine,
+  pathSplitSegment,
+  polygonDeletePoint,
+  polygonInsertAfter,
+  type PointEdit,
+} from '../shapes/edit-points';
 import { NumberField } from './NumberField';
 import { CommandButton } from '../ui/CommandButton';
 
+/**
+ * Apply `make` to the shape with this id as one undoable step, or return why not. `make` gets the
+ * shape's place in the document (`shapes[3]`) for its messages and may refuse with a text.
+ */
 function useApply() {
   const editor = useEditor();
-  return (id: string, make: (s: Shape) => Shape): string | null => {
+  return (id: string, make: (s: Shape, at: string) => Shape | string): string | null => {
     const s = editor.store.getState();
     const idx = s.doc.shapes.findIndex((x) => x.id === id);
     if (idx < 0) return 'The shape no longer exists.';
-    const cand = make(s.doc.shapes[idx]);
+    const cand = make(s.doc.shapes[idx], `shapes[${idx}]`);
+    if (typeof cand === 'string') return cand;
+    // Enter then blur applies the same value twice: an edit that changes nothing records nothing.
+    if (JSON.stringify(cand) === JSON.stringify(s.doc.shapes[idx])) return null;
     const issues = validateShape(cand, `shapes[${idx}]`);
     if (issues.length) return issues.map(formatIssue).join('; ');
     try {
@@ -43,20 +61,69 @@ function useApply() {
 
 const OP_LABEL: Record<Op, string> = { add: 'Add', subtract: 'Subtract', intersect: 'Intersect' };
 
-function PointFields({ label, p, onPoint, field, units }: { label: string; p: Point; onPoint: (p: Point) => string | null; field: string; units: string }) {
+function PointFields({
+  label,
+  p,
+  onPoint,
+  field,
+  units,
+  tools,
+  error,
+}: {
+  label: string;
+  p: Point;
+  onPoint: (p: Point) => string | null;
+  field: string;
+  units: string;
+  /** Small buttons beside the label (insert, delete, line/arc). */
+  tools?: ReactNode;
+  /** A refused point edit on this row. */
+  error?: string | null;
+}) {
   return (
     <div className="point-fields">
-      <span className="point-label">{label}</span>
+      {tools ? (
+        <div className="point-head">
+          <span className="point-label">{label}</span>
+          <span className="point-tools">{tools}</span>
+        </div>
+      ) : (
+        <span className="point-label">{label}</span>
+      )}
       <NumberField label="x" value={p[0]} field={`${field}.x`} suffix={units} onCommit={(v) => onPoint([v, p[1]])} />
       <NumberField label="y" value={p[1]} field={`${field}.y`} suffix={units} onCommit={(v) => onPoint([p[0], v])} />
+      {error && (
+        <span className="field-error" role="alert" data-error-for={field}>
+          {error}
+        </span>
+      )}
     </div>
+  );
+}
+
+function ToolButton({ testid, title, label, onClick }: { testid: string; title: string; label: string; onClick: () => void }) {
+  return (
+    <button type="button" className="btn small point-tool" data-testid={testid} title={title} aria-label={title} onClick={onClick}>
+      {label}
+    </button>
   );
 }
 
 function ShapeFields({ shape }: { shape: Shape }) {
   const apply = useApply();
   const units = useEditorState((s) => s.doc.units);
+  // A refused insert/delete/line-arc edit, shown on the row it came from.
+  const [edited, setEdited] = useState<{ row: string; message: string } | null>(null);
   const set = (f: (s: Shape) => Shape) => apply(shape.id, f);
+  /** One point edit as one undoable step; a refusal is shown on `row` and changes nothing. */
+  const edit = <S extends Shape>(row: string, f: (s: S, at: string) => PointEdit<S>) => {
+    const err = apply(shape.id, (s, at) => {
+      const r = f(s as S, at);
+      return r.ok ? r.shape : r.message;
+    });
+    setEdited(err ? { row, message: err } : null);
+  };
+  const errorOn = (row: string) => (edited?.row === row ? edited.message : null);
   switch (shape.type) {
     case 'circle':
       return (
@@ -76,12 +143,32 @@ function ShapeFields({ shape }: { shape: Shape }) {
               field={`points[${i}]`}
               units={units}
               onPoint={(q) => set((s) => ({ ...s, points: (s as typeof shape).points.map((o, k) => (k === i ? q : o)) }) as Shape)}
+              error={errorOn(`points[${i}]`)}
+              tools={
+                <>
+                  <ToolButton testid={`vertex-insert-${i}`} title="Insert point after" label="+" onClick={() => edit<PolygonShape>(`points[${i}]`, (s, at) => polygonInsertAfter(s, i, at))} />
+                  <ToolButton testid={`vertex-delete-${i}`} title="Delete point" label="×" onClick={() => edit<PolygonShape>(`points[${i}]`, (s, at) => polygonDeletePoint(s, i, at))} />
+                </>
+              }
             />
           ))}
         </div>
       );
     case 'path': {
       const last = shape.segments.length - 1;
+      const segmentTools = (i: number, row: string) => (
+        <>
+          <ToolButton testid={`segment-split-${i}`} title="Insert point in segment" label="+" onClick={() => edit<PathShape>(row, (s, at) => pathSplitSegment(s, i, at))} />
+          {shape.segments[i].via ? (
+            <ToolButton testid={`segment-line-${i}`} title="Make line" label="Line" onClick={() => edit<PathShape>(row, (s, at) => pathMakeLine(s, i, at))} />
+          ) : (
+            <ToolButton testid={`segment-arc-${i}`} title="Make arc" label="Arc" onClick={() => edit<PathShape>(row, (s, at) => pathMakeArc(s, i, at))} />
+          )}
+        </>
+      );
+      const deleteTool = (k: number, row: string) => (
+        <ToolButton testid={`point-delete-${k}`} title="Delete point" label="×" onClick={() => edit<PathShape>(row, (s, at) => pathDeletePoint(s, k, at))} />
+      );
       return (
         <div className="vertex-list">
           <PointFields
@@ -90,6 +177,8 @@ function ShapeFields({ shape }: { shape: Shape }) {
             field="start"
             units={units}
             onPoint={(q) => set((s) => ({ ...s, start: q, segments: (s as typeof shape).segments.map((g, k) => (k === last ? { ...g, to: q } : g)) }) as Shape)}
+            error={errorOn('start')}
+            tools={deleteTool(0, 'start')}
           />
           {shape.segments.map((g, i) => (
             <div key={i} className="segment">
@@ -109,9 +198,28 @@ function ShapeFields({ shape }: { shape: Shape }) {
                   field={`segments[${i}].to`}
                   units={units}
                   onPoint={(q) => set((s) => ({ ...s, segments: (s as typeof shape).segments.map((o, k) => (k === i ? { ...o, to: q } : o)) }) as Shape)}
+                  error={errorOn(`segments[${i}].to`)}
+                  tools={
+                    <>
+                      {segmentTools(i, `segments[${i}].to`)}
+                      {deleteTool(i + 1, `segments[${i}].to`)}
+                    </>
+                  }
                 />
               )}
-              {i === last && <div className="segment-note">{g.via ? `Arc ${i + 1}` : `Line ${i + 1}`} closes back to the start</div>}
+              {i === last && (
+                <>
+                  <div className="segment-note point-head">
+                    <span>{g.via ? `Arc ${i + 1}` : `Line ${i + 1}`} closes back to the start</span>
+                    <span className="point-tools">{segmentTools(i, `segments[${i}]`)}</span>
+                  </div>
+                  {errorOn(`segments[${i}]`) && (
+                    <span className="field-error" role="alert" data-error-for={`segments[${i}]`}>
+                      {errorOn(`segments[${i}]`)}
+                    </span>
+                  )}
+                </>
+              )}
             </div>
           ))}
         </div>
