@@ -236,6 +236,37 @@ export const tests = [
     },
   },
   {
+    name: 'vertical cut line: b, Q and the area to the right, dragged on the canvas',
+    async run(t) {
+      const { page } = await open(t, { seed: rect100x60 });
+      await page.click('[data-command="view.cut"]');
+      await page.waitForSelector('[data-testid="cut-panel"]');
+      await page.click('[data-testid="cut-axis-x"]');
+      await settle(page);
+      const num = async (k) => Number(await page.getAttribute(`[data-cut="${k}"]`, 'data-value'));
+      const at0 = await page.evaluate(() => window.__kern.editor.store.getState().cutAt);
+      close(at0, 50, 'a vertical cut starts through the centroid, x̄ = b/2');
+      close(await num('width'), 60, 'b of a vertical cut is the depth h');
+      close(await num('Q'), (60 * 100 * 100) / 8, 'Qmax = h·b²/8 (Gere & Goodno, §5.8, rectangular beam, turned)');
+      close(await num('area'), 3000, 'half the area');
+      // Drag the line from x = 50 to x = 80 (30 units = 60 px at 2 px per unit).
+      const [sx] = await pagePoint(page, 50, 0);
+      const box = await page.locator('[data-testid="canvas"]').boundingBox();
+      await page.mouse.move(sx, box.y + 200);
+      await page.mouse.down();
+      await page.mouse.move(sx + 60, box.y + 200, { steps: 4 });
+      await page.mouse.up();
+      await settle(page);
+      close(await page.evaluate(() => window.__kern.editor.store.getState().cutAt), 80, 'cut moved to x = 80', 1e-6);
+      // Part right of x = 80: 20 × 60, centroid 40 right of x̄: Q = A′·d (Gere & Goodno, §5.8).
+      close(await num('Q'), 20 * 60 * 40, 'Q = A′ (x̄′ − x̄)');
+      close(await num('area'), 1200, 'A′ = 20 · 60');
+      await page.click('[data-testid="cut-axis-y"]');
+      await settle(page);
+      close(await num('width'), 100, 'back to a horizontal cut through the centroid: b');
+    },
+  },
+  {
     name: 'merge into one outline keeps the properties (arcs preserved)',
     async run(t) {
       const { page } = await open(t, { seed: plateAndHole('subtract') });

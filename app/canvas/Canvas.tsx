@@ -171,14 +171,15 @@ function OverlayLayer() {
   const v = useEditorShallow((s) => ({ scale: s.scale, ox: s.ox, oy: s.oy }));
   const overlays = useEditorState((s) => s.overlays);
   const cutAt = useEditorState((s) => s.cutAt);
+  const cutAxis = useEditorState((s) => s.cutAxis);
   const units = useEditorState((s) => s.doc.units);
   const ev = useResults((r) => r.evaluation);
-  const { width } = useEditorShallow((s) => ({ width: s.width }));
+  const { width, height } = useEditorShallow((s) => ({ width: s.width, height: s.height }));
   const p = ev.props;
   if (!p) return null;
   return (
     <>
-      {overlays.cut && cutAt !== null && <CutNode ev={ev} p={p} at={cutAt} v={v} units={units} width={width} />}
+      {overlays.cut && cutAt !== null && <CutNode ev={ev} p={p} axis={cutAxis} at={cutAt} v={v} units={units} width={width} height={height} />}
       {overlays.fibres && <FibreNode p={p} v={v} units={units} />}
       {overlays.principal && <PrincipalNode p={p} v={v} />}
       {overlays.centroid && <CentroidNode p={p} v={v} />}
@@ -276,13 +277,15 @@ function FibreNode({ p, v, units }: { p: SectionProperties; v: ViewTransform; un
   );
 }
 
-function CutNode({ ev, p, at, v, units, width }: { ev: Evaluation; p: SectionProperties; at: number; v: ViewTransform; units: Units; width: number }) {
+function CutNode(props: { ev: Evaluation; p: SectionProperties; axis: 'x' | 'y'; at: number; v: ViewTransform; units: Units; width: number; height: number }) {
+  const { ev, p, axis, at, v, units, width } = props;
   let cut: ReturnType<typeof cutSection> | null;
   try {
-    cut = cutSection(ev.region, 'y', at, p);
+    cut = cutSection(ev.region, axis, at, p);
   } catch {
     cut = null;
   }
+  if (axis === 'x') return <VerticalCut {...props} cut={cut} />;
   return (
     <Paint
       paint={(ctx) => {
@@ -309,6 +312,38 @@ function CutNode({ ev, p, at, v, units, width }: { ev: Evaluation; p: SectionPro
         if (cut) {
           const t = `cut y = ${formatNumber(at, 5)}   b = ${formatNumber(cut.width, 5)} ${units}   Q = ${formatNumber(cut.Q, 5)} ${units}³   A above = ${formatNumber(cut.area, 5)} ${units}²`;
           label(ctx, t, 24, sy - 7, INK.cut);
+        }
+      }}
+    />
+  );
+}
+
+/** The vertical cut: the part to the right of x = at is shaded; the grip sits at the top. */
+function VerticalCut({ ev, at, v, units, width, height, cut }: { ev: Evaluation; at: number; v: ViewTransform; units: Units; width: number; height: number; cut: ReturnType<typeof cutSection> | null }) {
+  return (
+    <Paint
+      paint={(ctx) => {
+        const sx = v.ox + at * v.scale;
+        ctx.save();
+        ctx.beginPath();
+        ctx.rect(sx, 0, Math.max(0, width - sx), height);
+        ctx.clip();
+        ctx.beginPath();
+        traceRegion(ctx, ev.region, v);
+        ctx.fillStyle = INK.cutFill;
+        ctx.fill('nonzero');
+        ctx.restore();
+        ctx.strokeStyle = INK.cut;
+        ctx.lineWidth = 1.5;
+        ctx.beginPath();
+        ctx.moveTo(sx, 0);
+        ctx.lineTo(sx, height);
+        ctx.stroke();
+        ctx.fillStyle = INK.cut;
+        ctx.fillRect(sx - 5, 6, 10, 10);
+        if (cut) {
+          const t = `cut x = ${formatNumber(at, 5)}   b = ${formatNumber(cut.width, 5)} ${units}   Q = ${formatNumber(cut.Q, 5)} ${units}³   A right = ${formatNumber(cut.area, 5)} ${units}²`;
+          label(ctx, t, sx + 8, 30, INK.cut);
         }
       }}
     />
@@ -530,9 +565,10 @@ export function Canvas() {
     return { sx, sy, raw: toWorld(s, sx, sy), shift: e.shiftKey, mod: e.ctrlKey || e.metaKey };
   };
 
-  const nearCut = (sy: number) => {
+  const nearCut = (sx: number, sy: number) => {
     const s = editor.store.getState();
-    return s.overlays.cut && s.cutAt !== null && Math.abs(s.oy - s.cutAt * s.scale - sy) <= 5;
+    if (!s.overlays.cut || s.cutAt === null) return false;
+    return s.cutAxis === 'x' ? Math.abs(s.ox + s.cutAt * s.scale - sx) <= 5 : Math.abs(s.oy - s.cutAt * s.scale - sy) <= 5;
   };
 
   return (
@@ -553,7 +589,7 @@ export function Canvas() {
           return;
         }
         if (e.button !== 0) return;
-        if (s.tool === 'select' && nearCut(i.sy)) {
+        if (s.tool === 'select' && nearCut(i.sx, i.sy)) {
           cutDrag.current = true;
           return;
         }
@@ -567,12 +603,12 @@ export function Canvas() {
           return;
         }
         if (cutDrag.current) {
-          editor.store.setState({ cutAt: i.raw[1] });
+          editor.store.setState({ cutAt: editor.store.getState().cutAxis === 'x' ? i.raw[0] : i.raw[1] });
           return;
         }
         const s = editor.store.getState();
         editor.transient.setState({ pointer: i.raw, snap: null });
-        if (s.tool === 'select') wrap.current!.style.cursor = nearCut(i.sy) ? 'ns-resize' : '';
+        if (s.tool === 'select') wrap.current!.style.cursor = nearCut(i.sx, i.sy) ? (s.cutAxis === 'x' ? 'ew-resize' : 'ns-resize') : '';
         editor.tool().move(editor.env, i);
       }}
       onPointerUp={(e) => {

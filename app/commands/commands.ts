@@ -29,6 +29,7 @@ import {
 } from '../shapes';
 import { CommandRegistry, type CommandContext } from './registry';
 import { registerExchangeCommands } from '../exchange/commands';
+import { centroidCut } from './cut';
 
 const hasSelection = (ctx: CommandContext) => ctx.store.getState().selected.length > 0;
 
@@ -127,7 +128,7 @@ function toggleOverlay(key: keyof Overlays) {
     const patch: Partial<EditorState> = { overlays };
     if (key === 'cut' && overlays.cut && s.cutAt === null) {
       const ev = ctx.evaluate(s.doc);
-      if (ev.props) patch.cutAt = ev.props.centroid.y;
+      if (ev.props) patch.cutAt = centroidCut(ev.props, s.cutAxis);
     }
     ctx.store.setState(patch);
   };

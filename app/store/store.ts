@@ -68,7 +68,9 @@ export interface ViewSlice {
   width: number;
   height: number;
   overlays: Overlays;
-  /** World y of the horizontal cut line. */
+  /** The cut line: horizontal (at world y, part above) or vertical (at world x, part to the right). */
+  cutAxis: 'x' | 'y';
+  /** World coordinate of the cut line along its axis. */
   cutAt: number | null;
   notice: Notice | null;
   reportOpen: boolean;
@@ -101,6 +103,7 @@ export function createEditorStore(doc: SectionDocument): EditorStore {
     width: 800,
     height: 600,
     overlays: { centroid: true, principal: false, fibres: false, cut: false },
+    cutAxis: 'y',
     cutAt: null,
     notice: null,
     reportOpen: false,

@@ -26,7 +26,7 @@ export function ReportOverlay() {
           return;
         }
         const s = editor.store.getState();
-        const cut = s.overlays.cut && s.cutAt !== null ? { axis: 'y' as const, at: s.cutAt } : null;
+        const cut = s.overlays.cut && s.cutAt !== null ? { axis: s.cutAxis, at: s.cutAt } : null;
         setHtml(render({ doc: s.doc, evaluation: editor.results.evaluate(s.doc), cut, generated: new Date().toISOString().slice(0, 16).replace('T', ' ') }));
       })
       .catch((e) => live && setProblem(`The report could not be made: ${(e as Error).message}`));
