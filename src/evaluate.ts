@@ -58,7 +58,7 @@ function buildShape(shape: Shape): CachedShape {
     const { region, selfIntersecting } = resolveOutline(raw);
     return {
       region,
-      warning: selfIntersecting ? 'the outline crosses itself; it was resolved by the even-odd rule (overlaps alternate between filled and empty)' : null,
+      warning: selfIntersecting ? 'the outline crosses or touches itself; it was resolved by the even-odd rule (overlaps alternate between filled and empty)' : null,
       error: null,
     };
   } catch (e) {

@@ -109,7 +109,7 @@ describe('self-intersecting outlines', () => {
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     const ev = evaluateDocument(r.doc);
-    expect(ev.warnings.map(formatIssue).join('\n')).toMatch(/shapes\[0\]: the outline crosses itself; it was resolved by the even-odd rule/);
+    expect(ev.warnings.map(formatIssue).join('\n')).toMatch(/shapes\[0\]: the outline crosses or touches itself; it was resolved by the even-odd rule/);
     // Two triangles of base 2 and height 1 (Gere & Goodno, plane areas: A = bh/2 each).
     close(ev.props!.area, 2, 1e-12);
   });
