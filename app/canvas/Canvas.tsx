@@ -277,23 +277,26 @@ function FibreNode({ p, v, units }: { p: SectionProperties; v: ViewTransform; un
   );
 }
 
-function CutNode(props: { ev: Evaluation; p: SectionProperties; axis: 'x' | 'y'; at: number; v: ViewTransform; units: Units; width: number; height: number }) {
-  const { ev, p, axis, at, v, units, width } = props;
+/**
+ * The cut line: the part beyond it (above a horizontal cut, right of a vertical one) is shaded,
+ * with a grip at the line's start and the readout beside it.
+ */
+function CutNode({ ev, p, axis, at, v, units, width, height }: { ev: Evaluation; p: SectionProperties; axis: 'x' | 'y'; at: number; v: ViewTransform; units: Units; width: number; height: number }) {
   let cut: ReturnType<typeof cutSection> | null;
   try {
     cut = cutSection(ev.region, axis, at, p);
   } catch {
     cut = null;
   }
-  if (axis === 'x') return <VerticalCut {...props} cut={cut} />;
+  const vertical = axis === 'x';
   return (
     <Paint
       paint={(ctx) => {
-        const sy = v.oy - at * v.scale;
-        // Shade the part beyond (above) the cut.
+        const s = vertical ? v.ox + at * v.scale : v.oy - at * v.scale;
         ctx.save();
         ctx.beginPath();
-        ctx.rect(0, 0, width, sy);
+        if (vertical) ctx.rect(s, 0, Math.max(0, width - s), height);
+        else ctx.rect(0, 0, width, s);
         ctx.clip();
         ctx.beginPath();
         traceRegion(ctx, ev.region, v);
@@ -303,47 +306,21 @@ function CutNode(props: { ev: Evaluation; p: SectionProperties; axis: 'x' | 'y';
         ctx.strokeStyle = INK.cut;
         ctx.lineWidth = 1.5;
         ctx.beginPath();
-        ctx.moveTo(0, sy);
-        ctx.lineTo(width, sy);
-        ctx.stroke();
-        // Grip at the left end.
-        ctx.fillStyle = INK.cut;
-        ctx.fillRect(6, sy - 5, 10, 10);
-        if (cut) {
-          const t = `cut y = ${formatNumber(at, 5)}   b = ${formatNumber(cut.width, 5)} ${units}   Q = ${formatNumber(cut.Q, 5)} ${units}³   A above = ${formatNumber(cut.area, 5)} ${units}²`;
-          label(ctx, t, 24, sy - 7, INK.cut);
+        if (vertical) {
+          ctx.moveTo(s, 0);
+          ctx.lineTo(s, height);
+        } else {
+          ctx.moveTo(0, s);
+          ctx.lineTo(width, s);
         }
-      }}
-    />
-  );
-}
-
-/** The vertical cut: the part to the right of x = at is shaded; the grip sits at the top. */
-function VerticalCut({ ev, at, v, units, width, height, cut }: { ev: Evaluation; at: number; v: ViewTransform; units: Units; width: number; height: number; cut: ReturnType<typeof cutSection> | null }) {
-  return (
-    <Paint
-      paint={(ctx) => {
-        const sx = v.ox + at * v.scale;
-        ctx.save();
-        ctx.beginPath();
-        ctx.rect(sx, 0, Math.max(0, width - sx), height);
-        ctx.clip();
-        ctx.beginPath();
-        traceRegion(ctx, ev.region, v);
-        ctx.fillStyle = INK.cutFill;
-        ctx.fill('nonzero');
-        ctx.restore();
-        ctx.strokeStyle = INK.cut;
-        ctx.lineWidth = 1.5;
-        ctx.beginPath();
-        ctx.moveTo(sx, 0);
-        ctx.lineTo(sx, height);
         ctx.stroke();
         ctx.fillStyle = INK.cut;
-        ctx.fillRect(sx - 5, 6, 10, 10);
+        if (vertical) ctx.fillRect(s - 5, 6, 10, 10);
+        else ctx.fillRect(6, s - 5, 10, 10);
         if (cut) {
-          const t = `cut x = ${formatNumber(at, 5)}   b = ${formatNumber(cut.width, 5)} ${units}   Q = ${formatNumber(cut.Q, 5)} ${units}³   A right = ${formatNumber(cut.area, 5)} ${units}²`;
-          label(ctx, t, sx + 8, 30, INK.cut);
+          const t = `cut ${axis} = ${formatNumber(at, 5)}   b = ${formatNumber(cut.width, 5)} ${units}   Q = ${formatNumber(cut.Q, 5)} ${units}³   A ${vertical ? 'right' : 'above'} = ${formatNumber(cut.area, 5)} ${units}²`;
+          if (vertical) label(ctx, t, s + 8, 30, INK.cut);
+          else label(ctx, t, 24, s - 7, INK.cut);
         }
       }}
     />
