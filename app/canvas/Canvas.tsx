@@ -4,8 +4,7 @@
  * the middle button or Space+drag pans, the wheel zooms about the pointer.
  */
 import { memo, useEffect, useRef } from 'react';
-import { Layer, Shape as KShape, Stage } from 'react-konva';
-import type Konva from 'konva';
+import { Layer, Stage } from 'react-konva';
 import { shapeToRegion, formatNumber, formatProperty, PROPERTY_CATALOG, type Evaluation, type Op, type Region, type SectionProperties, type Units } from '../../src';
 import { useEditor, useEditorShallow, useEditorState, useResults, useTransient } from '../store/hooks';
 import { shapeHandles } from '../shapes';
@@ -15,8 +14,8 @@ import type { SnapResult } from './snap';
 import { ProblemLayer } from './ProblemLayer';
 import { INK, hatch, opStyle, traceRegion } from './paint';
 import { cutSection } from '../../src';
+import { Paint } from './PaintNode';
 
-type SceneFn = (ctx: CanvasRenderingContext2D) => void;
 
 const THETA = PROPERTY_CATALOG.find((i) => i.key === 'theta')!;
 
@@ -28,22 +27,6 @@ function label(ctx: CanvasRenderingContext2D, text: string, x: number, y: number
   ctx.fillRect(x - 3, y - 11, w + 6, 15);
   ctx.fillStyle = color;
   ctx.fillText(text, x, y);
-}
-
-/** A Konva shape that paints with a plain 2D context. */
-function Paint({ paint }: { paint: SceneFn }) {
-  return (
-    <KShape
-      listening={false}
-      perfectDrawEnabled={false}
-      sceneFunc={(k: Konva.Context) => {
-        const ctx = k._context;
-        ctx.save();
-        paint(ctx);
-        ctx.restore();
-      }}
-    />
-  );
 }
 
 const GridNode = memo(function GridNode({ v, width, height, units }: { v: ViewTransform; width: number; height: number; units: Units }) {

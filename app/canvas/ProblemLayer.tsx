@@ -2,14 +2,13 @@
  * DXF import marks on the canvas: the outlines waiting to be added (dashed), and the entities the
  * importer left out (red, with their layer and handle), until the user clears them.
  */
-import { Shape as KShape } from 'react-konva';
-import type Konva from 'konva';
 import type { Region } from '../../src';
 import type { DxfProblem } from '../../src/exchange';
 import { useExchange } from '../exchange/hooks';
 import { useEditorShallow } from '../store/hooks';
 import type { ViewTransform } from '../view';
 import { INK, traceRegion } from './paint';
+import { Paint } from './PaintNode';
 
 function paintProblems(ctx: CanvasRenderingContext2D, problems: DxfProblem[], v: ViewTransform) {
   const X = (x: number) => v.ox + x * v.scale, Y = (y: number) => v.oy - y * v.scale;
@@ -68,15 +67,10 @@ export function ProblemLayer() {
   const preview = pending?.stage === 'review' ? pending.region : null;
   if (problems.length === 0 && !preview) return null;
   return (
-    <KShape
-      listening={false}
-      perfectDrawEnabled={false}
-      sceneFunc={(k: Konva.Context) => {
-        const ctx = k._context;
-        ctx.save();
+    <Paint
+      paint={(ctx) => {
         if (preview) paintPreview(ctx, preview, v);
         paintProblems(ctx, problems, v);
-        ctx.restore();
       }}
     />
   );
