@@ -2,46 +2,28 @@
  * One editor instance: the store, the live results, the transient pointer state, the tools and
  * the command context. Nothing here depends on React, so the tests build the same editor.
  */
-import { createStore, type StoreApi } from 'zustand/vanilla';
-import { formatIssue, unitFactor, validateShape, type Point, type SectionDocument, type Shape } from '../src';
+import { formatIssue, newShapeId, unitFactor, validateShape, type Point, type SectionDocument, type Shape } from '../src';
 import { registry } from './commands/commands';
 import type { CommandContext, FileIO } from './commands/registry';
+import type { EditorHandle } from './context';
 import { parsePointInput } from './expr';
-import { snapPointer } from './canvas/snap';
+import { snapPointer } from './geometry/snap';
+import { SelectTool } from './select';
+import { TOOL_SPECS } from './shapes';
 import { commit } from './store/history';
-import { createLiveResults, type ResultsHandle } from './store/evaluation';
-import { createEditorStore, type EditorStore, type ToolId } from './store/store';
-import { newShapeId } from './shapes';
-import { CircleTool, PathTool, PolygonTool, ProfileTool, RectangleTool } from './tools/draw';
-import { SelectTool } from './tools/select/index';
-import type { Tool, ToolEnv, Transient } from './tools/types';
+import { createLiveResults } from './store/evaluation';
+import { createEditorStore } from './store/store';
+import { createTransientStore } from './store/transient';
+import type { Tool, ToolEnv } from './tools/types';
 
-export interface Editor {
-  store: EditorStore;
-  results: ResultsHandle;
-  transient: StoreApi<Transient>;
-  env: ToolEnv;
-  ctx: CommandContext;
-  tool(): Tool;
-  /** Run a command by name (the single entry point for toolbar, keyboard and tests). */
-  run(name: string, arg?: unknown): boolean;
-  /** Submit typed drawing input; returns an error message or null. */
-  type(text: string): string | null;
-  dispose(): void;
-}
+export type Editor = EditorHandle;
 
 export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule?: (cb: () => void) => void; worker?: boolean } = {}): Editor {
   const store = createEditorStore(doc);
   const results = createLiveResults(store, { schedule: opts.schedule, worker: opts.worker });
-  const transient = createStore<Transient>()(() => ({ pointer: null, snap: null, draft: null, prompt: '', inputError: null, hoverHandle: null }));
-  const tools: Record<ToolId, Tool> = {
-    select: new SelectTool(),
-    rectangle: new RectangleTool(),
-    circle: new CircleTool(),
-    polygon: new PolygonTool(),
-    path: new PathTool(),
-    profile: new ProfileTool(),
-  };
+  const transient = createTransientStore();
+  const tools: Record<string, Tool> = { select: new SelectTool() };
+  for (const t of TOOL_SPECS) tools[t.id] = t.create();
   const env: ToolEnv = {
     store,
     results,
@@ -77,13 +59,13 @@ export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule
     },
   };
   const ctx: CommandContext = { store, evaluate: results.evaluate, shapesOf: results.shapesOf, io: opts.io };
-  const tool = () => tools[store.getState().tool];
+  const tool = () => tools[store.getState().tool] ?? tools.select;
   const updatePrompt = () => transient.setState({ prompt: tool().prompt(env) });
   updatePrompt();
   // Switching tools abandons the half-finished shape of the previous one.
   const unsub = store.subscribe((s, prev) => {
     if (s.tool !== prev.tool) {
-      tools[prev.tool].reset(env);
+      tools[prev.tool]?.reset(env);
       transient.setState({ inputError: null });
     }
     if (s.doc.units !== prev.doc.units) {
@@ -107,6 +89,7 @@ export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule
     transient,
     env,
     ctx,
+    commands: registry,
     tool,
     run: (name, arg) => registry.dispatch(ctx, name, arg),
     type(text: string) {

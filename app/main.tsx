@@ -1,7 +1,8 @@
 /** Start-up: restore the autosaved section (or the demo), install autosave, mount the editor. */
 import { createRoot } from 'react-dom/client';
 import { App } from './App';
-import { fitView, registry } from './commands/commands';
+import { registry } from './commands/commands';
+import { fitView } from './ops/view';
 import { createEditor } from './editor';
 import { installAutosave, restoreDocument } from './persist';
 import './styles.css';

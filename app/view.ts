@@ -2,8 +2,7 @@
  * The view transform: world (document units, y up) to screen pixels (y down).
  * sx = ox + x·scale, sy = oy − y·scale.
  */
-import type { Bounds, Region, ShapeResult } from '../src';
-import { regionBounds } from '../src';
+import { regionsBounds, type Bounds, type ShapeResult } from '../src';
 
 export interface ViewTransform {
   scale: number;
@@ -13,6 +12,14 @@ export interface ViewTransform {
 
 export function toScreen(v: ViewTransform, x: number, y: number): [number, number] {
   return [v.ox + x * v.scale, v.oy - y * v.scale];
+}
+
+/** Screen x of world x, and screen y of world y (for painters that map many points). */
+export function screenX(v: ViewTransform, x: number): number {
+  return v.ox + x * v.scale;
+}
+export function screenY(v: ViewTransform, y: number): number {
+  return v.oy - y * v.scale;
 }
 
 export function toWorld(v: ViewTransform, sx: number, sy: number): [number, number] {
@@ -41,16 +48,7 @@ export function fitBounds(b: Bounds, width: number, height: number, margin = 48)
 
 /** Bounds of every shape's own outline (so subtracted or empty results still fit). */
 export function evaluationBounds(ev: { shapes: readonly ShapeResult[] }): Bounds | null {
-  let out: Bounds | null = null;
-  const add = (r: Region) => {
-    const b = regionBounds(r);
-    if (!b) return;
-    out = out
-      ? { xmin: Math.min(out.xmin, b.xmin), xmax: Math.max(out.xmax, b.xmax), ymin: Math.min(out.ymin, b.ymin), ymax: Math.max(out.ymax, b.ymax) }
-      : b;
-  };
-  for (const s of ev.shapes) add(s.region);
-  return out;
+  return regionsBounds(ev.shapes.map((s) => s.region));
 }
 
 /** Grid spacing in world units: 1, 2 or 5 × 10^k, at least `minPx` pixels apart. */

@@ -12,7 +12,7 @@
  */
 import { booleanRegions, resolveOutline } from './boolean';
 import type { Region } from './geometry/contour';
-import { mayCrossItself, shapeContours } from './document/shapes';
+import { mayCrossItself, shapeContours } from './shapes/ops';
 import type { Issue } from './document/validate';
 import type { Op, SectionDocument, Shape } from './document/types';
 import { SectionError, sectionProperties, type SectionProperties } from './properties/section';
@@ -35,6 +35,8 @@ interface CachedShape {
   region: Region;
   warning: string | null;
   error: string | null;
+  /** The shape's entry in `Evaluation.shapes` (one object per record, so lists share it). */
+  result: ShapeResult;
 }
 
 interface Run {
@@ -54,15 +56,17 @@ interface CachedRun {
 function buildShape(shape: Shape): CachedShape {
   try {
     const raw = shapeContours(shape);
-    if (!mayCrossItself(shape)) return { region: raw, warning: null, error: null };
+    if (!mayCrossItself(shape)) return { region: raw, warning: null, error: null, result: { id: shape.id, region: raw } };
     const { region, selfIntersecting } = resolveOutline(raw);
     return {
       region,
       warning: selfIntersecting ? 'the outline crosses or touches itself; it was resolved by the even-odd rule (overlaps alternate between filled and empty)' : null,
       error: null,
+      result: { id: shape.id, region },
     };
   } catch (e) {
-    return { region: [], warning: null, error: e instanceof Error ? e.message : String(e) };
+    const error = e instanceof Error ? e.message : String(e);
+    return { region: [], warning: null, error, result: { id: shape.id, region: [], error } };
   }
 }
 
@@ -87,11 +91,19 @@ function sameList(a: readonly Region[], b: readonly Region[]): boolean {
 
 export interface Evaluator {
   evaluate(doc: SectionDocument): Evaluation;
+  /**
+   * Each shape's own outline (no booleans), from the same per-shape cache `evaluate` uses: the
+   * editor draws, picks and snaps with these while the section is combined elsewhere. The same
+   * array comes back for the same document.
+   */
+  shapes(doc: SectionDocument): ShapeResult[];
 }
 
 export function createEvaluator(): Evaluator {
   const shapeCache = new WeakMap<Shape, CachedShape>();
   const runCache: CachedRun[] = [];
+  let shapesDoc: SectionDocument | null = null;
+  let shapesList: ShapeResult[] = [];
   let lastRegion: Region | null = null;
   let lastProps: { region: Region; props: SectionProperties | null; message: string | null } | null = null;
 
@@ -122,18 +134,29 @@ export function createEvaluator(): Evaluator {
     return result;
   }
 
+  function cached(s: Shape): CachedShape {
+    let c = shapeCache.get(s);
+    if (!c) {
+      c = buildShape(s);
+      shapeCache.set(s, c);
+    }
+    return c;
+  }
+
+  function shapes(doc: SectionDocument): ShapeResult[] {
+    if (doc === shapesDoc) return shapesList;
+    shapesList = doc.shapes.map((s) => cached(s).result);
+    shapesDoc = doc;
+    return shapesList;
+  }
+
   return {
+    shapes,
     evaluate(doc: SectionDocument): Evaluation {
-      const shapes: ShapeResult[] = [];
       const warnings: Issue[] = [];
       const runs: Run[] = [];
       doc.shapes.forEach((s, idx) => {
-        let c = shapeCache.get(s);
-        if (!c) {
-          c = buildShape(s);
-          shapeCache.set(s, c);
-        }
-        shapes.push(c.error ? { id: s.id, region: c.region, error: c.error } : { id: s.id, region: c.region });
+        const c = cached(s);
         if (c.error) warnings.push({ path: `shapes[${idx}]`, message: `left out of the section: ${c.error}` });
         if (c.warning) warnings.push({ path: `shapes[${idx}]`, message: c.warning });
         if (c.error || c.region.length === 0) return;
@@ -162,7 +185,7 @@ export function createEvaluator(): Evaluator {
         }
         lastProps = { region, props, message };
       }
-      return { region, shapes, props: lastProps.props, message: lastProps.message, warnings };
+      return { region, shapes: shapes(doc), props: lastProps.props, message: lastProps.message, warnings };
     },
   };
 }

@@ -1,12 +1,18 @@
 /** Kern's engine: the one entry point the app, the CLI and the tests import. */
 export * from './document/types';
 export { parseDocument, validateDocument, validateShape, formatIssue, type Issue, type DocResult } from './document/validate';
-export { shapeContours, pathContour } from './document/shapes';
 export { convertDocumentUnits, unitFactor } from './document/units';
 export { DEMO_DOCUMENT } from './document/demo';
 export { SHAPE_KIND_LABEL } from './document/labels';
-export { profileToPaths, validateProfile, ProfileError, PROFILE_DEFAULTS, PROFILE_FIELDS } from './document/profiles';
-export type { ProfileType, ProfileField, ProfileIssue, ProfilePaths } from './document/profiles';
+export { SHAPE_KINDS, SHAPE_TYPES, kindOf, isShapeType } from './shapes/registry';
+export type { ShapeKind } from './shapes/kind';
+export type { PointMap } from './shapes/base';
+export { shapeToRegion, shapeContours, mayCrossItself, translateShape, rotateShape, mirrorShape, scaleShape, shapeKindLabel, shapeDisplayName } from './shapes/ops';
+export { pathContour } from './shapes/path';
+export { PROFILE_TYPES, isProfile, isProfileType } from './shapes/profile';
+export { profileToPaths, ProfileError, type ProfilePaths } from './shapes/profile/outline';
+export { validateProfile, PROFILE_DEFAULTS, PROFILE_FIELDS, type ProfileField, type ProfileIssue } from './shapes/profile/fields';
+export type { ProfileType, ProfileDimensions } from './shapes/profile/types';
 export { createEvaluator, evaluateDocument, type Evaluation, type Evaluator, type ShapeResult } from './evaluate';
 export {
   sectionProperties,
@@ -22,14 +28,8 @@ export { PROPERTY_CATALOG, formatNumber, formatProperty, unitText, propertyByKey
 export { regionMoments, polygonMoments, type RawMoments } from './moments/kernel';
 export { momentsAbove } from './moments/cut';
 export * from './geometry/contour';
-
-import { resolveOutline } from './boolean';
-import { shapeContours } from './document/shapes';
-import type { Shape } from './document/types';
-import type { Region } from './geometry/contour';
-
-/** The exact outline of one shape on its own (self-crossings resolved); throws on invalid input. */
-export function shapeToRegion(shape: Shape): Region {
-  const raw = shapeContours(shape);
-  return shape.type === 'polygon' || shape.type === 'path' ? resolveOutline(raw).region : raw;
-}
+export { polygonInsertAfter, polygonDeletePoint, pathSplitSegment, pathDeletePoint, pathMakeArc, pathMakeLine, type PointEdit } from './shapes/edit-points';
+export { contourToPath, regionToPaths, profileToOutline } from './shapes/from-region';
+export { newShapeId } from './document/ids';
+export { regionSegments, segmentIntersections, segmentMidpoint, segmentBox, type Segment } from './geometry/segments';
+export { unionBounds, regionsBounds } from './geometry/bounds';

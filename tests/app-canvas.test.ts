@@ -4,9 +4,9 @@
  * (3-4-5 right triangles, Pythagoras); view checks are invariants of the transform itself.
  */
 import { describe, expect, it } from 'vitest';
-import { circleContour, polygonContour, shapeToRegion, type Shape } from '../src';
-import { pickShape, regionSegments, segmentIntersections, snapPoints } from '../app/canvas/geometry';
-import { snapPointer } from '../app/canvas/snap';
+import { circleContour, polygonContour, regionSegments, segmentIntersections, shapeToRegion, type Shape } from '../src';
+import { pickShape } from '../app/geometry/pick';
+import { snapPointer, snapPoints } from '../app/geometry/snap';
 import { fitBounds, gridStep, toScreen, toWorld, zoomAt } from '../app/view';
 
 const settings = { grid: true, vertex: true, midpoint: true, centre: true, intersection: true, ortho: false };

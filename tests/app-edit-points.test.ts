@@ -1,12 +1,12 @@
 /**
- * Vertex and segment editing of polygons and paths (app/shapes/edit-points.ts), without a
+ * Vertex and segment editing of polygons and paths (src/shapes/edit-points.ts), without a
  * browser. Areas of the edited shapes come from the engine's exact moments and are checked
  * against closed forms named beside each check; refusals must leave the input untouched.
  */
 import { describe, expect, it } from 'vitest';
 import { regionMoments, shapeToRegion, type PathShape, type Point, type PolygonShape, type Shape } from '../src';
+import { arcMidpointAwayFrom } from '../src/shapes/edit-points';
 import {
-  arcMidpointAwayFrom,
   pathDeletePoint,
   pathMakeArc,
   pathMakeLine,
@@ -14,7 +14,7 @@ import {
   polygonDeletePoint,
   polygonInsertAfter,
   type PointEdit,
-} from '../app/shapes/edit-points';
+} from '../src';
 import { close } from './helpers';
 
 const PI = Math.PI;

@@ -5,7 +5,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { createEditor } from '../app/editor';
-import { buildRegistry, loadDocumentText, registry } from '../app/commands/commands';
+import { buildRegistry, registry } from '../app/commands/commands';
+import { loadDocumentText } from '../app/ops/document';
 import { CommandRegistry } from '../app/commands/registry';
 import { beginGesture, commit, endGesture, previewGesture, cancelGesture, undo, redo } from '../app/store/history';
 import { AUTOSAVE_KEY, REJECTED_KEY, installAutosave, restoreDocument } from '../app/persist';

@@ -23,10 +23,10 @@ import {
   profileToPaths,
   validateProfile,
   type ProfileType,
-} from '../src/document/profiles';
-import type { IShape, PathShape, ProfileShape } from '../src/document/types';
+} from '../src';
+import type { IShape, PathShape, ProfileShape } from '../src';
 import { type Contour } from '../src/geometry/contour';
-import { pathContour } from '../src/document/shapes';
+import { pathContour } from '../src';
 import { regionMoments, type RawMoments } from '../src/moments/kernel';
 
 // ---------------------------------------------------------------------------------------------

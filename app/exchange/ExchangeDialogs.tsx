@@ -6,7 +6,7 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { UNITS, type Units } from '../../src';
 import type { DxfProblem } from '../../src/exchange';
-import { useEditor, useEditorState } from '../store/hooks';
+import { useEditor, useEditorState } from '../context';
 import { applyImport, cancelImport, clearProblems, readDxf } from './dxf';
 import { defaultPxPerUnit, pngProblem, pngSize } from './exports';
 import { useExchange } from './hooks';

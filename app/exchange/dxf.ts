@@ -4,11 +4,10 @@
  * outlines to the document as ONE undoable step, either added to the section or cut out of it.
  * A file that cannot be read changes nothing.
  */
-import { regionBounds, UNITS, type Bounds, type Region, type SectionDocument, type Shape, type Units } from '../../src';
+import { regionBounds, regionToPaths, unionBounds, UNITS, type Bounds, type Region, type SectionDocument, type Shape, type Units } from '../../src';
 import { importDxf } from '../../src/exchange';
 import type { CommandContext } from '../commands/registry';
-import { fitView } from '../commands/commands';
-import { regionToPaths } from '../shapes';
+import { fitView } from '../ops/view';
 import { commit } from '../store/history';
 import { evaluationBounds, fitBounds } from '../view';
 import { exchangeStore, type PendingImport } from './state';
@@ -66,13 +65,8 @@ export function readDxf(ctx: CommandContext, fileName: string, text: string, uni
 /** Fit the view to the current section, the imported outlines and the problem geometry together. */
 function showAll(ctx: CommandContext, region: Region, points: [number, number][], coveredRight = 0): void {
   const s = ctx.store.getState();
-  let b: Bounds | null = evaluationBounds({ shapes: ctx.shapesOf(s.doc) });
-  const grow = (o: Bounds | null) => {
-    if (!o) return;
-    b = b ? { xmin: Math.min(b.xmin, o.xmin), xmax: Math.max(b.xmax, o.xmax), ymin: Math.min(b.ymin, o.ymin), ymax: Math.max(b.ymax, o.ymax) } : o;
-  };
-  grow(regionBounds(region));
-  for (const [x, y] of points) if (Number.isFinite(x) && Number.isFinite(y)) grow({ xmin: x, xmax: x, ymin: y, ymax: y });
+  let b: Bounds | null = unionBounds(evaluationBounds({ shapes: ctx.shapesOf(s.doc) }), regionBounds(region));
+  for (const [x, y] of points) if (Number.isFinite(x) && Number.isFinite(y)) b = unionBounds(b, { xmin: x, xmax: x, ymin: y, ymax: y });
   if (b) ctx.store.setState(fitBounds(b, Math.max(s.width - coveredRight, s.width / 2), s.height));
 }
 

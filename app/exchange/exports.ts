@@ -6,8 +6,8 @@
 import { regionBounds, type Region, type SectionDocument, type Units } from '../../src';
 import { exportDxf, exportSvg } from '../../src/exchange';
 import type { CommandContext } from '../commands/registry';
-import { documentFileName, serialiseDocument } from '../commands/commands';
-import { traceRegion } from '../canvas/paint';
+import { documentFileName, serialiseDocument } from '../ops/document';
+import { traceRegion } from '../paint/trace';
 
 /** Largest PNG side and pixel count we offer (common practice, no source: browsers refuse far larger canvases). */
 export const PNG_MAX_SIDE = 8192;

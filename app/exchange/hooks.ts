@@ -1,6 +1,6 @@
 /** React adapter for the exchange UI state. */
 import { useStore } from 'zustand';
-import { useEditor } from '../store/hooks';
+import { useEditor } from '../context';
 import { exchangeStore, type ExchangeState } from './state';
 
 export function useExchange<T>(selector: (s: ExchangeState) => T): T {

@@ -5,9 +5,9 @@
  */
 import { useMemo } from 'react';
 import { cutDiagram, cutSection, formatNumber, type Evaluation } from '../../src';
-import { useEditor, useEditorState, useResults } from '../store/hooks';
-import { NumberField } from './NumberField';
-import { centroidCut } from '../commands/cut';
+import { useEditor, useEditorState, useResults } from '../context';
+import { NumberField } from '../fields/NumberField';
+import { centroidCut } from '../ops/view';
 
 type Axis = 'x' | 'y';
 const diagramCache = { x: new WeakMap<Evaluation, ReturnType<typeof cutDiagram>>(), y: new WeakMap<Evaluation, ReturnType<typeof cutDiagram>>() };

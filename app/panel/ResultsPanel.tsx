@@ -4,7 +4,7 @@
  */
 import { formatIssue, formatProperty, PROPERTY_CATALOG, UNITS, type PropertyInfo, type Units } from '../../src';
 import { CAUTION_TEXT } from '../../src/report/caution';
-import { useEditor, useEditorState, useResults } from '../store/hooks';
+import { useEditor, useEditorState, useResults } from '../context';
 
 const GROUPS = [...new Set(PROPERTY_CATALOG.map((p) => p.group))];
 

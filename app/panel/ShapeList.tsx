@@ -1,8 +1,7 @@
 /** The shapes in the order they combine: click selects (Shift adds), the mark shows the operation. */
 import { memo } from 'react';
-import type { Shape } from '../../src';
-import { useEditor, useEditorState, useResults } from '../store/hooks';
-import { shapeLabel } from '../shapes';
+import { shapeDisplayName, type Shape } from '../../src';
+import { useEditor, useEditorState, useResults } from '../context';
 
 const MARK = { add: '+', subtract: '−', intersect: '∩' } as const;
 
@@ -14,7 +13,7 @@ const ShapeRow = memo(function ShapeRow({ s, i, on, error }: { s: Shape; i: numb
       <button
         className={`shape-item${on ? ' on' : ''}`}
         data-shape={s.id}
-        title={error ?? `${op}: ${shapeLabel(s, i)}`}
+        title={error ?? `${op}: ${shapeDisplayName(s, i)}`}
         onClick={(e) => {
           const sel = editor.store.getState().selected;
           editor.store.setState({
@@ -23,7 +22,7 @@ const ShapeRow = memo(function ShapeRow({ s, i, on, error }: { s: Shape; i: numb
         }}
       >
         <span className={`op-mark op-${op}`}>{MARK[op]}</span>
-        <span className="shape-name">{shapeLabel(s, i)}</span>
+        <span className="shape-name">{shapeDisplayName(s, i)}</span>
         {error && <span className="shape-error">!</span>}
       </button>
     </li>

@@ -1,9 +1,13 @@
 /**
- * One interface per shape kind for the editor: how its points move (translate, rotate, mirror),
- * which handles it offers and what a handle does. Exact outlines come from the engine
- * (shapeToRegion); nothing here samples geometry.
+ * The one interface every shape kind implements on the editing side: the drawing tools it offers,
+ * the handles it shows when selected and what each handle does, and its fields in the side panel.
+ * Geometry, validation and transforms come from the engine's kind module (`src/shapes/`);
+ * nothing here computes an outline. The list of kinds is `index.ts`.
  */
+import type { ComponentType } from 'react';
 import type { Point, Shape } from '../../src';
+import type { Command, CommandContext } from '../commands/registry';
+import type { Tool } from '../tools/types';
 
 export type HandleRef =
   | { kind: 'vertex'; index: number }
@@ -19,24 +23,30 @@ export interface Handle {
   p: Point;
 }
 
-export type PointMap = (p: Point) => Point;
-
-export interface ShapeKind<S extends Shape> {
+/** A drawing tool a kind offers: its command `tool.<id>` is registered from this. */
+export interface ToolSpec {
+  id: string;
   label: string;
-  /** The record with every stored point mapped (an isometry keeps lengths). */
-  mapPoints(s: S, f: PointMap): S;
-  /** Extra changes after a rotation by `deg` (profiles keep their angle). */
-  rotated?(s: S, deg: number): S;
-  /** Extra changes after a reflection (profiles flip `mirror`; polygons reverse their order). */
-  mirrored?(s: S, axis: 'vertical' | 'horizontal'): S;
-  handles(s: S): Handle[];
-  moveHandle(s: S, ref: HandleRef, p: Point): S;
+  key?: string;
+  hint?: string;
+  /** Whether the tool rail's Draw group shows a button (the profile tool has its own control). */
+  inDrawGroup: boolean;
+  create(): Tool;
+  /** Takes the command's argument before the tool is chosen (the profile type). */
+  configure?(c: CommandContext, arg: unknown): void;
 }
 
-/** Normalise degrees to (−180, 180], with tiny round-off shown as 0. */
-export function normaliseDeg(d: number): number {
-  let r = d % 360;
-  if (r > 180) r -= 360;
-  if (r <= -180) r += 360;
-  return Math.abs(r) < 1e-12 ? 0 : r;
+export interface ShapeEditor<S extends Shape = Shape> {
+  /** The engine kinds this module edits (one for most; the eight profiles share one). */
+  readonly types: readonly S['type'][];
+  handles(s: S): Handle[];
+  /** The shape with one handle moved to p. */
+  moveHandle(s: S, ref: HandleRef, p: Point): S;
+  /** The kind's own fields in the side panel, for one selected shape. */
+  Fields: ComponentType<{ shape: S }>;
+  tools: readonly ToolSpec[];
+  /** Commands only this kind needs (the path tool's arc mode). */
+  commands?: readonly Command[];
+  /** A control of its own in the tool rail (the profile chooser). */
+  RailControl?: ComponentType;
 }

@@ -1,15 +1,16 @@
 /**
  * Live results: the evaluation is derived from the document, never stored in the editor state.
  *
- * - Each shape's own outline (for drawing, picking and snapping) is computed on the main thread,
- *   cached by shape identity, so a dragged shape follows the pointer at once.
+ * - Each shape's own outline (for drawing, picking and snapping) comes from the engine
+ *   evaluator's per-shape cache on the main thread (keyed by record identity), so a dragged
+ *   shape follows the pointer at once and nothing is cached twice.
  * - The combined section and its properties come from the engine's incremental evaluator. In the
  *   browser it runs in a worker, latest-document-wins: while one evaluation runs, newer edits
  *   only replace the next request, so the pointer never waits for booleans. Without workers
  *   (tests, old browsers) it runs on the main thread once per animation frame.
  */
 import { createStore, type StoreApi } from 'zustand/vanilla';
-import { createEvaluator, shapeToRegion, type Evaluation, type SectionDocument, type Shape, type ShapeResult } from '../../src';
+import { createEvaluator, type Evaluation, type SectionDocument, type Shape, type ShapeResult } from '../../src';
 import type { EditorStore } from './store';
 import type { WorkerRequest, WorkerResponse } from './workerProtocol';
 
@@ -44,41 +45,16 @@ const defaultSchedule: Schedule =
 
 const now = () => (typeof performance !== 'undefined' ? performance.now() : Date.now());
 
-function shapeResult(s: Shape): ShapeResult {
-  try {
-    return { id: s.id, region: shapeToRegion(s) };
-  } catch (e) {
-    return { id: s.id, region: [], error: e instanceof Error ? e.message : String(e) };
-  }
-}
-
 export function createLiveResults(store: EditorStore, opts: { schedule?: Schedule; worker?: boolean } = {}): ResultsHandle {
   const schedule = opts.schedule ?? defaultSchedule;
   const evaluator = createEvaluator();
-  const shapeCache = new WeakMap<Shape, ShapeResult>();
-  let shapesDoc: SectionDocument | null = null;
-  let shapesList: ShapeResult[] = [];
-  const shapesOf = (doc: SectionDocument): ShapeResult[] => {
-    if (doc === shapesDoc) return shapesList;
-    shapesList = doc.shapes.map((s) => {
-      let r = shapeCache.get(s);
-      if (!r) {
-        r = shapeResult(s);
-        shapeCache.set(s, r);
-      }
-      return r;
-    });
-    shapesDoc = doc;
-    return shapesList;
-  };
+  const shapesOf = (doc: SectionDocument): ShapeResult[] => evaluator.shapes(doc);
 
   let syncDoc: SectionDocument | null = null;
   let syncEval: Evaluation | null = null;
   const evaluateSync = (doc: SectionDocument): Evaluation => {
     if (doc !== syncDoc || !syncEval) {
-      const ev = evaluator.evaluate(doc);
-      // Shape outlines from the shared cache: the same records the canvas draws.
-      syncEval = { ...ev, shapes: shapesOf(doc) };
+      syncEval = evaluator.evaluate(doc);
       syncDoc = doc;
     }
     return syncEval;

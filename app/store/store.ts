@@ -7,9 +7,7 @@
  * by document identity (app/store/evaluation.ts).
  */
 import { createStore, type StoreApi } from 'zustand/vanilla';
-import type { ProfileShape, SectionDocument } from '../../src';
-
-type ProfileType = ProfileShape['type'];
+import type { ProfileType, SectionDocument } from '../../src';
 
 export interface DocumentSlice {
   /** The document on screen: during a gesture this is the preview. */
@@ -27,7 +25,8 @@ export interface SelectionSlice {
   selected: string[];
 }
 
-export type ToolId = 'select' | 'rectangle' | 'circle' | 'polygon' | 'path' | 'profile';
+/** 'select' or the id of a shape kind's drawing tool (see app/shapes/). */
+export type ToolId = string;
 
 export interface SnapSettings {
   grid: boolean;

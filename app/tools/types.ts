@@ -1,10 +1,10 @@
 /** The contract between the canvas and its tools. Each tool is a small state machine. */
-import type { StoreApi } from 'zustand/vanilla';
 import type { Point, Shape } from '../../src';
 import type { PointInput } from '../expr';
-import type { SnapResult } from '../canvas/snap';
+import type { SnapResult } from '../geometry/snap';
 import type { ResultsHandle } from '../store/evaluation';
-import type { EditorStore, ToolId } from '../store/store';
+import type { EditorStore } from '../store/store';
+import type { TransientStore } from '../store/transient';
 
 /** A shape record without its id (the editor assigns one). */
 export type NewShape = Shape extends infer S ? (S extends Shape ? Omit<S, 'id'> & { id?: string } : never) : never;
@@ -18,30 +18,10 @@ export interface PointerInfo {
   mod: boolean;
 }
 
-/** What a tool shows while it works (world coordinates). */
-export interface Draft {
-  shape?: Shape;
-  /** An open chain of points (an outline being drawn), with `closing` drawn dashed back to its start. */
-  chain?: Point[];
-  closing?: boolean;
-  markers?: Point[];
-  box?: [Point, Point];
-}
-
-export interface Transient {
-  pointer: Point | null;
-  snap: SnapResult | null;
-  draft: Draft | null;
-  prompt: string;
-  inputError: string | null;
-  /** Handle under the pointer (index into shapeHandles of the selected shape), for the hover style. */
-  hoverHandle: number | null;
-}
-
 export interface ToolEnv {
   store: EditorStore;
   results: ResultsHandle;
-  transient: StoreApi<Transient>;
+  transient: TransientStore;
   snap(raw: Point, opts?: { from?: Point | null; exclude?: ReadonlySet<string>; extra?: readonly Point[]; shift?: boolean }): SnapResult;
   /** Commit a new shape in one undo step, select it; returns false (with a message) when invalid. */
   addShape(shape: NewShape): boolean;
@@ -49,7 +29,7 @@ export interface ToolEnv {
 }
 
 export interface Tool {
-  readonly id: ToolId;
+  readonly id: string;
   prompt(env: ToolEnv): string;
   down(env: ToolEnv, e: PointerInfo): void;
   move(env: ToolEnv, e: PointerInfo): void;

@@ -1,9 +1,9 @@
 /** The top bar (file, history, report), the tool rail (tools, profiles, snapping, overlays) and the status bar (typed input). */
 import { useRef } from 'react';
-import { formatNumber, type ProfileShape } from '../../src';
-import { PROFILE_TYPE_LIST, SHAPE_KIND_LABEL } from '../shapes';
-import { useEditor, useEditorState, useTransient } from '../store/hooks';
-import { CommandButton } from './CommandButton';
+import { formatNumber } from '../../src';
+import { useEditor, useEditorState, useTransient } from '../context';
+import { CommandButton } from '../fields/CommandButton';
+import { SHAPE_EDITORS, TOOL_SPECS } from '../shapes';
 import { KeysHelp } from './KeysHelp';
 
 export function TopBar() {
@@ -46,38 +46,22 @@ export function TopBar() {
 }
 
 export function ToolRail() {
-  const editor = useEditor();
   const tool = useEditorState((s) => s.tool);
-  const profileType = useEditorState((s) => s.profileType);
   return (
     <nav className="rail" aria-label="Tools">
       <div className="rail-group">
         <h3>Draw</h3>
         <CommandButton name="tool.select" />
-        <CommandButton name="tool.rectangle" />
-        <CommandButton name="tool.circle" />
-        <CommandButton name="tool.polygon" />
-        <CommandButton name="tool.path" />
-        {tool === 'path' && <CommandButton name="path.arcMode" className="sub" />}
-      </div>
-      <div className="rail-group">
-        <h3>Profile</h3>
-        <select
-          data-testid="profile-type"
-          value={profileType}
-          onChange={(e) => editor.run('tool.profile', e.target.value as ProfileShape['type'])}
-          aria-label="Profile type"
-        >
-          {PROFILE_TYPE_LIST.map((t) => (
-            <option key={t} value={t}>
-              {SHAPE_KIND_LABEL[t]}
-            </option>
+        {TOOL_SPECS.filter((t) => t.inDrawGroup).map((t) => (
+          <CommandButton key={t.id} name={`tool.${t.id}`} />
+        ))}
+        {SHAPE_EDITORS.flatMap((e) => e.commands ?? [])
+          .filter((c) => c.name.startsWith(`${tool}.`))
+          .map((c) => (
+            <CommandButton key={c.name} name={c.name} className="sub" />
           ))}
-        </select>
-        <CommandButton name="tool.profile" arg={profileType}>
-          Place profile
-        </CommandButton>
       </div>
+      {SHAPE_EDITORS.map((e, i) => e.RailControl && <e.RailControl key={i} />)}
       <div className="rail-group">
         <h3>Snap</h3>
         <CommandButton name="snap.grid" />

@@ -1,8 +1,8 @@
 /** Every command with its keys, read from the one registry (the same table the keyboard uses). */
 import { useState } from 'react';
 import { createPortal } from 'react-dom';
-import { registry } from '../commands/commands';
-import { keyHint } from './CommandButton';
+import { useEditor } from '../context';
+import { keyHint } from '../fields/CommandButton';
 
 const GROUP_LABEL: Record<string, string> = {
   tool: 'Tools',
@@ -18,7 +18,7 @@ const GROUP_LABEL: Record<string, string> = {
 
 export function KeysHelp() {
   const [open, setOpen] = useState(false);
-  const withKeys = registry.all().filter((c) => c.keys?.length);
+  const withKeys = useEditor().commands.all().filter((c) => c.keys?.length);
   const groups = [...new Set(withKeys.map((c) => c.group))];
   return (
     <>

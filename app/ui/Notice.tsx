@@ -1,5 +1,5 @@
 /** Messages that need reading: a refused file, an autosave problem. */
-import { useEditor, useEditorState } from '../store/hooks';
+import { useEditor, useEditorState } from '../context';
 
 export function Notice() {
   const editor = useEditor();

@@ -1,9 +1,9 @@
 /** The report in an overlay: the report module's HTML in an iframe, printed for "Save as PDF". */
 import { useEffect, useRef, useState } from 'react';
 import { loadReportRenderer } from '../report';
-import { useEditor, useEditorState } from '../store/hooks';
+import { useEditor, useEditorState } from '../context';
 import { withPaperSize, type Paper } from '../exchange/paper';
-import { CommandButton } from './CommandButton';
+import { CommandButton } from '../fields/CommandButton';
 
 export function ReportOverlay() {
   const editor = useEditor();

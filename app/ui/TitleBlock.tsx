@@ -3,10 +3,10 @@
  * report. Each field is committed as one undoable step when it is left or Enter is pressed.
  */
 import { useEffect, useState } from 'react';
-import { TITLE_FIELDS, titleValue, type TitleField } from '../exchange/commands';
+import { TITLE_FIELDS, titleValue, type TitleField } from '../ops/title';
 import { useExchange } from '../exchange/hooks';
 import { exchangeStore } from '../exchange/state';
-import { useEditor, useEditorState } from '../store/hooks';
+import { useEditor, useEditorState } from '../context';
 import '../exchange/exchange.css';
 
 const LABEL: Record<TitleField, string> = {

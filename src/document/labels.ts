@@ -1,16 +1,9 @@
 /** Plain names of the shape kinds, shared by the editor and the report so both say the same. */
+import { SHAPE_KINDS } from '../shapes/registry';
 import type { ShapeType } from './types';
 
-export const SHAPE_KIND_LABEL: Readonly<Record<ShapeType, string>> = {
-  polygon: 'Polygon',
-  circle: 'Circle',
-  path: 'Path',
-  rectangle: 'Rectangle',
-  'i-beam': 'I-beam',
-  channel: 'Channel',
-  angle: 'Angle',
-  tee: 'Tee',
-  'rect-tube': 'Rectangular tube',
-  'round-tube': 'Round tube',
-  'bent-plate': 'Bent plate',
-};
+export const SHAPE_KIND_LABEL: Readonly<Record<ShapeType, string>> = Object.fromEntries(
+  Object.entries(SHAPE_KINDS).map(([type, kind]) => [type, kind.label]),
+) as Record<ShapeType, string>;
+
+export { shapeDisplayName } from '../shapes/ops';

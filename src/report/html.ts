@@ -141,7 +141,7 @@ function shapeTable(input: ReportInput): string {
     const name = s.name ? `${s.name} (${s.id})` : s.id;
     return (
       `<tr><td class="num">${i + 1}</td><td>${escapeHtml(name)}</td><td>${escapeHtml(shapeKind(s))}</td><td>${escapeHtml(shapeOperation(s))}</td>` +
-      `<td>${escapeHtml(shapeDimensions(s, units))}</td><td class="num">${escapeHtml(area)}</td><td class="num">${escapeHtml(changeText)}</td></tr>`
+      `<td>${escapeHtml(shapeDimensions(s))}</td><td class="num">${escapeHtml(area)}</td><td class="num">${escapeHtml(changeText)}</td></tr>`
     );
   });
   return (

@@ -1,0 +1,18 @@
+/** What follows the pointer: the selection and its handles, the tool's draft, the snap target. */
+import { useEditorShallow, useTransient } from '../../context';
+import { DraftNode } from './Draft';
+import { SelectionNode } from './Selection';
+import { SnapNode } from './Snap';
+
+export function InteractionLayer() {
+  const v = useEditorShallow((s) => ({ scale: s.scale, ox: s.ox, oy: s.oy }));
+  const draft = useTransient((t) => t.draft);
+  const snap = useTransient((t) => t.snap);
+  return (
+    <>
+      <SelectionNode v={v} />
+      {draft && <DraftNode draft={draft} v={v} />}
+      {snap && <SnapNode snap={snap} v={v} />}
+    </>
+  );
+}

@@ -1,0 +1,30 @@
+/** View operations: fit the section, toggle an overlay, and where a new cut line starts. */
+import type { SectionProperties } from '../../src';
+import type { CommandContext } from '../commands/registry';
+import type { EditorState, Overlays } from '../store/store';
+import { evaluationBounds, fitBounds } from '../view';
+
+export function fitView(ctx: CommandContext): void {
+  const s = ctx.store.getState();
+  const b = evaluationBounds({ shapes: ctx.shapesOf(s.doc) });
+  if (!b) return;
+  ctx.store.setState(fitBounds(b, s.width, s.height));
+}
+
+/** Where a new cut line starts: through the centroid, with round-off zero shown as 0. */
+export function centroidCut(p: SectionProperties, axis: 'x' | 'y'): number {
+  const c = axis === 'x' ? p.centroid.x : p.centroid.y;
+  const size = Math.max(p.bounds.xmax - p.bounds.xmin, p.bounds.ymax - p.bounds.ymin);
+  return Math.abs(c) < 1e-12 * size ? 0 : c;
+}
+
+export function toggleOverlay(ctx: CommandContext, key: keyof Overlays): void {
+  const s = ctx.store.getState();
+  const overlays = { ...s.overlays, [key]: !s.overlays[key] };
+  const patch: Partial<EditorState> = { overlays };
+  if (key === 'cut' && overlays.cut && s.cutAt === null) {
+    const ev = ctx.evaluate(s.doc);
+    if (ev.props) patch.cutAt = centroidCut(ev.props, s.cutAxis);
+  }
+  ctx.store.setState(patch);
+}

@@ -1,0 +1,32 @@
+/**
+ * Region outlines as canvas paths. Arcs become short chords here, for drawing only (the tolerance
+ * is a fraction of a pixel), and the polylines are cached by region identity and tolerance so a
+ * repaint that did not change a region costs nothing.
+ */
+import { contourPolyline, type Region } from '../../src';
+import type { ViewTransform } from '../view';
+
+type Poly = Float64Array;
+
+const polyCache = new WeakMap<Region, { tol: number; polys: Poly[] }>();
+
+/** Polylines (world coordinates) of a region's contours, cached by region identity and tolerance. */
+export function regionPolylines(region: Region, tol: number): Poly[] {
+  const hit = polyCache.get(region);
+  if (hit && hit.tol <= tol * 1.5 && hit.tol >= tol / 3) return hit.polys;
+  const polys = region.map((c) => Float64Array.from(contourPolyline(c, tol)));
+  polyCache.set(region, { tol, polys });
+  return polys;
+}
+
+/** Add the region's contours to the current path, in screen coordinates. */
+export function traceRegion(ctx: CanvasRenderingContext2D, region: Region, v: ViewTransform): void {
+  const polys = regionPolylines(region, 0.35 / v.scale);
+  for (const p of polys) {
+    const n = p.length >> 1;
+    if (n < 2) continue;
+    ctx.moveTo(v.ox + p[0] * v.scale, v.oy - p[1] * v.scale);
+    for (let i = 1; i < n; i++) ctx.lineTo(v.ox + p[2 * i] * v.scale, v.oy - p[2 * i + 1] * v.scale);
+    ctx.closePath();
+  }
+}

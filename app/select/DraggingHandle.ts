@@ -1,0 +1,36 @@
+/** Moving one handle (a vertex, an arc's middle point, a centre, a radius): snapped, validated on release. */
+import { formatIssue, validateShape, type SectionDocument } from '../../src';
+import { cancelGesture, endGesture, previewGesture } from '../store/history';
+import { moveHandle, type HandleRef } from '../shapes';
+import type { PointerInfo, ToolEnv } from '../tools/types';
+import { Idle } from './Idle';
+import type { SelectState } from './state';
+
+export class DraggingHandle implements SelectState {
+  readonly name = 'draggingHandle';
+  constructor(
+    private readonly id: string,
+    private readonly ref: HandleRef,
+    private readonly base: SectionDocument,
+  ) {}
+  move(env: ToolEnv, e: PointerInfo): SelectState {
+    const p = env.snap(e.raw, { exclude: new Set([this.id]) }).p;
+    const shapes = this.base.shapes.map((sh) => (sh.id === this.id ? moveHandle(sh, this.ref, p) : sh));
+    previewGesture(env.store, { ...this.base, shapes });
+    return this;
+  }
+  up(env: ToolEnv): SelectState {
+    const s = env.store.getState();
+    const idx = s.doc.shapes.findIndex((x) => x.id === this.id);
+    const issues = idx >= 0 ? validateShape(s.doc.shapes[idx], `shapes[${idx}]`) : [];
+    if (issues.length) {
+      // A point that makes the shape invalid is not applied: the shape goes back.
+      cancelGesture(env.store);
+      env.message(`Point not moved: ${issues.map(formatIssue).join('; ')}`);
+    } else endGesture(env.store);
+    return new Idle();
+  }
+  cancel(env: ToolEnv): void {
+    cancelGesture(env.store);
+  }
+}

@@ -1,0 +1,64 @@
+/**
+ * The select tool: click to select (Shift adds or removes), drag a shape to move the selection,
+ * drag a handle to edit a point, drag the cut line to move it, drag on empty canvas for a
+ * selection box. Moves preview live
+ * and record one undo step when the pointer is released. States live one per file beside this.
+ */
+import { translateShape } from '../../src';
+import { beginGesture, endGesture, previewGesture } from '../store/history';
+import type { PointInput } from '../expr';
+import type { PointerInfo, Tool, ToolEnv } from '../tools/types';
+import { Idle } from './Idle';
+import type { SelectState } from './state';
+
+export { handleUnder } from './Idle';
+
+export class SelectTool implements Tool {
+  readonly id = 'select' as const;
+  private state: SelectState = new Idle();
+
+  prompt() {
+    return 'Select: click a shape, drag to move it, drag on empty space to select by box; arrows move by a fixed step';
+  }
+  busy() {
+    return this.state.name !== 'idle';
+  }
+  reset(env: ToolEnv) {
+    this.state.cancel?.(env);
+    this.state = new Idle();
+    env.transient.setState({ draft: null });
+  }
+  down(env: ToolEnv, e: PointerInfo) {
+    this.state = this.state.down?.(env, e) ?? this.state;
+  }
+  move(env: ToolEnv, e: PointerInfo) {
+    this.state = this.state.move?.(env, e) ?? this.state;
+  }
+  up(env: ToolEnv, e: PointerInfo) {
+    this.state = this.state.up?.(env, e) ?? new Idle();
+  }
+  key(env: ToolEnv, key: string) {
+    if (key !== 'escape') return false;
+    if (this.busy()) this.reset(env);
+    else env.store.setState({ selected: [] });
+    return true;
+  }
+
+  /** With a selection, "@dx, dy" or "length<angle" moves it in one undo step. */
+  typed(env: ToolEnv, input: PointInput): string | null {
+    const s = env.store.getState();
+    if (!s.selected.length) return 'Select a shape first, or pick a drawing tool.';
+    let dx: number, dy: number;
+    if (input.kind === 'rel') [dx, dy] = [input.dx, input.dy];
+    else if (input.kind === 'polar') {
+      const t = (input.angleDeg * Math.PI) / 180;
+      [dx, dy] = [input.length * Math.cos(t), input.length * Math.sin(t)];
+    } else return 'Type a move as "@dx, dy" or "length<angle".';
+    const sel = new Set(s.selected);
+    const shapes = s.doc.shapes.map((sh) => (sel.has(sh.id) ? translateShape(sh, dx, dy) : sh));
+    beginGesture(env.store);
+    previewGesture(env.store, { ...s.doc, shapes });
+    endGesture(env.store);
+    return null;
+  }
+}

@@ -1,0 +1,81 @@
+/**
+ * Circle editing: a tool that takes the centre, then a radius (typed) or a point on the rim
+ * (click, or press-drag-release); a centre handle moves it and a rim handle sets the radius.
+ */
+import type { CircleShape, Point } from '../../src';
+import { NumberField } from '../fields/NumberField';
+import { PointFields } from '../fields/PointFields';
+import { useShapeEdit } from '../fields/shape-edit';
+import type { PointInput } from '../expr';
+import { DrawingTool } from '../tools/base';
+import { clean, type ToolEnv } from '../tools/types';
+import type { ShapeEditor } from './kind';
+
+class CircleTool extends DrawingTool {
+  readonly id = 'circle';
+  protected override readonly finishOnDrag = true;
+  private centre: Point | null = null;
+  prompt() {
+    return this.centre ? 'Circle: radius (a number) or a point on the circle' : 'Circle: centre ("x, y")';
+  }
+  last() {
+    return this.centre;
+  }
+  busy() {
+    return this.centre !== null;
+  }
+  reset(env: ToolEnv) {
+    this.centre = null;
+    this.draft(env, null);
+  }
+  private finish(env: ToolEnv, r: number): string | null {
+    if (!(r > 0)) return 'The radius must be greater than 0.';
+    if (env.addShape({ type: 'circle', center: this.centre!, radius: clean(r) })) this.reset(env);
+    return null;
+  }
+  protected accept(env: ToolEnv, p: Point): string | null {
+    if (!this.centre) {
+      this.centre = p;
+      this.draft(env, { markers: [p] });
+      return null;
+    }
+    return this.finish(env, Math.hypot(p[0] - this.centre[0], p[1] - this.centre[1]));
+  }
+  protected preview(env: ToolEnv, p: Point) {
+    if (!this.centre) return;
+    const r = Math.hypot(p[0] - this.centre[0], p[1] - this.centre[1]);
+    if (r > 0) this.draft(env, { shape: { id: '~draft', type: 'circle', center: this.centre, radius: r }, markers: [this.centre], chain: [this.centre, p] });
+  }
+  override typed(env: ToolEnv, input: PointInput) {
+    if (input.kind === 'scalar') {
+      if (!this.centre) return 'Type the centre first as "x, y".';
+      return this.finish(env, input.value);
+    }
+    return super.typed(env, input);
+  }
+}
+
+function CircleFields({ shape }: { shape: CircleShape }) {
+  const e = useShapeEdit(shape);
+  return (
+    <>
+      <PointFields label="Centre" p={shape.center} field="center" units={e.units} onPoint={(p) => e.set((s) => ({ ...s, center: p }))} />
+      <NumberField label="Radius" value={shape.radius} field="radius" suffix={e.units} onCommit={(v) => e.set((s) => ({ ...s, radius: v }))} />
+    </>
+  );
+}
+
+export const circleEditor: ShapeEditor<CircleShape> = {
+  types: ['circle'],
+  handles: (s) => [
+    { ref: { kind: 'centre' }, p: s.center },
+    { ref: { kind: 'radius' }, p: [s.center[0] + s.radius, s.center[1]] },
+  ],
+  moveHandle: (s, ref, p) => {
+    if (ref.kind === 'centre') return { ...s, center: p };
+    if (ref.kind === 'radius') return { ...s, radius: Math.hypot(p[0] - s.center[0], p[1] - s.center[1]) };
+    return s;
+  },
+  Fields: CircleFields,
+  tools: [{ id: 'circle', label: 'Circle', key: 'c', inDrawGroup: true, create: () => new CircleTool() }],
+};
