@@ -3,7 +3,7 @@
  * the command context. Nothing here depends on React, so the tests build the same editor.
  */
 import { formatIssue, newShapeId, unitFactor, validateShape, type Point, type SectionDocument, type Shape } from '../src';
-import { registry } from './commands/commands';
+import { registry } from './command-table';
 import type { CommandContext, FileIO } from './commands/registry';
 import type { EditorHandle } from './context';
 import { parsePointInput } from './expr';

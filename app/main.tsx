@@ -1,7 +1,7 @@
 /** Start-up: restore the autosaved section (or the demo), install autosave, mount the editor. */
 import { createRoot } from 'react-dom/client';
 import { App } from './App';
-import { registry } from './commands/commands';
+import { registry } from './command-table';
 import { fitView } from './ops/view';
 import { createEditor } from './editor';
 import { installAutosave, restoreDocument } from './persist';

@@ -5,7 +5,7 @@
 import { readFileSync } from 'node:fs';
 import { basename } from 'node:path';
 import { formatIssue, parseDocument, UNITS, validateDocument, type SectionDocument, type Units } from '../src';
-import { importDxf } from '../src/exchange/dxf-import';
+import { importDxf } from '../src/exchange';
 
 export type LoadedSection = { ok: true; doc: SectionDocument; warnings: string[] } | { ok: false; messages: string[] };
 

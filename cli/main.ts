@@ -4,6 +4,7 @@
  */
 import { readFileSync } from 'node:fs';
 import {
+  CAUTION_TEXT,
   cutSection,
   evaluateDocument,
   formatIssue,
@@ -11,12 +12,12 @@ import {
   formatProperty,
   inertiaAboutAxis,
   parseDocument,
+  propertiesJson,
   PROPERTY_CATALOG,
   type Evaluation,
   type SectionDocument,
   type SectionProperties,
 } from '../src';
-import { CAUTION_TEXT } from '../src/report/caution';
 
 const USAGE = `Usage:
   kern props FILE [--json]                 section properties of a section document (.json)
@@ -74,35 +75,9 @@ export async function loadFile(path: string, units?: string): Promise<Loaded> {
   return { ok: true, doc: r.doc, warnings: r.warnings.map(formatIssue) };
 }
 
+/** `props --json`: the units, every catalogue property (full precision) and the warnings. */
 function propsJson(doc: SectionDocument, ev: Evaluation, p: SectionProperties, warnings: string[]) {
-  return {
-    units: doc.units,
-    area: p.area,
-    centroid: p.centroid,
-    Qx: p.Qx,
-    Qy: p.Qy,
-    Ix: p.Ix,
-    Iy: p.Iy,
-    Ixy: p.Ixy,
-    J0: p.J0,
-    I1: p.I1,
-    I2: p.I2,
-    theta: p.theta,
-    rx: p.rx,
-    ry: p.ry,
-    r1: p.r1,
-    r2: p.r2,
-    Sx_top: p.Sx_top,
-    Sx_bottom: p.Sx_bottom,
-    Sy_left: p.Sy_left,
-    Sy_right: p.Sy_right,
-    Zx: p.Zx,
-    Zy: p.Zy,
-    plasticAxis: p.plasticAxis,
-    bounds: p.bounds,
-    perimeter: p.perimeter,
-    warnings: [...warnings, ...ev.warnings.map(formatIssue)],
-  };
+  return { units: doc.units, ...propertiesJson(p), warnings: [...warnings, ...ev.warnings.map(formatIssue)] };
 }
 
 function table(rows: [string, string, string][]): string {

@@ -24,12 +24,14 @@ export {
   type SectionProperties,
   type CutResult,
 } from './properties/section';
+export { propertiesJson, jsonValueAt, type PropertyJson } from './properties/json';
+export { CAUTION_TEXT } from './report/caution';
 export { PROPERTY_CATALOG, formatNumber, formatProperty, unitText, propertyByKey, DISPLAY_SIGFIGS, type PropertyInfo } from './properties/catalog';
 export { regionMoments, polygonMoments, type RawMoments } from './moments/kernel';
 export { momentsAbove } from './moments/cut';
 export * from './geometry/contour';
 export { polygonInsertAfter, polygonDeletePoint, pathSplitSegment, pathDeletePoint, pathMakeArc, pathMakeLine, type PointEdit } from './shapes/edit-points';
 export { contourToPath, regionToPaths, profileToOutline } from './shapes/from-region';
-export { newShapeId } from './document/ids';
+export { newShapeId } from './shapes/ids';
 export { regionSegments, segmentIntersections, segmentMidpoint, segmentBox, type Segment } from './geometry/segments';
 export { unionBounds, regionsBounds } from './geometry/bounds';

@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { createEditor } from '../app/editor';
-import { buildRegistry, registry } from '../app/commands/commands';
+import { buildRegistry, registry } from '../app/command-table';
 import { loadDocumentText } from '../app/ops/document';
 import { CommandRegistry } from '../app/commands/registry';
 import { beginGesture, commit, endGesture, previewGesture, cancelGesture, undo, redo } from '../app/store/history';

@@ -1,6 +1,7 @@
 /** The command line, run as a user runs it (`npm run -s cli -- ...` is `tsx cli/main.ts ...`). */
 import { spawnSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
+import { jsonValueAt, PROPERTY_CATALOG } from '../src';
 import { close } from './helpers';
 
 function kern(...args: string[]) {
@@ -25,6 +26,13 @@ describe('kern props', () => {
     close(j.Ix, (200 * 100 ** 3) / 12 + A1 * (50 - yb) ** 2 - ((Math.PI * 20 ** 4) / 4 + A2 * (35 - yb) ** 2), 1e-9);
     expect(j.units).toBe('mm');
     expect(j.bounds).toEqual({ xmin: 0, xmax: 200, ymin: 0, ymax: 100 });
+  });
+
+  it('carries every property of the catalogue, at full precision (the JSON is built from it)', () => {
+    const j = JSON.parse(kern('props', 'tests/fixtures/plate-with-bore.json', '--json').out);
+    for (const info of PROPERTY_CATALOG) expect(typeof jsonValueAt(j, info.key), info.key).toBe('number');
+    // Full precision, not the shown digits: the area has more than 6 significant figures.
+    close(j.area, 20000 - Math.PI * 400, 1e-15);
   });
 
   it('prints a table with units and the caution', () => {

@@ -4,7 +4,7 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { createEvaluator, evaluateDocument, type SectionDocument, type Shape } from '../src';
+import { createEvaluator, evaluateDocument, translateShape, type SectionDocument, type Shape } from '../src';
 
 const base: Shape[] = [
   { id: 'plate', type: 'rectangle', at: [0, 0], width: 200, height: 20 },
@@ -14,28 +14,16 @@ const base: Shape[] = [
   { id: 'bar', type: 'circle', center: [150, 30], radius: 12 },
   { id: 'clip', type: 'polygon', points: [[-10, -10], [210, -10], [210, 160], [-10, 160]], op: 'intersect' },
   { id: 'angle', type: 'angle', at: [120, 20], legVertical: 60, legHorizontal: 50, thickness: 6, rootRadius: 6 },
+  { id: 'lug', type: 'path', start: [20, 20], segments: [{ to: [60, 20] }, { to: [60, 50], via: [72, 35] }, { to: [20, 20] }] },
 ];
 
 type Edit = { kind: 'move'; k: number; dx: number; dy: number } | { kind: 'op'; k: number; op: 'add' | 'subtract' | 'intersect' } | { kind: 'swap'; k: number } | { kind: 'drop'; k: number };
-
-function move(s: Shape, dx: number, dy: number): Shape {
-  switch (s.type) {
-    case 'circle':
-      return { ...s, center: [s.center[0] + dx, s.center[1] + dy] };
-    case 'polygon':
-      return { ...s, points: s.points.map((p) => [p[0] + dx, p[1] + dy] as [number, number]) };
-    case 'path':
-      return s;
-    default:
-      return { ...s, at: [s.at[0] + dx, s.at[1] + dy] };
-  }
-}
 
 function apply(shapes: Shape[], e: Edit): Shape[] {
   if (shapes.length === 0) return shapes;
   const k = e.k % shapes.length;
   const out = shapes.slice();
-  if (e.kind === 'move') out[k] = move(out[k], e.dx, e.dy);
+  if (e.kind === 'move') out[k] = translateShape(out[k], e.dx, e.dy);
   else if (e.kind === 'op') out[k] = { ...out[k], op: e.op };
   else if (e.kind === 'swap' && k + 1 < out.length) [out[k], out[k + 1]] = [out[k + 1], out[k]];
   else if (e.kind === 'drop' && out.length > 1) out.splice(k, 1);

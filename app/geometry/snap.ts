@@ -5,6 +5,9 @@
  */
 import { regionSegments, segmentBox, segmentIntersections, segmentMidpoint, type Point, type Segment, type ShapeResult } from '../../src';
 import type { SnapSettings } from '../store/store';
+import type { SnapResult } from '../store/transient';
+
+export type { SnapResult };
 import { gridStep } from '../view';
 
 export type SnapKind = 'vertex' | 'midpoint' | 'centre' | 'intersection';
@@ -15,12 +18,6 @@ export interface SnapPoint {
   shape: string;
 }
 
-export interface SnapResult {
-  p: Point;
-  kind: SnapKind | 'grid' | 'free';
-  /** True when the orthogonal constraint moved the point. */
-  ortho: boolean;
-}
 
 export const SNAP_RADIUS_PX = 10;
 

@@ -2,8 +2,7 @@
  * Live results: every property of the engine's catalogue, formatted by the engine's one
  * formatter. Each value carries data-prop (its key) and data-value (the full-precision number).
  */
-import { formatIssue, formatProperty, PROPERTY_CATALOG, UNITS, type PropertyInfo, type Units } from '../../src';
-import { CAUTION_TEXT } from '../../src/report/caution';
+import { CAUTION_TEXT, formatIssue, formatProperty, PROPERTY_CATALOG, UNITS, type PropertyInfo, type Units } from '../../src';
 import { useEditor, useEditorState, useResults } from '../context';
 
 const GROUPS = [...new Set(PROPERTY_CATALOG.map((p) => p.group))];

@@ -5,8 +5,7 @@
 import type { EditorState } from '../store/store';
 import type { PointerInfo, ToolEnv } from '../tools/types';
 import { screenX, screenY } from '../view';
-import { Idle } from './Idle';
-import type { SelectState } from './state';
+import { IDLE, type Next, type SelectState } from './state';
 
 /** Pick distance of the cut line (px). */
 export const CUT_PX = 5;
@@ -19,11 +18,11 @@ export function nearCutLine(s: EditorState, sx: number, sy: number): boolean {
 
 export class DraggingCut implements SelectState {
   readonly name = 'draggingCut';
-  move(env: ToolEnv, e: PointerInfo): SelectState {
+  move(env: ToolEnv, e: PointerInfo): Next {
     env.store.setState({ cutAt: env.store.getState().cutAxis === 'x' ? e.raw[0] : e.raw[1] });
     return this;
   }
-  up(): SelectState {
-    return new Idle();
+  up(): Next {
+    return IDLE;
   }
 }

@@ -3,8 +3,7 @@ import { formatIssue, validateShape, type SectionDocument } from '../../src';
 import { cancelGesture, endGesture, previewGesture } from '../store/history';
 import { moveHandle, type HandleRef } from '../shapes';
 import type { PointerInfo, ToolEnv } from '../tools/types';
-import { Idle } from './Idle';
-import type { SelectState } from './state';
+import { IDLE, type Next, type SelectState } from './state';
 
 export class DraggingHandle implements SelectState {
   readonly name = 'draggingHandle';
@@ -13,13 +12,13 @@ export class DraggingHandle implements SelectState {
     private readonly ref: HandleRef,
     private readonly base: SectionDocument,
   ) {}
-  move(env: ToolEnv, e: PointerInfo): SelectState {
+  move(env: ToolEnv, e: PointerInfo): Next {
     const p = env.snap(e.raw, { exclude: new Set([this.id]) }).p;
     const shapes = this.base.shapes.map((sh) => (sh.id === this.id ? moveHandle(sh, this.ref, p) : sh));
     previewGesture(env.store, { ...this.base, shapes });
     return this;
   }
-  up(env: ToolEnv): SelectState {
+  up(env: ToolEnv): Next {
     const s = env.store.getState();
     const idx = s.doc.shapes.findIndex((x) => x.id === this.id);
     const issues = idx >= 0 ? validateShape(s.doc.shapes[idx], `shapes[${idx}]`) : [];
@@ -28,7 +27,7 @@ export class DraggingHandle implements SelectState {
       cancelGesture(env.store);
       env.message(`Point not moved: ${issues.map(formatIssue).join('; ')}`);
     } else endGesture(env.store);
-    return new Idle();
+    return IDLE;
   }
   cancel(env: ToolEnv): void {
     cancelGesture(env.store);

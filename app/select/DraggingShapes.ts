@@ -9,8 +9,7 @@ import { roundTo, snapPoints, SNAP_RADIUS_PX, type SnapKind, type SnapPoint } fr
 import { cancelGesture, endGesture, previewGesture } from '../store/history';
 import { gridStep } from '../view';
 import type { PointerInfo, ToolEnv } from '../tools/types';
-import { Idle } from './Idle';
-import type { SelectState } from './state';
+import { IDLE, type Next, type SelectState } from './state';
 
 export class DraggingShapes implements SelectState {
   readonly name = 'draggingShapes';
@@ -54,7 +53,7 @@ export class DraggingShapes implements SelectState {
     return best;
   }
 
-  move(env: ToolEnv, e: PointerInfo): SelectState {
+  move(env: ToolEnv, e: PointerInfo): Next {
     const s = env.store.getState();
     let dx = e.raw[0] - this.start[0], dy = e.raw[1] - this.start[1];
     const ortho = e.shift || s.snap.ortho;
@@ -80,10 +79,10 @@ export class DraggingShapes implements SelectState {
     previewGesture(env.store, { ...this.base, shapes });
     return this;
   }
-  up(env: ToolEnv): SelectState {
+  up(env: ToolEnv): Next {
     env.transient.setState({ snap: null });
     endGesture(env.store);
-    return new Idle();
+    return IDLE;
   }
   cancel(env: ToolEnv): void {
     env.transient.setState({ snap: null });

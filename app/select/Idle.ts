@@ -8,7 +8,7 @@ import { BoxSelecting } from './BoxSelecting';
 import { DraggingHandle } from './DraggingHandle';
 import { DraggingCut, nearCutLine } from './DraggingCut';
 import { PressingShape } from './PressingShape';
-import { HANDLE_PX, type SelectState } from './state';
+import { HANDLE_PX, type Next, type SelectState } from './state';
 
 /** Index of the handle of the single selected shape under (sx, sy), or -1. */
 export function handleUnder(env: ToolEnv, sx: number, sy: number): number {
@@ -30,7 +30,7 @@ export function handleUnder(env: ToolEnv, sx: number, sy: number): number {
 
 export class Idle implements SelectState {
   readonly name = 'idle';
-  down(env: ToolEnv, e: PointerInfo): SelectState {
+  down(env: ToolEnv, e: PointerInfo): Next {
     const s = env.store.getState();
     if (nearCutLine(s, e.sx, e.sy)) return new DraggingCut();
     const h = handleUnder(env, e.sx, e.sy);
@@ -50,7 +50,7 @@ export class Idle implements SelectState {
     if (!e.shift) env.store.setState({ selected: [] });
     return new BoxSelecting(e.raw, e.shift);
   }
-  move(env: ToolEnv, e: PointerInfo): SelectState {
+  move(env: ToolEnv, e: PointerInfo): Next {
     const h = handleUnder(env, e.sx, e.sy);
     env.transient.setState({ hoverHandle: h >= 0 ? h : null });
     return this;

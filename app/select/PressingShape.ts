@@ -3,8 +3,7 @@ import type { Point, SectionDocument } from '../../src';
 import { beginGesture } from '../store/history';
 import type { PointerInfo, ToolEnv } from '../tools/types';
 import { DraggingShapes } from './DraggingShapes';
-import { Idle } from './Idle';
-import { DRAG_PX, type SelectState } from './state';
+import { DRAG_PX, IDLE, type Next, type SelectState } from './state';
 
 export class PressingShape implements SelectState {
   readonly name = 'pressingShape';
@@ -13,12 +12,12 @@ export class PressingShape implements SelectState {
     private readonly start: Point,
     private readonly base: SectionDocument,
   ) {}
-  move(env: ToolEnv, e: PointerInfo): SelectState {
+  move(env: ToolEnv, e: PointerInfo): Next {
     if (Math.hypot(e.sx - this.at[0], e.sy - this.at[1]) < DRAG_PX) return this;
     beginGesture(env.store);
     return new DraggingShapes(this.start, this.base, new Set(env.store.getState().selected)).move(env, e);
   }
-  up(): SelectState {
-    return new Idle();
+  up(): Next {
+    return IDLE;
   }
 }

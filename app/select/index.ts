@@ -29,10 +29,10 @@ export class SelectTool implements Tool {
     env.transient.setState({ draft: null });
   }
   down(env: ToolEnv, e: PointerInfo) {
-    this.state = this.state.down?.(env, e) ?? this.state;
+    if (this.state.down) this.state = this.state.down(env, e) ?? new Idle();
   }
   move(env: ToolEnv, e: PointerInfo) {
-    this.state = this.state.move?.(env, e) ?? this.state;
+    if (this.state.move) this.state = this.state.move(env, e) ?? new Idle();
   }
   up(env: ToolEnv, e: PointerInfo) {
     this.state = this.state.up?.(env, e) ?? new Idle();

@@ -1,14 +1,20 @@
 /**
  * The select tool is a small state machine: each state is one class in this folder with the
- * pointer handlers it needs, and returns the next state (or itself).
+ * pointer handlers it needs, and returns the next state, itself, or `IDLE` to go back to rest.
+ * States lead forward only (rest → press → drag); the way back is the `IDLE` value, so no
+ * state file imports the one it came from.
  */
 import type { PointerInfo, ToolEnv } from '../tools/types';
 
+/** Back to the idle state (the tool makes a fresh one). */
+export const IDLE = null;
+export type Next = SelectState | typeof IDLE;
+
 export interface SelectState {
   readonly name: string;
-  down?(env: ToolEnv, e: PointerInfo): SelectState;
-  move?(env: ToolEnv, e: PointerInfo): SelectState;
-  up?(env: ToolEnv, e: PointerInfo): SelectState;
+  down?(env: ToolEnv, e: PointerInfo): Next;
+  move?(env: ToolEnv, e: PointerInfo): Next;
+  up?(env: ToolEnv, e: PointerInfo): Next;
   /** Leave the state early (Escape, tool change): undo whatever it previewed. */
   cancel?(env: ToolEnv): void;
 }

@@ -4,7 +4,14 @@
  */
 import { createStore, type StoreApi } from 'zustand/vanilla';
 import type { Point, Shape } from '../../src';
-import type { SnapResult } from '../geometry/snap';
+
+/** Where snapping put the pointer, and why. */
+export interface SnapResult {
+  p: Point;
+  kind: 'vertex' | 'midpoint' | 'centre' | 'intersection' | 'grid' | 'free';
+  /** True when the orthogonal constraint moved the point. */
+  ortho: boolean;
+}
 
 /** What a tool shows while it works (world coordinates). */
 export interface Draft {

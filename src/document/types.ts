@@ -26,13 +26,8 @@ export type {
   RoundTubeShape,
   BentPlateShape,
 } from '../shapes/profile/types';
-import type { PolygonShape } from '../shapes/polygon';
-import type { CircleShape } from '../shapes/circle';
-import type { PathShape } from '../shapes/path';
-import type { ProfileShape } from '../shapes/profile/types';
-
-export type Shape = PolygonShape | CircleShape | PathShape | ProfileShape;
-export type ShapeType = Shape['type'];
+export type { Shape, ShapeType } from '../shapes/shape';
+import type { Shape } from '../shapes/shape';
 
 export interface TitleBlock {
   project?: string;

@@ -2,13 +2,13 @@
  * Validation of section documents: every problem is returned with its path in the document
  * (`shapes[2].segments[4].via: arc points are collinear`), never just the first one.
  */
-import { OPS } from '../shapes/base';
 import { fmtValue as fmtNum, isObj, type Issue } from '../shapes/check';
-import { isShapeType, SHAPE_KINDS, SHAPE_TYPES } from '../shapes/registry';
+import { validateShape } from '../shapes/validate';
 import { migrate, KNOWN_VERSIONS } from './migrate';
 import { CURRENT_VERSION, FORMAT, UNITS, type SectionDocument } from './types';
 
 export { formatIssue, type Issue } from '../shapes/check';
+export { validateShape };
 
 export type DocResult =
   | { ok: true; doc: SectionDocument; warnings: Issue[] }
@@ -24,23 +24,6 @@ export function parseDocument(text: string): DocResult {
     return { ok: false, errors: [{ path: '', message: `the file is not valid JSON (${msg})` }], warnings: [] };
   }
   return validateDocument(value);
-}
-
-/** Validate one shape record. `path` is its location, e.g. 'shapes[3]'. */
-export function validateShape(s: unknown, path: string): Issue[] {
-  const out: Issue[] = [];
-  if (!isObj(s)) return [{ path, message: 'a shape must be an object' }];
-  if (typeof s.id !== 'string' || s.id.trim() === '') out.push({ path: `${path}.id`, message: 'every shape needs a non-empty string id' });
-  if (s.name !== undefined && typeof s.name !== 'string') out.push({ path: `${path}.name`, message: 'name must be text' });
-  if (s.op !== undefined && !(OPS as readonly unknown[]).includes(s.op)) {
-    out.push({ path: `${path}.op`, message: `unknown operation ${fmtNum(s.op)}; use one of ${OPS.join(', ')}` });
-  }
-  if (!isShapeType(s.type)) {
-    out.push({ path: `${path}.type`, message: `unknown shape type ${fmtNum(s.type)}; use one of ${SHAPE_TYPES.join(', ')}` });
-    return out;
-  }
-  SHAPE_KINDS[s.type].validate(s, path, out);
-  return out;
 }
 
 /** Validate (and migrate) a whole document. */

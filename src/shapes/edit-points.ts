@@ -9,8 +9,8 @@
  * Path points are numbered 0 = `start`, k = `segments[k − 1].to` for k = 1 … n − 1; segment i
  * runs from point i to point (i + 1) mod n, and the last segment's `to` equals `start`.
  */
-import type { Shape } from '../document/types';
-import { validateShape } from '../document/validate';
+import type { Shape } from './shape';
+import { validateShape } from './validate';
 import type { Point } from './base';
 import { formatIssue } from './check';
 import { shapeToRegion } from './ops';

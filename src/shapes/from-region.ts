@@ -4,8 +4,8 @@
  */
 import { arcFromChord, type Contour, type Region } from '../geometry/contour';
 import { regionMomentsAbout } from '../moments/kernel';
-import { newShapeId } from '../document/ids';
-import type { SectionDocument, Shape } from '../document/types';
+import { newShapeId } from './ids';
+import type { Shape } from './shape';
 import type { Point } from './base';
 import type { PathSegment, PathShape } from './path';
 import { profileToPaths } from './profile/outline';
@@ -39,7 +39,7 @@ export function contourToPath(c: Contour, id: string, op: Shape['op']): PathShap
  * Paths for a boolean result: every outer loop (CCW) an `add` path, every hole (CW) a `subtract`
  * path after all the outer loops, so the holes cut what the loops add.
  */
-export function regionToPaths(region: Region, doc: SectionDocument): PathShape[] {
+export function regionToPaths(region: Region, doc: { readonly shapes: readonly Shape[] }): PathShape[] {
   const taken = new Set<string>();
   const nextId = () => {
     const id = newShapeId(doc, taken);
@@ -59,7 +59,7 @@ export function regionToPaths(region: Region, doc: SectionDocument): PathShape[]
  * A profile as plain path shapes (outer loop with the profile's op; holes subtracted after it).
  * Returns an error text when that would not mean the same section.
  */
-export function profileToOutline(s: ProfileShape, doc: SectionDocument): { ok: true; shapes: Shape[] } | { ok: false; message: string } {
+export function profileToOutline(s: ProfileShape, doc: { readonly shapes: readonly Shape[] }): { ok: true; shapes: Shape[] } | { ok: false; message: string } {
   const { outer, holes } = profileToPaths(s);
   const op = s.op ?? 'add';
   if (holes.length && op !== 'add') {

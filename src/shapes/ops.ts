@@ -5,7 +5,7 @@
  */
 import { resolveOutline } from '../boolean';
 import type { Contour, Region } from '../geometry/contour';
-import type { Shape } from '../document/types';
+import type { Shape } from './shape';
 import type { PointMap } from './base';
 import { kindOf } from './registry';
 

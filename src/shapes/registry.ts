@@ -2,7 +2,7 @@
  * The list of shape kinds. Everything that depends on a shape's kind (validation, units, labels,
  * outlines, transforms, the report) looks the kind up here; nothing else switches on `type`.
  */
-import type { Shape, ShapeType } from '../document/types';
+import type { Shape, ShapeType } from './shape';
 import { circleKind } from './circle';
 import type { ShapeKind } from './kind';
 import { pathKind } from './path';

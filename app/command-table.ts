@@ -4,12 +4,12 @@
  * What a command does lives in `app/ops/` (document operations) and `app/exchange/` (files);
  * the drawing tools' commands come from the shape-kind editors (`app/shapes/`).
  */
-import { isProfile, OPS } from '../../src';
-import { readDxf } from '../exchange/dxf';
-import { canExport, exportDxfFile, exportJsonFile, exportPngFile, exportSvgFile } from '../exchange/exports';
-import { exchangeStore } from '../exchange/state';
-import { loadDemo, loadDocumentText, newDocument, saveDocument, setUnits } from '../ops/document';
-import { convertSelectionToOutline, mergeSelection } from '../ops/outline';
+import { isProfile, OPS } from '../src';
+import { readDxf } from './exchange/dxf';
+import { canExport, exportDxfFile, exportJsonFile, exportPngFile, exportSvgFile } from './exchange/exports';
+import { exchangeStore } from './exchange/state';
+import { loadDemo, loadDocumentText, newDocument, saveDocument, setUnits } from './ops/document';
+import { convertSelectionToOutline, mergeSelection } from './ops/outline';
 import {
   deleteSelection,
   duplicateSelection,
@@ -21,13 +21,13 @@ import {
   rotateSelection,
   selectedShapes,
   setSelectionOp,
-} from '../ops/selection';
-import { setTitleField, type TitleField } from '../ops/title';
-import { fitView, toggleOverlay } from '../ops/view';
-import { SHAPE_EDITORS } from '../shapes';
-import { canRedo, canUndo, redo, undo } from '../store/history';
-import type { EditorState, Overlays } from '../store/store';
-import { CommandRegistry, type CommandContext } from './registry';
+} from './ops/selection';
+import { setTitleField, type TitleField } from './ops/title';
+import { fitView, toggleOverlay } from './ops/view';
+import { SHAPE_EDITORS } from './shapes';
+import { canRedo, canUndo, redo, undo } from './store/history';
+import type { EditorState, Overlays } from './store/store';
+import { CommandRegistry, type CommandContext } from './commands/registry';
 
 const OP_LABEL = { add: 'Add', subtract: 'Subtract', intersect: 'Intersect' } as const;
 const OP_KEY = { add: 'shift+a', subtract: 'shift+s', intersect: 'shift+i' } as const;
