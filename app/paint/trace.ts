@@ -4,7 +4,7 @@
  * repaint that did not change a region costs nothing.
  */
 import { contourPolyline, type Region } from '../../src';
-import type { ViewTransform } from '../view';
+import { screenX, screenY, type ViewTransform } from '../view';
 
 type Poly = Float64Array;
 
@@ -25,8 +25,8 @@ export function traceRegion(ctx: CanvasRenderingContext2D, region: Region, v: Vi
   for (const p of polys) {
     const n = p.length >> 1;
     if (n < 2) continue;
-    ctx.moveTo(v.ox + p[0] * v.scale, v.oy - p[1] * v.scale);
-    for (let i = 1; i < n; i++) ctx.lineTo(v.ox + p[2 * i] * v.scale, v.oy - p[2 * i + 1] * v.scale);
+    ctx.moveTo(screenX(v, p[0]), screenY(v, p[1]));
+    for (let i = 1; i < n; i++) ctx.lineTo(screenX(v, p[2 * i]), screenY(v, p[2 * i + 1]));
     ctx.closePath();
   }
 }

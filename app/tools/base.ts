@@ -7,6 +7,7 @@
 import type { Point } from '../../src';
 import type { PointInput } from '../expr';
 import type { Draft } from '../store/transient';
+import { toScreen } from '../view';
 import { resolveTyped, type PointerInfo, type Tool, type ToolEnv } from './types';
 
 /** Pixels within which a click on the first point closes an outline. */
@@ -41,8 +42,8 @@ export abstract class DrawingTool implements Tool {
   /** True when the press at `downAt` was within CLOSE_PX of world point p on screen. */
   protected pressedNear(env: ToolEnv, p: Point): boolean {
     if (!this.downAt) return false;
-    const st = env.store.getState();
-    return Math.hypot(st.ox + p[0] * st.scale - this.downAt[0], st.oy - p[1] * st.scale - this.downAt[1]) <= CLOSE_PX;
+    const [sx, sy] = toScreen(env.store.getState(), p[0], p[1]);
+    return Math.hypot(sx - this.downAt[0], sy - this.downAt[1]) <= CLOSE_PX;
   }
   down(env: ToolEnv, e: PointerInfo): void {
     this.downAt = [e.sx, e.sy];
