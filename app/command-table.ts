@@ -28,6 +28,7 @@ import { SHAPE_EDITORS } from './shapes';
 import { canRedo, canUndo, redo, undo } from './store/history';
 import type { EditorState, Overlays } from './store/store';
 import { CommandRegistry, type CommandContext } from './commands/registry';
+import { activeShapes } from './store/section';
 
 const OP_LABEL = { add: 'Add', subtract: 'Subtract', intersect: 'Intersect' } as const;
 const OP_KEY = { add: 'shift+a', subtract: 'shift+s', intersect: 'shift+i' } as const;
@@ -59,7 +60,7 @@ function registerHistory(r: CommandRegistry): void {
 }
 
 function registerEdits(r: CommandRegistry): void {
-  r.register({ name: 'select.all', label: 'Select all', group: 'edit', keys: ['mod+a'], perform: (c) => c.store.setState({ selected: c.store.getState().doc.shapes.map((s) => s.id) }) });
+  r.register({ name: 'select.all', label: 'Select all', group: 'edit', keys: ['mod+a'], perform: (c) => c.store.setState({ selected: activeShapes(c.store.getState().doc).map((s) => s.id) }) });
   r.register({ name: 'select.none', label: 'Select none', group: 'edit', perform: (c) => c.store.setState({ selected: [] }) });
   r.register({ name: 'edit.delete', label: 'Delete', group: 'edit', keys: ['delete', 'backspace'], enabled: hasSelection, perform: deleteSelection });
   r.register({ name: 'edit.duplicate', label: 'Duplicate', group: 'edit', keys: ['mod+d'], enabled: hasSelection, perform: duplicateSelection });

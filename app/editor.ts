@@ -2,7 +2,7 @@
  * One editor instance: the store, the live results, the transient pointer state, the tools and
  * the command context. Nothing here depends on React, so the tests build the same editor.
  */
-import { formatIssue, newShapeId, unitFactor, validateShape, type Point, type SectionDocument, type Shape } from '../src';
+import { allShapeIds, formatIssue, newShapeId, unitFactor, validateShape, type Point, type SectionDocument, type Shape } from '../src';
 import { registry } from './command-table';
 import type { CommandContext, FileIO } from './commands/registry';
 import type { EditorHandle } from './context';
@@ -15,6 +15,7 @@ import { createLiveResults } from './store/evaluation';
 import { createEditorStore } from './store/store';
 import { createTransientStore } from './store/transient';
 import type { Tool, ToolEnv } from './tools/types';
+import { activeShapes, withActiveShapes } from './store/section';
 
 export type Editor = EditorHandle;
 
@@ -44,13 +45,14 @@ export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule
     },
     addShape(partial) {
       const s = store.getState();
-      const shape = { ...partial, id: partial.id ?? newShapeId(s.doc) } as Shape;
-      const issues = validateShape(shape, `shapes[${s.doc.shapes.length}]`);
+      const shapes = activeShapes(s.doc);
+      const shape = { ...partial, id: partial.id ?? newShapeId(allShapeIds(s.doc)) } as Shape;
+      const issues = validateShape(shape, `shapes[${shapes.length}]`);
       if (issues.length) {
         transient.setState({ inputError: `Not added: ${issues.map(formatIssue).join('; ')}` });
         return false;
       }
-      commit(store, { ...s.doc, shapes: [...s.doc.shapes, shape] }, [shape.id]);
+      commit(store, withActiveShapes(s.doc, [...shapes, shape]), [shape.id]);
       transient.setState({ inputError: null });
       return true;
     },

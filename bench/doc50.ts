@@ -17,5 +17,5 @@ export function fiftyShapeDocument(): SectionDocument {
   for (let k = 0; k < 9; k++) shapes.push({ id: `tube${k}`, type: 'round-tube', at: [k * 120 + 110, 60], outerDiameter: 40, wall: 4 });
   for (let k = 0; k < 10; k++) shapes.push({ id: `hole${k}`, type: 'circle', center: [k * 120 + 50, 100], radius: 2, op: 'subtract' });
   shapes.push({ id: 'angle', type: 'angle', at: [1230, 0], legVertical: 150, legHorizontal: 90, thickness: 10, rootRadius: 11 });
-  return { format: 'kern-section', version: 1, units: 'mm', name: 'Platform frame (benchmark)', shapes };
+  return { format: 'kern-section', version: 2, units: 'mm', name: 'Platform frame (benchmark)', shapes };
 }

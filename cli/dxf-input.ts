@@ -60,7 +60,7 @@ export function loadSectionFile(path: string, unitsFlag?: string): LoadedSection
   if (im.shapes.length === 0) {
     return { ok: false, messages: [`${basename(path)} contains no closed outline to use as a section`, ...warnings] };
   }
-  const doc: SectionDocument = { format: 'kern-section', version: 1, units: im.units, name: basename(path), shapes: im.shapes };
+  const doc: SectionDocument = { format: 'kern-section', version: 2, units: im.units, name: basename(path), shapes: im.shapes };
   const v = validateDocument(JSON.parse(JSON.stringify(doc)));
   if (!v.ok) return { ok: false, messages: v.errors.map(formatIssue) };
   return { ok: true, doc: v.doc, warnings: [...warnings, ...v.warnings.map(formatIssue)] };

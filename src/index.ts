@@ -2,6 +2,8 @@
 export * from './document/types';
 export { parseDocument, validateDocument, validateShape, formatIssue, type Issue, type DocResult } from './document/validate';
 export { convertDocumentUnits, unitFactor } from './document/units';
+export { serialiseDocumentText } from './document/serialise';
+export { sectionOf, withSectionShapes, addVariant, allShapeIds, variantNames, findVariant, variantShapes, newVariantName, VariantError } from './document/variants';
 export { DEMO_DOCUMENT } from './document/demo';
 export { SHAPE_KIND_LABEL } from './document/labels';
 export { SHAPE_KINDS, SHAPE_TYPES, kindOf, isShapeType } from './shapes/registry';

@@ -14,7 +14,7 @@ import { undo } from '../app/store/history';
 import { circleContour, polygonContour, type SectionDocument, type Shape } from '../src';
 
 const fixture = (name: string) => readFileSync(new URL(`../e2e/fixtures/${name}`, import.meta.url), 'utf8');
-const EMPTY: SectionDocument = { format: 'kern-section', version: 1, units: 'mm', shapes: [] };
+const EMPTY: SectionDocument = { format: 'kern-section', version: 2, units: 'mm', shapes: [] };
 const rect = (id: string, x: number, y: number, w: number, h: number): Shape => ({ id, type: 'rectangle', at: [x, y], width: w, height: h });
 const editorWith = (shapes: Shape[] = [], units: SectionDocument['units'] = 'mm') => createEditor({ ...EMPTY, units, shapes }, { worker: false });
 const area = (e: ReturnType<typeof editorWith>) => e.results.evaluate(e.store.getState().doc).props?.area ?? 0;

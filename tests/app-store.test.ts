@@ -12,7 +12,7 @@ import { beginGesture, commit, endGesture, previewGesture, cancelGesture, undo, 
 import { AUTOSAVE_KEY, REJECTED_KEY, installAutosave, restoreDocument } from '../app/persist';
 import { DEMO_DOCUMENT, type SectionDocument, type Shape } from '../src';
 
-const EMPTY: SectionDocument = { format: 'kern-section', version: 1, units: 'mm', shapes: [] };
+const EMPTY: SectionDocument = { format: 'kern-section', version: 2, units: 'mm', shapes: [] };
 
 function editorWith(shapes: Shape[] = [], units: SectionDocument['units'] = 'mm') {
   return createEditor({ ...EMPTY, units, shapes });

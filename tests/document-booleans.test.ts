@@ -8,7 +8,7 @@ import { close, worst } from './helpers';
 
 const PI = Math.PI;
 const TOL = 1e-9;
-const doc = (shapes: Shape[]): SectionDocument => ({ format: 'kern-section', version: 1, units: 'mm', shapes });
+const doc = (shapes: Shape[]): SectionDocument => ({ format: 'kern-section', version: 2, units: 'mm', shapes });
 const evalProps = (shapes: Shape[]) => {
   const ev = evaluateDocument(doc(shapes));
   if (!ev.props) throw new Error(ev.message ?? 'no properties');

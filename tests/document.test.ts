@@ -34,7 +34,7 @@ describe('validation', () => {
 
   it('refuses unknown formats, versions and units', () => {
     expect(errorsOf({ ...base, format: 'other', shapes: [] })[0]).toMatch(/^format: expected "kern-section"/);
-    expect(errorsOf({ ...base, version: 2, shapes: [] })[0]).toMatch(/^version: unknown version 2/);
+    expect(errorsOf({ ...base, version: 3, shapes: [] })[0]).toMatch(/^version: unknown version 3; this Kern reads versions 1, 2/);
     expect(errorsOf({ ...base, version: '1', shapes: [] })[0]).toMatch(/^version: unknown version "1"/);
     expect(errorsOf({ ...base, units: 'furlong', shapes: [] })[0]).toMatch(/^units: unknown units "furlong"/);
   });
@@ -76,7 +76,7 @@ describe('validation', () => {
       withShapes([
         { id: 'a', type: 'blob' },
         { id: 'b', type: 'circle', center: [0, 0], radius: 1, op: 'xor' },
-        { type: 'circle', center: [0, 0], radius: 1 },
+        { id: '', type: 'circle', center: [0, 0], radius: 1 },
         { id: 'b', type: 'circle', center: [0, 0], radius: 1 },
       ]),
     );

@@ -43,7 +43,7 @@ describe('incremental evaluation', () => {
       fc.property(fc.array(editArb, { minLength: 1, maxLength: 12 }), (edits) => {
         const ev = createEvaluator();
         let shapes = base;
-        const doc = (s: Shape[]): SectionDocument => ({ format: 'kern-section', version: 1, units: 'mm', shapes: s });
+        const doc = (s: Shape[]): SectionDocument => ({ format: 'kern-section', version: 2, units: 'mm', shapes: s });
         ev.evaluate(doc(shapes));
         for (const e of edits) {
           shapes = apply(shapes, e);
@@ -63,7 +63,7 @@ describe('incremental evaluation', () => {
 
   it('reuses unchanged work: the same document returns the same region object', () => {
     const ev = createEvaluator();
-    const d: SectionDocument = { format: 'kern-section', version: 1, units: 'mm', shapes: base };
+    const d: SectionDocument = { format: 'kern-section', version: 2, units: 'mm', shapes: base };
     const a = ev.evaluate(d);
     const b = ev.evaluate({ ...d, shapes: d.shapes.slice() });
     expect(b.region).toBe(a.region);

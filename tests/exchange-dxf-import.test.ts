@@ -25,7 +25,7 @@ function ok(r: ReturnType<typeof importDxf>): DxfImportOk {
 }
 
 function docOf(shapes: Shape[], units: Units = 'mm'): SectionDocument {
-  return { format: 'kern-section', version: 1, units, shapes };
+  return { format: 'kern-section', version: 2, units, shapes };
 }
 
 function evaluated(r: DxfImportOk) {

@@ -44,7 +44,7 @@ function agree(a: SectionProperties, b: SectionProperties, tol = 1e-9): void {
 }
 
 function doc(shapes: Shape[]): SectionDocument {
-  return { format: 'kern-section', version: 1, units: 'mm', shapes };
+  return { format: 'kern-section', version: 2, units: 'mm', shapes };
 }
 
 /** Export, import, and evaluate the imported shapes as a document (booleans included). */

@@ -82,7 +82,7 @@ describe('report contents', () => {
 
 describe('numbers against closed forms', () => {
   test('a 100 × 50 mm rectangle: A = bh, Ix = bh³/12, Iy = hb³/12 (Gere & Goodno App. E)', () => {
-    const doc: SectionDocument = { format: 'kern-section', version: 1, units: 'mm', shapes: [{ id: 'r', type: 'rectangle', at: [0, 0], width: 100, height: 50 }] };
+    const doc: SectionDocument = { format: 'kern-section', version: 2, units: 'mm', shapes: [{ id: 'r', type: 'rectangle', at: [0, 0], width: 100, height: 50 }] };
     const html = render(doc);
     expect(shownValue(html, 'area')).toBe(formatNumber(100 * 50));
     expect(shownValue(html, 'Ix')).toBe(formatNumber((100 * 50 ** 3) / 12));
@@ -94,7 +94,7 @@ describe('numbers against closed forms', () => {
   });
 
   test('Q/b at the neutral axis of a b × h rectangle: Q = bh²/8, Q/b = h²/8 (Gere & Goodno, shear formula)', () => {
-    const doc: SectionDocument = { format: 'kern-section', version: 1, units: 'mm', shapes: [{ id: 'r', type: 'rectangle', at: [0, 0], width: 100, height: 50 }] };
+    const doc: SectionDocument = { format: 'kern-section', version: 2, units: 'mm', shapes: [{ id: 'r', type: 'rectangle', at: [0, 0], width: 100, height: 50 }] };
     const html = render(doc, { axis: 'y', at: 25 });
     const cell = (label: string) => new RegExp(`<td>${label}</td><td class="num">([^<]*)</td>`).exec(html)?.[1];
     expect(cell('First moment Q of that area about the centroidal axis')).toBe(formatNumber((100 * 50 ** 2) / 8));
@@ -108,7 +108,7 @@ describe('escaping: document strings are text, never markup', () => {
     const evil = '<script>alert("x")</script>';
     const doc: SectionDocument = {
       format: 'kern-section',
-      version: 1,
+      version: 2,
       units: 'mm',
       name: evil,
       title: { project: '<img src=x onerror=alert(1)>', section: '"quoted" & <b>bold</b>', author: "O'Brien", checker: '</td></tr></table>', date: '2026', revision: '<!--' },
@@ -128,7 +128,7 @@ describe('escaping: document strings are text, never markup', () => {
   });
 
   test('an empty section renders a report with the message instead of numbers', () => {
-    const doc: SectionDocument = { format: 'kern-section', version: 1, units: 'mm', shapes: [] };
+    const doc: SectionDocument = { format: 'kern-section', version: 2, units: 'mm', shapes: [] };
     const html = render(doc);
     expect(html).toContain('Section properties');
     expect(html).not.toContain('data-prop=');
@@ -153,7 +153,7 @@ describe('report: area change per shape', () => {
     // circle, π·5²/2 (Gere & Goodno, plane areas, semicircle).
     const doc: SectionDocument = {
       format: 'kern-section',
-      version: 1,
+      version: 2,
       units: 'mm',
       shapes: [
         { id: 'p', type: 'rectangle', at: [0, 0], width: 100, height: 20 },

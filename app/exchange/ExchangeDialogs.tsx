@@ -12,6 +12,7 @@ import { defaultPxPerUnit, pngProblem, pngSize } from './exports';
 import { useExchange } from './hooks';
 import { exchangeStore, type PendingImport } from './state';
 import './exchange.css';
+import { activeShapes } from '../store/section';
 
 /** Keyboard: a dialog takes the focus when it opens, and Escape closes it. */
 const focusIn = (...selectors: string[]) => (el: HTMLElement | null) => {
@@ -138,7 +139,7 @@ function ReviewDialog({ p }: { p: Extract<PendingImport, { stage: 'review' }> })
   const [mode, setMode] = useState<'add' | 'subtract'>('add');
   const holes = p.shapes.filter((s) => s.op === 'subtract').length;
   const outlines = p.shapes.length - holes;
-  const hasSection = useEditorState((s) => s.doc.shapes.length > 0);
+  const hasSection = useEditorState((s) => activeShapes(s.doc).length > 0);
   const unitsLine =
     p.sourceUnits === p.targetUnits
       ? `Read in ${p.sourceUnits}${p.unitsFromFile ? ' (as the file states)' : ' (as you chose)'}.`

@@ -4,17 +4,18 @@
  * outlines to the document as ONE undoable step, either added to the section or cut out of it.
  * A file that cannot be read changes nothing.
  */
-import { regionBounds, regionToPaths, unionBounds, UNITS, type Bounds, type Region, type SectionDocument, type Shape, type Units } from '../../src';
+import { allShapeIds, regionBounds, regionToPaths, unionBounds, UNITS, type Bounds, type Region, type SectionDocument, type Shape, type Units } from '../../src';
 import { importDxf } from '../../src/exchange';
 import type { CommandContext } from '../commands/registry';
 import { fitView } from '../ops/view';
 import { commit } from '../store/history';
 import { evaluationBounds, fitBounds } from '../view';
 import { exchangeStore, type PendingImport } from './state';
+import { activeSection, activeShapes, withActiveShapes } from '../store/section';
 
 /** A shape-id prefix no shape of the document uses yet: 'dxf', 'dxf2', 'dxf3', ... */
 export function uniqueIdPrefix(doc: SectionDocument): string {
-  const ids = doc.shapes.map((s) => s.id);
+  const ids = [...allShapeIds(doc)];
   for (let k = 1; ; k++) {
     const p = k === 1 ? 'dxf' : `dxf${k}`;
     if (!ids.some((id) => id === p || id.startsWith(`${p}-`))) return p;
@@ -79,7 +80,9 @@ function showAll(ctx: CommandContext, region: Region, points: [number, number][]
 export function shapesToAppend(ctx: CommandContext, doc: SectionDocument, imported: Shape[], mode: 'add' | 'subtract'): Shape[] {
   if (mode === 'add') return imported;
   const out: Shape[] = [];
-  let working: SectionDocument = { ...doc, shapes: [...doc.shapes, ...imported] };
+  const section = activeSection(doc);
+  const used = allShapeIds(doc);
+  for (const s of imported) used.add(s.id);
   for (const sh of imported) {
     const hole = sh.op === 'subtract';
     if (!hole) {
@@ -87,10 +90,10 @@ export function shapesToAppend(ctx: CommandContext, doc: SectionDocument, import
       continue;
     }
     // The section as it was, inside this hole of the imported outline.
-    const kept = ctx.evaluate({ ...doc, shapes: [...doc.shapes, { ...sh, op: 'intersect' }] }).region;
+    const kept = ctx.evaluate({ ...section, shapes: [...section.shapes, { ...sh, op: 'intersect' }] }).region;
     if (kept.length === 0) continue;
-    const paths = regionToPaths(kept, working).map((p, i) => ({ ...p, name: `Section kept inside ${sh.name ?? sh.id}${i ? ` (${i + 1})` : ''}` }));
-    working = { ...working, shapes: [...working.shapes, ...paths] };
+    const paths = regionToPaths(kept, used).map((p, i) => ({ ...p, name: `Section kept inside ${sh.name ?? sh.id}${i ? ` (${i + 1})` : ''}` }));
+    for (const p of paths) used.add(p.id);
     out.push(...paths);
   }
   return out;
@@ -109,7 +112,7 @@ export function applyImport(ctx: CommandContext, mode: 'add' | 'subtract'): bool
     return false;
   }
   const added = shapesToAppend(ctx, doc, p.shapes, mode);
-  commit(ctx.store, { ...doc, shapes: [...doc.shapes, ...added] }, added.map((s) => s.id));
+  commit(ctx.store, withActiveShapes(doc, [...activeShapes(doc), ...added]), added.map((s) => s.id));
   ex.setState({ pending: null });
   // Show the section with the marks of what was left out.
   if (p.problems.length) showAll(ctx, [], p.problems.flatMap((pr) => pr.points));

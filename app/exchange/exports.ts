@@ -3,10 +3,10 @@
  * with arc segments), PNG at a chosen resolution, and the section document JSON. Each file is
  * handed to the browser as a Blob download.
  */
-import { regionBounds, type Region, type SectionDocument, type Units } from '../../src';
+import { regionBounds, serialiseDocumentText, type Region, type SectionDocument, type Units } from '../../src';
 import { exportDxf, exportSvg } from '../../src/exchange';
 import type { CommandContext } from '../commands/registry';
-import { documentFileName, serialiseDocument } from '../ops/document';
+import { documentFileName } from '../ops/document';
 import { traceRegion } from '../paint/trace';
 
 /** Largest PNG side and pixel count we offer (common practice, no source: browsers refuse far larger canvases). */
@@ -63,7 +63,7 @@ export function exportDxfFile(ctx: CommandContext): boolean {
 
 export function exportJsonFile(ctx: CommandContext): void {
   const doc = ctx.store.getState().doc;
-  downloadBlob(documentFileName(doc), new Blob([serialiseDocument(doc)], { type: 'application/json' }));
+  downloadBlob(documentFileName(doc), new Blob([serialiseDocumentText(doc)], { type: 'application/json' }));
 }
 
 /** Pixel size of the PNG at `pxPerUnit`, with a margin of 4 % of the larger extent. */

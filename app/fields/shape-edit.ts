@@ -7,6 +7,7 @@ import { useState } from 'react';
 import { formatIssue, shapeToRegion, validateShape, type PointEdit, type Shape } from '../../src';
 import { useEditor, useEditorState } from '../context';
 import { commit } from '../store/history';
+import { activeShapes, withActiveShapes } from '../store/section';
 
 export type ApplyEdit = (id: string, make: (s: Shape, at: string) => Shape | string) => string | null;
 
@@ -18,12 +19,13 @@ export function useApply(): ApplyEdit {
   const editor = useEditor();
   return (id, make) => {
     const s = editor.store.getState();
-    const idx = s.doc.shapes.findIndex((x) => x.id === id);
+    const shapes = activeShapes(s.doc);
+    const idx = shapes.findIndex((x) => x.id === id);
     if (idx < 0) return 'The shape no longer exists.';
-    const cand = make(s.doc.shapes[idx], `shapes[${idx}]`);
+    const cand = make(shapes[idx], `shapes[${idx}]`);
     if (typeof cand === 'string') return cand;
     // Enter then blur applies the same value twice: an edit that changes nothing records nothing.
-    if (JSON.stringify(cand) === JSON.stringify(s.doc.shapes[idx])) return null;
+    if (JSON.stringify(cand) === JSON.stringify(shapes[idx])) return null;
     const issues = validateShape(cand, `shapes[${idx}]`);
     if (issues.length) return issues.map(formatIssue).join('; ');
     try {
@@ -31,7 +33,7 @@ export function useApply(): ApplyEdit {
     } catch (e) {
       return `This value gives no valid outline: ${(e as Error).message}`;
     }
-    commit(editor.store, { ...s.doc, shapes: s.doc.shapes.map((x, i) => (i === idx ? cand : x)) });
+    commit(editor.store, withActiveShapes(s.doc, shapes.map((x, i) => (i === idx ? cand : x))));
     return null;
   };
 }

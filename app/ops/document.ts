@@ -2,7 +2,7 @@
  * Whole-document operations: open from text (a file that fails validation changes nothing),
  * the file name and the text a save writes, a new empty section, the demo, and the units.
  */
-import { convertDocumentUnits, DEMO_DOCUMENT, formatIssue, parseDocument, UNITS, type SectionDocument, type Units } from '../../src';
+import { convertDocumentUnits, DEMO_DOCUMENT, serialiseDocumentText, formatIssue, parseDocument, UNITS, type SectionDocument, type Units } from '../../src';
 import type { CommandContext } from '../commands/registry';
 import { commit } from '../store/history';
 import { notify } from './notice';
@@ -27,17 +27,13 @@ export function documentFileName(doc: SectionDocument): string {
   return `${base}.json`;
 }
 
-export function serialiseDocument(doc: SectionDocument): string {
-  return JSON.stringify(doc, null, 2) + '\n';
-}
-
 export function saveDocument(ctx: CommandContext): void {
   const doc = ctx.store.getState().doc;
-  ctx.io?.download(documentFileName(doc), serialiseDocument(doc));
+  ctx.io?.download(documentFileName(doc), serialiseDocumentText(doc));
 }
 
 export function newDocument(ctx: CommandContext): void {
-  commit(ctx.store, { format: 'kern-section', version: 1, units: ctx.store.getState().doc.units, shapes: [] }, []);
+  commit(ctx.store, { format: 'kern-section', version: 2, units: ctx.store.getState().doc.units, shapes: [] }, []);
 }
 
 export function loadDemo(ctx: CommandContext): void {

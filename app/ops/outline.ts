@@ -3,30 +3,31 @@
  * result, or convert a parametric profile into paths. Both keep arcs exact (engine geometry)
  * and record one undo step; a conversion that would change the section is refused.
  */
-import { isProfile, profileToOutline, regionToPaths, type Shape } from '../../src';
+import { allShapeIds, isProfile, profileToOutline, regionToPaths, type Shape } from '../../src';
 import type { CommandContext } from '../commands/registry';
 import { commit } from '../store/history';
 import { notify } from './notice';
+import { activeSection, activeShapes, withActiveShapes } from '../store/section';
 
 /** Bake the selected shapes into path shapes from their boolean result (arcs preserved). */
 export function mergeSelection(ctx: CommandContext): void {
   const s = ctx.store.getState();
   const sel = new Set(s.selected);
-  const picked = s.doc.shapes.filter((sh) => sel.has(sh.id));
+  const current = activeShapes(s.doc);
+  const picked = current.filter((sh) => sel.has(sh.id));
   if (picked.length === 0) return;
-  const ev = ctx.evaluate({ ...s.doc, shapes: picked });
+  const ev = ctx.evaluate({ ...activeSection(s.doc), shapes: picked });
   if (ev.region.length === 0) {
     notify(ctx, 'error', 'Nothing to merge: the selected shapes combine to an empty section.', ['The section is unchanged.']);
     return;
   }
-  const rest = { ...s.doc, shapes: s.doc.shapes.filter((sh) => !sel.has(sh.id)) };
-  const paths = regionToPaths(ev.region, rest);
-  const first = s.doc.shapes.findIndex((sh) => sel.has(sh.id));
-  const before = s.doc.shapes.slice(0, first).filter((sh) => !sel.has(sh.id));
-  const after = s.doc.shapes.slice(first).filter((sh) => !sel.has(sh.id));
+  const paths = regionToPaths(ev.region, allShapeIds(s.doc));
+  const first = current.findIndex((sh) => sel.has(sh.id));
+  const before = current.slice(0, first).filter((sh) => !sel.has(sh.id));
+  const after = current.slice(first).filter((sh) => !sel.has(sh.id));
   const firstName = picked.length === 1 ? picked[0].name : undefined;
   const named = paths.map((p, i) => (i === 0 ? { ...p, name: firstName ?? 'Merged outline' } : p));
-  commit(ctx.store, { ...s.doc, shapes: [...before, ...named, ...after] }, named.map((p) => p.id));
+  commit(ctx.store, withActiveShapes(s.doc, [...before, ...named, ...after]), named.map((p) => p.id));
 }
 
 export function convertSelectionToOutline(ctx: CommandContext): void {
@@ -34,9 +35,9 @@ export function convertSelectionToOutline(ctx: CommandContext): void {
   const sel = new Set(s.selected);
   const out: Shape[] = [];
   const newSel: string[] = [];
-  let working = s.doc;
+  const used = allShapeIds(s.doc);
   let changed = false;
-  for (const sh of s.doc.shapes) {
+  for (const sh of activeShapes(s.doc)) {
     if (!sel.has(sh.id) || !isProfile(sh)) {
       out.push(sh);
       if (sel.has(sh.id)) newSel.push(sh.id);
@@ -44,7 +45,7 @@ export function convertSelectionToOutline(ctx: CommandContext): void {
     }
     let r;
     try {
-      r = profileToOutline(sh, working);
+      r = profileToOutline(sh, used);
     } catch (e) {
       notify(ctx, 'error', 'This profile cannot be converted.', [(e as Error).message, 'The section is unchanged.']);
       return;
@@ -55,8 +56,8 @@ export function convertSelectionToOutline(ctx: CommandContext): void {
     }
     out.push(...r.shapes);
     newSel.push(...r.shapes.map((x) => x.id));
-    working = { ...working, shapes: [...working.shapes, ...r.shapes.slice(1)] };
+    for (const x of r.shapes) used.add(x.id);
     changed = true;
   }
-  if (changed) commit(ctx.store, { ...s.doc, shapes: out }, newSel);
+  if (changed) commit(ctx.store, withActiveShapes(s.doc, out), newSel);
 }

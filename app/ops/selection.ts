@@ -3,16 +3,17 @@
  * duplicate, delete, reorder and the boolean operation. Moves and turns come from the engine's
  * shape operations, so a shape kind needs nothing here.
  */
-import { mirrorShape, newShapeId, regionsBounds, rotateShape, translateShape, type Bounds, type Op, type Shape, type Units } from '../../src';
+import { allShapeIds, mirrorShape, newShapeId, regionsBounds, rotateShape, translateShape, type Bounds, type Op, type Shape, type Units } from '../../src';
 import type { CommandContext } from '../commands/registry';
 import { commit } from '../store/history';
 import type { EditorState } from '../store/store';
+import { activeShapes, withActiveShapes } from '../store/section';
 
 export const hasSelection = (ctx: CommandContext): boolean => ctx.store.getState().selected.length > 0;
 
 export function selectedShapes(s: EditorState): Shape[] {
   const sel = new Set(s.selected);
-  return s.doc.shapes.filter((sh) => sel.has(sh.id));
+  return activeShapes(s.doc).filter((sh) => sel.has(sh.id));
 }
 
 /** Replace the selected shapes by `f(shape)` in one undoable step. */
@@ -21,13 +22,13 @@ export function mapSelected(ctx: CommandContext, f: (s: Shape) => Shape): void {
   const sel = new Set(s.selected);
   if (!sel.size) return;
   let changed = false;
-  const shapes = s.doc.shapes.map((sh) => {
+  const shapes = activeShapes(s.doc).map((sh) => {
     if (!sel.has(sh.id)) return sh;
     const n = f(sh);
     if (n !== sh) changed = true;
     return n;
   });
-  if (changed) commit(ctx.store, { ...s.doc, shapes });
+  if (changed) commit(ctx.store, withActiveShapes(s.doc, shapes));
 }
 
 /** Bounds of the selected shapes' own outlines. */
@@ -78,7 +79,7 @@ export function mirrorSelection(ctx: CommandContext, axis: 'vertical' | 'horizon
 export function deleteSelection(ctx: CommandContext): void {
   const s = ctx.store.getState();
   const sel = new Set(s.selected);
-  commit(ctx.store, { ...s.doc, shapes: s.doc.shapes.filter((sh) => !sel.has(sh.id)) }, []);
+  commit(ctx.store, withActiveShapes(s.doc, activeShapes(s.doc).filter((sh) => !sel.has(sh.id))), []);
 }
 
 /** Copies of the selected shapes, a little down and to the right, selected. */
@@ -87,17 +88,17 @@ export function duplicateSelection(ctx: CommandContext): void {
   const sel = new Set(s.selected);
   if (!sel.size) return;
   const step = nudgeStep(s.doc.units) * 10;
-  const taken = new Set<string>();
+  const taken = allShapeIds(s.doc);
   const copies: Shape[] = [];
-  for (const sh of s.doc.shapes) {
+  for (const sh of activeShapes(s.doc)) {
     if (!sel.has(sh.id)) continue;
-    const id = newShapeId(s.doc, taken);
+    const id = newShapeId(taken);
     taken.add(id);
     const c = translateShape({ ...sh, id, name: sh.name ? `${sh.name} (copy)` : undefined }, step, -step);
     if (c.name === undefined) delete (c as { name?: string }).name;
     copies.push(c);
   }
-  commit(ctx.store, { ...s.doc, shapes: [...s.doc.shapes, ...copies] }, copies.map((c) => c.id));
+  commit(ctx.store, withActiveShapes(s.doc, [...activeShapes(s.doc), ...copies]), copies.map((c) => c.id));
 }
 
 export function setSelectionOp(ctx: CommandContext, op: Op): void {
@@ -109,13 +110,14 @@ export function reorderSelection(ctx: CommandContext, dir: 'forward' | 'backward
   const s = ctx.store.getState();
   const sel = new Set(s.selected);
   if (!sel.size) return;
-  const shapes = s.doc.shapes.slice();
+  const current = activeShapes(s.doc);
+  const shapes = current.slice();
   if (dir === 'front' || dir === 'back') {
     const picked = shapes.filter((sh) => sel.has(sh.id));
     const rest = shapes.filter((sh) => !sel.has(sh.id));
     const next = dir === 'front' ? [...rest, ...picked] : [...picked, ...rest];
-    if (next.every((sh, i) => sh === s.doc.shapes[i])) return;
-    commit(ctx.store, { ...s.doc, shapes: next });
+    if (next.every((sh, i) => sh === current[i])) return;
+    commit(ctx.store, withActiveShapes(s.doc, next));
     return;
   }
   let moved = false;
@@ -134,5 +136,5 @@ export function reorderSelection(ctx: CommandContext, dir: 'forward' | 'backward
       }
     }
   }
-  if (moved) commit(ctx.store, { ...s.doc, shapes });
+  if (moved) commit(ctx.store, withActiveShapes(s.doc, shapes));
 }

@@ -4,6 +4,7 @@
  */
 import { CAUTION_TEXT, formatIssue, formatProperty, PROPERTY_CATALOG, UNITS, type PropertyInfo, type Units } from '../../src';
 import { useEditor, useEditorState, useResults } from '../context';
+import { activeSection } from '../store/section';
 
 const GROUPS = [...new Set(PROPERTY_CATALOG.map((p) => p.group))];
 
@@ -46,7 +47,7 @@ export function UnitSwitch() {
 
 /** Shown while the results trail the document (during a drag the engine runs beside the pointer). */
 function Pending() {
-  const docNow = useEditorState((s) => s.doc);
+  const docNow = useEditorState((s) => activeSection(s.doc));
   const docShown = useResults((r) => r.doc);
   return (
     <span className={`pending${docNow === docShown ? '' : ' on'}`} data-testid="results-pending" aria-live="off">

@@ -10,6 +10,7 @@ import { evaluateExpression } from '../expr';
 import { CommandButton } from '../fields/CommandButton';
 import { useApply } from '../fields/shape-edit';
 import { ShapeFields } from '../shapes';
+import { activeSection } from '../store/section';
 
 const OP_LABEL: Record<Op, string> = { add: 'Add', subtract: 'Subtract', intersect: 'Intersect' };
 
@@ -39,7 +40,7 @@ function RotateBox() {
 export function SelectionPanel() {
   const editor = useEditor();
   const selected = useEditorState((s) => s.selected);
-  const doc = useEditorState((s) => s.doc);
+  const doc = useEditorState((s) => activeSection(s.doc));
   const apply = useApply();
   const shapes = doc.shapes.filter((s) => selected.includes(s.id));
   if (shapes.length === 0) {

@@ -2,6 +2,7 @@
 import { memo } from 'react';
 import { shapeDisplayName, type Shape } from '../../src';
 import { useEditor, useEditorState, useResults } from '../context';
+import { activeShapes } from '../store/section';
 
 const MARK = { add: '+', subtract: '−', intersect: '∩' } as const;
 
@@ -30,7 +31,7 @@ const ShapeRow = memo(function ShapeRow({ s, i, on, error }: { s: Shape; i: numb
 });
 
 export function ShapeList() {
-  const shapes = useEditorState((s) => s.doc.shapes);
+  const shapes = useEditorState((s) => activeShapes(s.doc));
   const selected = useEditorState((s) => s.selected);
   // A string key: the list re-renders only when the set of failing shapes changes.
   const errorKey = useResults((r) => JSON.stringify(r.evaluation.shapes.filter((s) => s.error).map((s) => [s.id, s.error])));

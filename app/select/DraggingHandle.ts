@@ -4,6 +4,7 @@ import { cancelGesture, endGesture, previewGesture } from '../store/history';
 import { moveHandle, type HandleRef } from '../shapes';
 import type { PointerInfo, ToolEnv } from '../tools/types';
 import { IDLE, type Next, type SelectState } from './state';
+import { activeShapes, withActiveShapes } from '../store/section';
 
 export class DraggingHandle implements SelectState {
   readonly name = 'draggingHandle';
@@ -14,14 +15,15 @@ export class DraggingHandle implements SelectState {
   ) {}
   move(env: ToolEnv, e: PointerInfo): Next {
     const p = env.snap(e.raw, { exclude: new Set([this.id]) }).p;
-    const shapes = this.base.shapes.map((sh) => (sh.id === this.id ? moveHandle(sh, this.ref, p) : sh));
-    previewGesture(env.store, { ...this.base, shapes });
+    const shapes = activeShapes(this.base).map((sh) => (sh.id === this.id ? moveHandle(sh, this.ref, p) : sh));
+    previewGesture(env.store, withActiveShapes(this.base, shapes));
     return this;
   }
   up(env: ToolEnv): Next {
     const s = env.store.getState();
-    const idx = s.doc.shapes.findIndex((x) => x.id === this.id);
-    const issues = idx >= 0 ? validateShape(s.doc.shapes[idx], `shapes[${idx}]`) : [];
+    const shapes = activeShapes(s.doc);
+    const idx = shapes.findIndex((x) => x.id === this.id);
+    const issues = idx >= 0 ? validateShape(shapes[idx], `shapes[${idx}]`) : [];
     if (issues.length) {
       // A point that makes the shape invalid is not applied: the shape goes back.
       cancelGesture(env.store);

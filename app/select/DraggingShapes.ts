@@ -10,6 +10,7 @@ import { cancelGesture, endGesture, previewGesture } from '../store/history';
 import { gridStep } from '../view';
 import type { PointerInfo, ToolEnv } from '../tools/types';
 import { IDLE, type Next, type SelectState } from './state';
+import { activeShapes, withActiveShapes } from '../store/section';
 
 export class DraggingShapes implements SelectState {
   readonly name = 'draggingShapes';
@@ -75,8 +76,8 @@ export class DraggingShapes implements SelectState {
         else dx = 0;
       }
     }
-    const shapes = this.base.shapes.map((sh) => (this.ids.has(sh.id) ? translateShape(sh, dx, dy) : sh));
-    previewGesture(env.store, { ...this.base, shapes });
+    const shapes = activeShapes(this.base).map((sh) => (this.ids.has(sh.id) ? translateShape(sh, dx, dy) : sh));
+    previewGesture(env.store, withActiveShapes(this.base, shapes));
     return this;
   }
   up(env: ToolEnv): Next {

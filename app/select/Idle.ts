@@ -9,12 +9,13 @@ import { DraggingHandle } from './DraggingHandle';
 import { DraggingCut, nearCutLine } from './DraggingCut';
 import { PressingShape } from './PressingShape';
 import { HANDLE_PX, type Next, type SelectState } from './state';
+import { activeShapes } from '../store/section';
 
 /** Index of the handle of the single selected shape under (sx, sy), or -1. */
 export function handleUnder(env: ToolEnv, sx: number, sy: number): number {
   const s = env.store.getState();
   if (s.selected.length !== 1) return -1;
-  const shape = s.doc.shapes.find((x) => x.id === s.selected[0]);
+  const shape = activeShapes(s.doc).find((x) => x.id === s.selected[0]);
   if (!shape) return -1;
   let best = -1, bd = HANDLE_PX;
   shapeHandles(shape).forEach((h, i) => {
@@ -35,7 +36,7 @@ export class Idle implements SelectState {
     if (nearCutLine(s, e.sx, e.sy)) return new DraggingCut();
     const h = handleUnder(env, e.sx, e.sy);
     if (h >= 0) {
-      const shape = s.doc.shapes.find((x) => x.id === s.selected[0])!;
+      const shape = activeShapes(s.doc).find((x) => x.id === s.selected[0])!;
       beginGesture(env.store);
       return new DraggingHandle(shape.id, shapeHandles(shape)[h].ref, s.doc);
     }

@@ -10,6 +10,7 @@ import type { PointInput } from '../expr';
 import type { PointerInfo, Tool, ToolEnv } from '../tools/types';
 import { Idle } from './Idle';
 import type { SelectState } from './state';
+import { activeShapes, withActiveShapes } from '../store/section';
 
 export { handleUnder } from './Idle';
 
@@ -55,9 +56,9 @@ export class SelectTool implements Tool {
       [dx, dy] = [input.length * Math.cos(t), input.length * Math.sin(t)];
     } else return 'Type a move as "@dx, dy" or "length<angle".';
     const sel = new Set(s.selected);
-    const shapes = s.doc.shapes.map((sh) => (sel.has(sh.id) ? translateShape(sh, dx, dy) : sh));
+    const shapes = activeShapes(s.doc).map((sh) => (sel.has(sh.id) ? translateShape(sh, dx, dy) : sh));
     beginGesture(env.store);
-    previewGesture(env.store, { ...s.doc, shapes });
+    previewGesture(env.store, withActiveShapes(s.doc, shapes));
     endGesture(env.store);
     return null;
   }

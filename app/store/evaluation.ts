@@ -11,11 +11,12 @@
  */
 import { createStore, type StoreApi } from 'zustand/vanilla';
 import { createEvaluator, type Evaluation, type SectionDocument, type Shape, type ShapeResult } from '../../src';
+import { activeSection } from './section';
 import type { EditorStore } from './store';
 import type { WorkerRequest, WorkerResponse } from './workerProtocol';
 
 export interface LiveResults {
-  /** The document the evaluation belongs to (may trail the store's document during a drag). */
+  /** The section the evaluation belongs to: the store's active section (it may trail a drag). */
   doc: SectionDocument;
   evaluation: Evaluation;
   /** Milliseconds the last evaluation took. */
@@ -26,9 +27,9 @@ export interface LiveResults {
 
 export interface ResultsHandle {
   results: StoreApi<LiveResults>;
-  /** Full evaluation of a document now (the current one costs nothing once evaluated). */
+  /** Full evaluation of a document's active section now (the current one costs nothing once evaluated). */
   evaluate(doc: SectionDocument): Evaluation;
-  /** Each shape's own outline, cached by shape identity; the same array for the same document. */
+  /** Each shape's own outline in a document's active section, cached by shape identity; the same array for the same document. */
   shapesOf(doc: SectionDocument): ShapeResult[];
   /** True when the shown results belong to the store's current document. */
   idle(): boolean;
@@ -48,7 +49,9 @@ const now = () => (typeof performance !== 'undefined' ? performance.now() : Date
 export function createLiveResults(store: EditorStore, opts: { schedule?: Schedule; worker?: boolean } = {}): ResultsHandle {
   const schedule = opts.schedule ?? defaultSchedule;
   const evaluator = createEvaluator();
-  const shapesOf = (doc: SectionDocument): ShapeResult[] => evaluator.shapes(doc);
+  const shapesOf = (doc: SectionDocument): ShapeResult[] => evaluator.shapes(activeSection(doc));
+  /** The section the store shows now. */
+  const current = () => activeSection(store.getState().doc);
 
   let syncDoc: SectionDocument | null = null;
   let syncEval: Evaluation | null = null;
@@ -60,12 +63,13 @@ export function createLiveResults(store: EditorStore, opts: { schedule?: Schedul
     return syncEval;
   };
 
-  const first = store.getState().doc;
+  const first = current();
   const t0 = now();
   const results = createStore<LiveResults>()(() => ({ doc: first, evaluation: evaluateSync(first), lastMs: now() - t0, count: 1 }));
   const evaluate = (doc: SectionDocument): Evaluation => {
     const r = results.getState();
-    return r.doc === doc ? r.evaluation : evaluateSync(doc);
+    const section = activeSection(doc);
+    return r.doc === section ? r.evaluation : evaluateSync(section);
   };
 
   const useWorker = opts.worker !== false && typeof Worker === 'function' && typeof window !== 'undefined';
@@ -81,7 +85,7 @@ export function createLiveResults(store: EditorStore, opts: { schedule?: Schedul
   let pending = false;
   const syncRun = () => {
     pending = false;
-    const doc = store.getState().doc;
+    const doc = current();
     if (doc === results.getState().doc) return;
     const t = now();
     const evaluation = evaluateSync(doc);
@@ -113,8 +117,9 @@ export function createLiveResults(store: EditorStore, opts: { schedule?: Schedul
         }
       }
       for (const id of [...sent.keys()]) if (!ids.has(id)) sent.delete(id);
-      const { shapes: _shapes, ...meta } = doc;
-      void _shapes;
+      // Proposals stay on this side: the worker evaluates one section.
+      const { shapes: _shapes, variants: _variants, activeVariant: _active, ...meta } = doc;
+      void [_shapes, _variants, _active];
       const req: WorkerRequest = { seq: ++seq, meta, order: doc.shapes.map((s) => s.id), changed };
       inFlight = { seq: req.seq, doc };
       w.postMessage(req);
@@ -132,14 +137,14 @@ export function createLiveResults(store: EditorStore, opts: { schedule?: Schedul
       else evaluation = evaluateSync(job.doc); // the worker failed: fall back on the main thread
       results.setState({ doc: job.doc, evaluation, lastMs: res.ms, count: results.getState().count + 1 });
       inFlight = null;
-      if (store.getState().doc === job.doc) return;
+      if (current() === job.doc) return;
       // The document moved on meanwhile (a drag). Leave the processor to the pointer for
       // DUTY_GAP times as long as the engine just took, then evaluate the latest document:
       // on a small machine a worker that never rests would starve the frames.
       inFlight = PAUSE;
       setTimeout(() => {
         inFlight = null;
-        if (!dead && store.getState().doc !== results.getState().doc) send(store.getState().doc);
+        if (!dead && current() !== results.getState().doc) send(current());
       }, Math.min(res.ms, 100) * DUTY_GAP);
     };
     w.onerror = () => {
@@ -150,9 +155,9 @@ export function createLiveResults(store: EditorStore, opts: { schedule?: Schedul
       scheduleSync();
     };
     const unsub = store.subscribe((s, prev) => {
-      if (s.doc === prev.doc) return;
+      if (activeSection(s.doc) === activeSection(prev.doc)) return;
       if (dead) scheduleSync();
-      else if (!inFlight) send(s.doc);
+      else if (!inFlight) send(activeSection(s.doc));
       // else: the answer (or the end of the pause) sends the latest document.
     });
     dispose = () => {
@@ -161,7 +166,7 @@ export function createLiveResults(store: EditorStore, opts: { schedule?: Schedul
     };
   } else {
     dispose = store.subscribe((s, prev) => {
-      if (s.doc !== prev.doc) scheduleSync();
+      if (activeSection(s.doc) !== activeSection(prev.doc)) scheduleSync();
     });
   }
 
@@ -169,7 +174,7 @@ export function createLiveResults(store: EditorStore, opts: { schedule?: Schedul
     results,
     evaluate,
     shapesOf,
-    idle: () => results.getState().doc === store.getState().doc,
+    idle: () => results.getState().doc === current(),
     dispose,
   };
 }

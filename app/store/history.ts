@@ -7,9 +7,10 @@
  */
 import type { SectionDocument } from '../../src';
 import { HISTORY_LIMIT, type EditorState, type EditorStore } from './store';
+import { activeShapes } from './section';
 
 function keepSelection(s: EditorState, doc: SectionDocument, selected?: string[]): string[] {
-  const ids = new Set(doc.shapes.map((sh) => sh.id));
+  const ids = new Set(activeShapes(doc).map((sh) => sh.id));
   return (selected ?? s.selected).filter((id) => ids.has(id));
 }
 

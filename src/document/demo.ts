@@ -7,7 +7,7 @@ import type { SectionDocument } from './types';
 
 export const DEMO_DOCUMENT: SectionDocument = {
   format: 'kern-section',
-  version: 1,
+  version: 2,
   units: 'mm',
   name: 'Canopy edge beam at conduit opening',
   title: {

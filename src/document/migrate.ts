@@ -1,14 +1,17 @@
 /**
  * Migrations between section-document versions. Each entry upgrades a document of version v to
- * v + 1; `migrate` applies them in order until the current version. Version 1 is the first, so
- * there is nothing to upgrade yet; a future version 2 adds `1: (doc) => ...` here and a test in
- * tests/document.test.ts that a saved version-1 file still opens.
+ * v + 1; `migrate` applies them in order until the current version (tests/document.test.ts
+ * checks that saved files of every older version still open).
  */
 import { CURRENT_VERSION } from './types';
 
 type Migration = (doc: Record<string, unknown>) => Record<string, unknown>;
 
-const MIGRATIONS: Record<number, Migration> = {};
+const MIGRATIONS: Record<number, Migration> = {
+  // Version 2 only adds optional fields (variants, limits, materials, loads, checker fields):
+  // a version-1 document is a version-2 document with only a baseline.
+  1: (doc) => ({ ...doc }),
+};
 
 export const KNOWN_VERSIONS: number[] = Array.from({ length: CURRENT_VERSION }, (_, k) => k + 1);
 

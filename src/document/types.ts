@@ -1,9 +1,11 @@
 /**
- * Section document, version 1: the JSON a user saves and other tools write.
- * Fixed fields are those of the published format; optional ones are Kern's additions.
+ * Section document, version 2: the JSON a user saves and other tools write (version 1 files are
+ * read and migrated). Version 2 adds only optional fields to version 1: proposals (variants) and
+ * their limits, materials and loads, and the checker's fields. A shape's id may be left out of a
+ * file written by hand; it is assigned when the file is read and kept on save.
  */
 export const FORMAT = 'kern-section';
-export const CURRENT_VERSION = 1;
+export const CURRENT_VERSION = 2;
 
 export const UNITS = ['mm', 'cm', 'm', 'in', 'ft'] as const;
 export type Units = (typeof UNITS)[number];
@@ -38,12 +40,88 @@ export interface TitleBlock {
   revision?: string;
 }
 
+/** One line of the revision history, as a checker reads it. */
+export interface Revision {
+  revision: string;
+  date: string;
+  description: string;
+  by: string;
+}
+
+/**
+ * A proposal: a named variant of the section. Its `shapes` list is the whole section in order;
+ * a string names a baseline shape (unchanged, by its id), an object is a new shape or an edited
+ * copy of a baseline shape (same id). A baseline shape the list does not mention is removed.
+ */
+export interface Variant {
+  name: string;
+  shapes: (string | Shape)[];
+  /** Optional: what the proposal is (a fabricator's request, a cope, extra holes). */
+  note?: string;
+}
+
+/**
+ * An allowed change from the baseline to a proposal. `property` is a property key (as in
+ * `props --json`), or `centroid` (with `maxShift`, a length) or `principalAxes` (with
+ * `maxRotation`, degrees). Percent limits are of the baseline value.
+ */
+export interface Limit {
+  property: string;
+  maxLossPercent?: number;
+  maxGainPercent?: number;
+  maxShift?: number;
+  maxRotation?: number;
+}
+
+/** A material: E and fy in the document's stress unit, density in kg/m³. */
+export interface Material {
+  id: string;
+  name: string;
+  E: number;
+  density: number;
+  fy: number;
+  /** Poisson's ratio (for the shear modulus in torsion); 0.3 when absent. */
+  nu?: number;
+}
+
+/** Loads on the section: N (+ tension) in the force unit, moments in force × document length. */
+export interface Loads {
+  N?: number;
+  Mx?: number;
+  My?: number;
+  /** Shear force at the current cut. */
+  V?: number;
+}
+
+export const STRESS_UNITS = ['MPa', 'kPa', 'Pa', 'psi', 'ksi'] as const;
+export type StressUnit = (typeof STRESS_UNITS)[number];
+export const FORCE_UNITS = ['N', 'kN', 'lbf', 'kip'] as const;
+export type ForceUnit = (typeof FORCE_UNITS)[number];
+
 export interface SectionDocument {
   format: typeof FORMAT;
-  version: 1;
+  version: typeof CURRENT_VERSION;
   units: Units;
+  /** The baseline section: shapes applied in order to an empty region. */
   shapes: Shape[];
   /** Optional: the section's name and the report's title block. */
   name?: string;
   title?: TitleBlock;
+  /** Proposals to compare with the baseline, and the one being edited (none: the baseline). */
+  variants?: Variant[];
+  activeVariant?: string;
+  /** Allowed changes from the baseline to a proposal. */
+  limits?: Limit[];
+  /** Hole spacing and edge-distance rules for the cautions. */
+  holeRules?: 'en1993' | 'aisc360';
+  /** Materials; a shape names one by `material`, or takes the reference material. */
+  materials?: Material[];
+  reference?: string;
+  stressUnit?: StressUnit;
+  forceUnit?: ForceUnit;
+  loads?: Loads;
+  /** The checker's fields. */
+  revisions?: Revision[];
+  notes?: string;
+  checked?: { by: string; date: string };
 }

@@ -3,7 +3,10 @@
  * (`shapes[2].segments[4].via: arc points are collinear`), never just the first one.
  */
 import { fmtValue as fmtNum, isObj, type Issue } from '../shapes/check';
+import { newShapeId } from '../shapes/ids';
 import { validateShape } from '../shapes/validate';
+import { validateCheckerFields, validateLimits, validateMaterials } from './fields';
+import { validateVariants } from './variants';
 import { migrate, KNOWN_VERSIONS } from './migrate';
 import { CURRENT_VERSION, FORMAT, UNITS, type SectionDocument } from './types';
 
@@ -42,7 +45,7 @@ export function validateDocument(value: unknown): DocResult {
     });
     return { ok: false, errors, warnings };
   }
-  const doc = migrate(value) as Record<string, unknown>;
+  const doc = assignMissingIds(migrate(value));
   if (!(UNITS as readonly unknown[]).includes(doc.units)) {
     errors.push({ path: 'units', message: `unknown units ${fmtNum(doc.units)}; use one of ${UNITS.join(', ')}` });
   }
@@ -59,6 +62,15 @@ export function validateDocument(value: unknown): DocResult {
       }
     });
   }
+  const baseIds = new Set(Array.isArray(doc.shapes) ? doc.shapes.map((s) => (isObj(s) ? s.id : undefined)).filter((id): id is string => typeof id === 'string') : []);
+  validateVariants(doc, baseIds, errors);
+  const allShapes = [
+    ...(Array.isArray(doc.shapes) ? doc.shapes.map((shape, k) => ({ path: `shapes[${k}]`, shape })) : []),
+    ...(Array.isArray(doc.variants) ? doc.variants.flatMap((v, k) => (isObj(v) && Array.isArray(v.shapes) ? v.shapes.map((shape: unknown, j: number) => ({ path: `variants[${k}].shapes[${j}]`, shape })) : [])) : []),
+  ];
+  validateMaterials(doc, allShapes, errors);
+  validateLimits(doc, errors);
+  validateCheckerFields(doc, errors);
   if (doc.name !== undefined && typeof doc.name !== 'string') errors.push({ path: 'name', message: 'name must be text' });
   if (doc.title !== undefined) {
     if (!isObj(doc.title)) errors.push({ path: 'title', message: 'title must be an object of text fields' });
@@ -66,6 +78,32 @@ export function validateDocument(value: unknown): DocResult {
   }
   if (errors.length) return { ok: false, errors, warnings };
   return { ok: true, doc: doc as unknown as SectionDocument, warnings };
+}
+
+/**
+ * A shape written by hand may leave out its id: give it the first free `s<k>` (k from its place in
+ * the list), the same every time the file is read, so the saved file keeps it. Shapes of
+ * proposals get ids that no other shape of the document uses.
+ */
+function assignMissingIds(doc: Record<string, unknown>): Record<string, unknown> {
+  const missing = (s: unknown) => isObj(s) && s.id === undefined;
+  const variants = Array.isArray(doc.variants) ? doc.variants : [];
+  const lists = [doc.shapes, ...variants.map((v) => (isObj(v) ? v.shapes : undefined))].filter(Array.isArray) as unknown[][];
+  if (!lists.some((l) => l.some(missing))) return doc;
+  const used = new Set<string>();
+  for (const l of lists) for (const s of l) if (typeof s === 'string') used.add(s);
+  else if (isObj(s) && typeof s.id === 'string') used.add(s.id);
+  const named = (l: unknown[]) =>
+    l.map((s) => {
+      if (!missing(s)) return s;
+      const id = newShapeId(used);
+      used.add(id);
+      return { id, ...(s as object) };
+    });
+  const out: Record<string, unknown> = { ...doc };
+  if (Array.isArray(doc.shapes)) out.shapes = named(doc.shapes);
+  if (Array.isArray(doc.variants)) out.variants = doc.variants.map((v) => (isObj(v) && Array.isArray(v.shapes) ? { ...v, shapes: named(v.shapes) } : v));
+  return out;
 }
 
 export { CURRENT_VERSION };

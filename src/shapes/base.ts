@@ -15,6 +15,8 @@ export interface ShapeBase {
   name?: string;
   /** How the shape combines with the region built so far; default add. */
   op?: Op;
+  /** The id of the shape's material (document `materials`); the reference material when absent. */
+  material?: string;
 }
 
 /** A map of points (an isometry for moves, rotations and mirrors; a scaling for units). */

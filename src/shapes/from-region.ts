@@ -39,10 +39,10 @@ export function contourToPath(c: Contour, id: string, op: Shape['op']): PathShap
  * Paths for a boolean result: every outer loop (CCW) an `add` path, every hole (CW) a `subtract`
  * path after all the outer loops, so the holes cut what the loops add.
  */
-export function regionToPaths(region: Region, doc: { readonly shapes: readonly Shape[] }): PathShape[] {
-  const taken = new Set<string>();
+export function regionToPaths(region: Region, used: ReadonlySet<string>): PathShape[] {
+  const taken = new Set<string>(used);
   const nextId = () => {
-    const id = newShapeId(doc, taken);
+    const id = newShapeId(taken);
     taken.add(id);
     return id;
   };
@@ -59,16 +59,16 @@ export function regionToPaths(region: Region, doc: { readonly shapes: readonly S
  * A profile as plain path shapes (outer loop with the profile's op; holes subtracted after it).
  * Returns an error text when that would not mean the same section.
  */
-export function profileToOutline(s: ProfileShape, doc: { readonly shapes: readonly Shape[] }): { ok: true; shapes: Shape[] } | { ok: false; message: string } {
+export function profileToOutline(s: ProfileShape, used: ReadonlySet<string>): { ok: true; shapes: Shape[] } | { ok: false; message: string } {
   const { outer, holes } = profileToPaths(s);
   const op = s.op ?? 'add';
   if (holes.length && op !== 'add') {
     return { ok: false, message: `A hollow profile with the "${op}" operation cannot become separate outlines without changing the section; switch it to add first or merge it with the shapes it combines with.` };
   }
-  const taken = new Set<string>([s.id]);
+  const taken = new Set<string>([...used, s.id]);
   const out: Shape[] = [{ ...outer, id: s.id, name: s.name, op }];
   for (const h of holes) {
-    const id = newShapeId(doc, taken);
+    const id = newShapeId(taken);
     taken.add(id);
     out.push({ ...h, id, name: s.name ? `${s.name} (hole)` : undefined, op: 'subtract' });
   }

@@ -12,6 +12,7 @@ export function validateShape(s: unknown, path: string): Issue[] {
   if (!isObj(s)) return [{ path, message: 'a shape must be an object' }];
   if (typeof s.id !== 'string' || s.id.trim() === '') out.push({ path: `${path}.id`, message: 'every shape needs a non-empty string id' });
   if (s.name !== undefined && typeof s.name !== 'string') out.push({ path: `${path}.name`, message: 'name must be text' });
+  if (s.material !== undefined && (typeof s.material !== 'string' || s.material.trim() === '')) out.push({ path: `${path}.material`, message: 'material must be the id of a material of the document' });
   if (s.op !== undefined && !(OPS as readonly unknown[]).includes(s.op)) {
     out.push({ path: `${path}.op`, message: `unknown operation ${fmtNum(s.op)}; use one of ${OPS.join(', ')}` });
   }

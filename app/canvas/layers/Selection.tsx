@@ -5,11 +5,12 @@ import { traceRegion } from '../../paint/trace';
 import { shapeHandles } from '../../shapes';
 import { toScreen, type ViewTransform } from '../../view';
 import { Paint } from '../PaintNode';
+import { activeSection } from '../../store/section';
 
 export function SelectionNode({ v }: { v: ViewTransform }) {
   const editor = useEditor();
   const selected = useEditorState((s) => s.selected);
-  const doc = useEditorState((s) => s.doc);
+  const doc = useEditorState((s) => activeSection(s.doc));
   const hover = useTransient((t) => t.hoverHandle);
   const sel = new Set(selected);
   const regions = editor.results.shapesOf(doc).filter((s) => sel.has(s.id)).map((s) => s.region);

@@ -10,6 +10,7 @@ import { hatch, INK, opStyle } from '../../paint/ink';
 import { traceRegion } from '../../paint/trace';
 import type { ViewTransform } from '../../view';
 import { Paint } from '../PaintNode';
+import { activeSection } from '../../store/section';
 
 /** Paint one shape's own outline, hatched by its operation. */
 function paintShape(ctx: CanvasRenderingContext2D, region: Region, op: Op, v: ViewTransform, error: boolean) {
@@ -32,8 +33,8 @@ export function ShapesLayer() {
   const v = useEditorShallow((s) => ({ scale: s.scale, ox: s.ox, oy: s.oy }));
   // The combined section may trail a drag by an evaluation; each shape's own outline does not.
   const region = useResults((r) => r.evaluation.region);
-  const doc = useEditorState((s) => s.doc);
-  const shapes = editor.results.shapesOf(doc);
+  const section = useEditorState((s) => activeSection(s.doc));
+  const shapes = editor.results.shapesOf(section);
   return (
     <Paint
       paint={(ctx) => {
@@ -41,7 +42,7 @@ export function ShapesLayer() {
         traceRegion(ctx, region, v);
         ctx.fillStyle = INK.resultFill;
         ctx.fill('nonzero');
-        shapes.forEach((s, i) => paintShape(ctx, s.region, doc.shapes[i]?.op ?? 'add', v, !!s.error));
+        shapes.forEach((s, i) => paintShape(ctx, s.region, section.shapes[i]?.op ?? 'add', v, !!s.error));
         ctx.beginPath();
         traceRegion(ctx, region, v);
         ctx.strokeStyle = INK.resultLine;

@@ -100,7 +100,7 @@ export type ProfileShape =
 
 export type ProfileType = ProfileShape['type'];
 export type ProfileOf<T extends ProfileType> = Extract<ProfileShape, { type: T }>;
-type NonDimensionKey = 'id' | 'type' | 'name' | 'op' | 'at' | 'rotation' | 'mirror';
+type NonDimensionKey = 'id' | 'type' | 'name' | 'op' | 'material' | 'at' | 'rotation' | 'mirror';
 
 /** The numeric dimension fields of one profile type (everything except identity and placement). */
 export type ProfileDimensions<T extends ProfileType> = Omit<ProfileOf<T>, NonDimensionKey>;
