@@ -64,7 +64,7 @@ describe('fillet of a line–line corner', () => {
   it('a square with one corner rounded: area a² − (1 − π/4)r², centroid and second moments by composite areas', () => {
     for (const r of [1, 20, 37.5, 99.9]) {
       const res = ok(filletPolygonCorner(square, 2, r));
-      expect(validateShape({ id: 's', ...res.path })).toEqual([]);
+      expect(validateShape({ id: 's', ...res.path }, 'shape')).toEqual([]);
       // Tangent points a distance r from the corner along each side (tan 45° = 1), centre (a − r, a − r).
       expect(res.tangentIn).toEqual([a, a - r]);
       expect(res.tangentOut).toEqual([a - r, a]);
@@ -175,7 +175,7 @@ describe('fillet where a line meets an arc', () => {
         const beta = Math.atan2(r, Fx);
         const removed = 0.5 * R * R * beta - 0.5 * Fx * r - 0.5 * r * r * (Math.PI / 2 + beta);
         expect(rel(moments(res.path).m00, (Math.PI * R * R) / 2 - removed)).toBeLessThan(1e-12);
-        expect(validateShape({ id: 'h', type: 'path', ...res.path })).toEqual([]);
+        expect(validateShape({ id: 'h', ...res.path }, 'shape')).toEqual([]);
       }
     }
   });
@@ -209,7 +209,7 @@ describe('fillet where a line meets an arc', () => {
     for (const [cx, cy] of Cs) expect(Math.abs(Math.hypot(res.centre[0] - cx, res.centre[1] - cy) - 47)).toBeLessThan(1e-12 * 50);
     expect(Math.abs(Math.hypot(res.tangentIn[0] - res.centre[0], res.tangentIn[1] - res.centre[1]) - 3)).toBeLessThan(1e-12);
     expect(moments(res.path).m00).toBeLessThan(moments({ type: 'path', ...lens } as FilletPath).m00);
-    expect(validateShape({ id: 'l', type: 'path', ...res.path })).toEqual([]);
+    expect(validateShape({ id: 'l', ...res.path }, 'shape')).toEqual([]);
   });
 });
 
