@@ -230,6 +230,30 @@ describe('fillet refusals', () => {
   });
 });
 
+describe('fillet on arbitrary input', () => {
+  it('never throws or yields a non-finite point: a valid path or a message (fuzz)', () => {
+    const coord = fc.oneof(fc.integer({ min: -5, max: 5 }), fc.double({ min: -1e6, max: 1e6, noNaN: true }));
+    const seg = fc.record({ to: fc.tuple(coord, coord), arc: fc.boolean(), via: fc.tuple(coord, coord) });
+    fc.assert(
+      fc.property(fc.tuple(coord, coord), fc.array(seg, { minLength: 1, maxLength: 6 }), fc.integer({ min: -1, max: 7 }), fc.double({ min: -1, max: 1e4, noNaN: true }), fc.boolean(), (start, raw, corner, r, close) => {
+        const segments = raw.map((g) => (g.arc ? { to: g.to as Point, via: g.via as Point } : { to: g.to as Point }));
+        if (close) segments.push({ to: start as Point });
+        const res = filletCorner({ start: start as Point, segments }, corner, r);
+        if (!res.ok) {
+          expect(res.message.length).toBeGreaterThan(10);
+          return;
+        }
+        const all = [res.path.start, ...res.path.segments.flatMap((g) => (g.via ? [g.to, g.via] : [g.to]))];
+        for (const q of all) expect(Number.isFinite(q[0]) && Number.isFinite(q[1])).toBe(true);
+        expect(Number.isFinite(res.sweep)).toBe(true);
+        // The fillet's tangent points lie at the radius from its centre.
+        for (const t of [res.tangentIn, res.tangentOut]) expect(Math.abs(Math.hypot(t[0] - res.centre[0], t[1] - res.centre[1]) - r)).toBeLessThan(1e-6 * Math.max(1, r, Math.hypot(...res.centre)));
+      }),
+      { numRuns: 2000 },
+    );
+  });
+});
+
 describe('tangent arcs for typed path entry', () => {
   it('leaves the point along the given direction and turns by the signed sweep', () => {
     // A quarter turn to the left of radius 10 from the origin heading +x ends at (10, 10).

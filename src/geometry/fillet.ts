@@ -13,7 +13,8 @@
  *    candidate centre has one tangent point on each segment (the foot of the perpendicular, or
  *    the point of the arc on the ray from its centre). Keep the candidates whose tangent points
  *    lie on their segments and take the one nearest the corner. None left: the radius does not
- *    fit between the neighbouring segments, and the message says how much room there is.
+ *    fit between the neighbouring segments (between two lines the message gives the largest
+ *    radius that fits).
  * 4. Trim the two segments to the tangent points (a segment used up entirely is dropped) and put
  *    the fillet arc between them, with its `via` point at the arc's midpoint.
  *
@@ -76,13 +77,14 @@ function unit(x: number, y: number): [number, number] {
   return [x / L, y / L];
 }
 
-function pieceOf(a: Vec2, seg: { to: Vec2; via?: Vec2 }, index: number): Piece | string {
+/** Below this fraction of the outline's size a length cannot be told from round-off. */
+const MIN_RATIO = 1e-12;
+
+function pieceOf(a: Vec2, seg: { to: Vec2; via?: Vec2 }, index: number, size: number): Piece | string {
   const b = seg.to;
-  if (!seg.via) {
-    const length = Math.hypot(b[0] - a[0], b[1] - a[1]);
-    if (!(length > 0)) return `segment ${index + 1} has no length`;
-    return { kind: 'line', a, b, length, u: unit(b[0] - a[0], b[1] - a[1]) };
-  }
+  const chord = Math.hypot(b[0] - a[0], b[1] - a[1]);
+  if (!(chord > MIN_RATIO * size)) return `segment ${index + 1} is too short (${fmt(chord)}) to round against`;
+  if (!seg.via) return { kind: 'line', a, b, length: chord, u: unit(b[0] - a[0], b[1] - a[1]) };
   const v = seg.via;
   const sweep = sweepThrough(a[0], a[1], v[0], v[1], b[0], b[1]);
   if (!Number.isFinite(sweep)) return `segment ${index + 1} is an arc whose three points lie on one line`;
@@ -206,6 +208,55 @@ interface Candidate {
   fout: number;
 }
 
+/** The corner as the fillet sees it: the two pieces, the vertex, and the turn there. */
+interface Corner {
+  pin: Piece;
+  pout: Piece;
+  V: Vec2;
+  /** Unit directions of travel arriving at and leaving the corner. */
+  d1: [number, number];
+  d2: [number, number];
+  cross: number;
+  dot: number;
+  /** +1 when the path turns left at the corner, −1 when it turns right. */
+  side: 1 | -1;
+}
+
+/** The fillet centre and tangent points for a corner between two lines, in closed form. */
+function fitLines(c: Corner & { pin: { kind: 'line' }; pout: { kind: 'line' } }, r: number, label: number): Candidate | string {
+  const { pin, pout, V, d1, d2, cross, dot, side } = c;
+  // Tangent length r·tan(θ/2) = r·|sinθ|/(1 + cosθ), measured back and on from the corner.
+  const t = (r * Math.abs(cross)) / (1 + dot);
+  if (t > pin.length * (1 + 1e-12) || t > pout.length * (1 + 1e-12)) {
+    const room = Math.min(pin.length, pout.length);
+    const rMax = (room * (1 + dot)) / Math.abs(cross);
+    return `A radius of ${fmt(r)} does not fit at corner ${label}: it needs ${fmt(t)} along each side, but the shorter side is ${fmt(room)} long (largest radius: ${fmt(rMax)}).`;
+  }
+  const tin: FilletPoint = [V[0] - d1[0] * t, V[1] - d1[1] * t];
+  const tout: FilletPoint = [V[0] + d2[0] * t, V[1] + d2[1] * t];
+  const f: Vec2 = [tin[0] - side * r * d1[1], tin[1] + side * r * d1[0]];
+  return { f, tin, tout, fin: 1 - t / pin.length, fout: t / pout.length };
+}
+
+/** The fillet centre and tangent points when an arc takes part: offsets intersected. */
+function fitCurves(c: Corner, r: number, label: number): Candidate | string {
+  const { pin, pout, V, side } = c;
+  const oin = offsetOf(pin, side, r, V), oout = offsetOf(pout, side, r, V);
+  if (typeof oin === 'string') return `Cannot round corner ${label}: ${oin}.`;
+  if (typeof oout === 'string') return `Cannot round corner ${label}: ${oout}.`;
+  let best: Candidate | null = null, bestCost = Infinity;
+  for (const f of intersect(oin, oout)) {
+    const tin = tangentPoint(pin, f), tout = tangentPoint(pout, f);
+    const fin = fractionAlong(pin, tin, 1e-9);
+    const fout = fractionAlong(pout, tout, 1e-9);
+    if (Number.isNaN(fin) || Number.isNaN(fout)) continue;
+    // The nearest fit to the corner: the least of both pieces used up.
+    const cost = 1 - fin + fout;
+    if (cost < bestCost) [best, bestCost] = [{ f, tin, tout, fin, fout }, cost];
+  }
+  return best ?? `A radius of ${fmt(r)} does not fit at corner ${label}: the rounding would run past the end of a neighbouring segment. Try a smaller radius.`;
+}
+
 /**
  * Round corner `corner` of a path (vertex 0 is `start`, vertex k the end of segment k − 1) with
  * a tangent arc of radius `radius`. A closed path (last segment ending exactly on the start) has
@@ -226,11 +277,14 @@ export function filletCorner(path: PathLike, corner: number, radius: number): Fi
   const k = corner;
   const iIn = (k - 1 + n) % n, iOut = k;
   if (iIn === iOut) return fail('This outline has only one segment: there is no corner to round.');
-  const pin = pieceOf(pts[iIn], segs[iIn], iIn);
-  const pout = pieceOf(pts[iOut], segs[iOut], iOut);
+  // The outline's size: the largest coordinate magnitude and extent.
+  let size = 0;
+  for (const q of pts) size = Math.max(size, Math.abs(q[0]), Math.abs(q[1]), Math.hypot(q[0] - pts[0][0], q[1] - pts[0][1]));
+  if (radius < MIN_RATIO * size) return fail(`A radius of ${fmt(radius)} is too small to tell from round-off on an outline of this size (${fmt(size)}).`);
+  const pin = pieceOf(pts[iIn], segs[iIn], iIn, size);
+  const pout = pieceOf(pts[iOut], segs[iOut], iOut, size);
   if (typeof pin === 'string') return fail(`Cannot round corner ${corner}: ${pin}.`);
   if (typeof pout === 'string') return fail(`Cannot round corner ${corner}: ${pout}.`);
-  const V = pts[k];
 
   const d1 = direction(pin, true), d2 = direction(pout, false);
   const cross = d1[0] * d2[1] - d1[1] * d2[0];
@@ -239,59 +293,30 @@ export function filletCorner(path: PathLike, corner: number, radius: number): Fi
     if (dot > 0) return fail(`Corner ${corner} is straight: the two segments meet in line, so there is nothing to round.`);
     return fail(`The outline doubles back at corner ${corner}: there is no corner to round there.`);
   }
-  const side: 1 | -1 = cross > 0 ? 1 : -1;
-  const r = radius;
-
-  let best: Candidate | null = null;
-  if (pin.kind === 'line' && pout.kind === 'line') {
-    // Tangent length r·tan(θ/2) = r·|sinθ|/(1 + cosθ), measured back and on from the corner.
-    const t = (r * Math.abs(cross)) / (1 + dot);
-    const room = Math.min(pin.length, pout.length);
-    if (t > pin.length * (1 + 1e-12) || t > pout.length * (1 + 1e-12)) {
-      const rMax = (room * (1 + dot)) / Math.abs(cross);
-      return fail(
-        `A radius of ${fmt(r)} does not fit at corner ${corner}: it needs ${fmt(t)} along each side, but the shorter side is ${fmt(room)} long (largest radius: ${fmt(rMax)}).`,
-      );
-    }
-    const tin: FilletPoint = [V[0] - d1[0] * t, V[1] - d1[1] * t];
-    const tout: FilletPoint = [V[0] + d2[0] * t, V[1] + d2[1] * t];
-    const f: Vec2 = [tin[0] - side * r * d1[1], tin[1] + side * r * d1[0]];
-    best = { f, tin, tout, fin: 1 - t / pin.length, fout: t / pout.length };
-  } else {
-    const oin = offsetOf(pin, side, r, V), oout = offsetOf(pout, side, r, V);
-    if (typeof oin === 'string') return fail(`Cannot round corner ${corner}: ${oin}.`);
-    if (typeof oout === 'string') return fail(`Cannot round corner ${corner}: ${oout}.`);
-    let bestCost = Infinity;
-    for (const f of intersect(oin, oout)) {
-      const tin = tangentPoint(pin, f), tout = tangentPoint(pout, f);
-      const fin = fractionAlong(pin, tin, 1e-9);
-      const fout = fractionAlong(pout, tout, 1e-9);
-      if (Number.isNaN(fin) || Number.isNaN(fout)) continue;
-      // The nearest fit to the corner: the least of both pieces used up.
-      const cost = (1 - fin) + fout;
-      if (cost < bestCost) [best, bestCost] = [{ f, tin, tout, fin, fout }, cost];
-    }
-    if (!best) return fail(`A radius of ${fmt(r)} does not fit at corner ${corner}: the rounding would run past the end of a neighbouring segment. Try a smaller radius.`);
-  }
+  const c: Corner = { pin, pout, V: pts[k], d1, d2, cross, dot, side: cross > 0 ? 1 : -1 };
+  const lines = pin.kind === 'line' && pout.kind === 'line';
+  const best = lines ? fitLines(c as Parameters<typeof fitLines>[0], radius, corner) : fitCurves(c, radius, corner);
+  if (typeof best === 'string') return fail(best);
 
   // A piece used up to its far end is dropped, and its exact end vertex is kept.
   const eps = 1e-12;
   const useInStart = best.fin <= eps;
   const useOutEnd = best.fout >= 1 - eps;
-  const f = best.f;
+  const f = best.f, r = radius;
   const tIn: FilletPoint = useInStart ? [pin.a[0], pin.a[1]] : best.tin;
   const tOut: FilletPoint = useOutEnd ? [pout.b[0], pout.b[1]] : best.tout;
 
-  // The fillet arc turns the same way as the corner, from tIn to tOut about f.
+  // The fillet arc turns the same way as the corner, from tIn to tOut about f; between two
+  // lines its sweep is the turn angle itself.
   const a0 = Math.atan2(tIn[1] - f[1], tIn[0] - f[0]);
-  const a1 = Math.atan2(tOut[1] - f[1], tOut[0] - f[0]);
   let sweep: number;
-  if (pin.kind === 'line' && pout.kind === 'line') sweep = side * Math.atan2(Math.abs(cross), dot);
+  if (lines) sweep = c.side * Math.atan2(Math.abs(cross), dot);
   else {
-    sweep = side > 0 ? a1 - a0 : a0 - a1;
+    const a1 = Math.atan2(tOut[1] - f[1], tOut[0] - f[0]);
+    sweep = c.side > 0 ? a1 - a0 : a0 - a1;
     sweep = ((sweep % TWO_PI) + TWO_PI) % TWO_PI;
     if (!(sweep > 1e-12) || sweep > TWO_PI - 1e-9) return fail(`Corner ${corner} is too shallow to round with a radius of ${fmt(r)}.`);
-    sweep *= side;
+    sweep *= c.side;
   }
   const am = a0 + sweep / 2;
   const arc: FilletSegment = { to: tOut, via: [f[0] + r * Math.cos(am), f[1] + r * Math.sin(am)] };
@@ -326,7 +351,7 @@ export function pathEndDirection(path: PathLike): [number, number] | null {
   const n = path.segments.length;
   if (n === 0) return null;
   const from = n === 1 ? path.start : path.segments[n - 2].to;
-  const p = pieceOf(from, path.segments[n - 1], n - 1);
+  const p = pieceOf(from, path.segments[n - 1], n - 1, 0);
   return typeof p === 'string' ? null : direction(p, true);
 }
 
