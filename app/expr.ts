@@ -158,7 +158,6 @@ export function evaluateExpression(text: string): ExprResult {
   }
 }
 
-
 // ---------------------------------------------------------------------------------------------
 // Typed coordinates (the syntax and its messages: input-syntax.ts)
 

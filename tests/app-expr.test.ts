@@ -11,6 +11,7 @@ import { cosSinDegrees, evaluateExpression, parsePointInput, type EntryExpectati
 import { ENTRY_START, HELP_LINES, HINT, MESSAGE, PLACEHOLDER } from '../app/input-syntax';
 import { clean, resolveArc, resolveMove, resolveRadius, resolveTyped } from '../app/tools/types';
 import { createEditor } from '../app/editor';
+import { registry } from '../app/commands/commands';
 import type { Point, SectionDocument, Shape } from '../src';
 
 function value(s: string): number {
@@ -345,5 +346,8 @@ describe('the syntax is stated once', () => {
   it('the keys that start an entry include the plain-keyboard relative mark', () => {
     for (const k of ['1', '.', '-', '+', '(', 'd', 'Δ', 'Ø']) expect(ENTRY_START.test(k), k).toBe(true);
     for (const k of ['a', 'r', '@', '<', 'Enter']) expect(ENTRY_START.test(k), k).toBe(false);
+  });
+  it('no command is bound to a key that starts an entry', () => {
+    for (const k of ['0', '5', '9', '.', '+', '-', '(', 'd', 'shift+d', 'Δ', '∆', 'Ø', 'ø', '⌀']) expect(registry.forKey(k)?.name, k).toBeUndefined();
   });
 });
