@@ -95,7 +95,7 @@ export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule
     tool,
     run: (name, arg) => registry.dispatch(ctx, name, arg),
     type(text: string) {
-      const r = parsePointInput(text);
+      const r = parsePointInput(text, tool().expects?.(env));
       const err = r.ok ? tool().typed(env, r.input) : r.message;
       transient.setState({ inputError: err, prompt: tool().prompt(env) });
       return err;

@@ -5,12 +5,12 @@
  */
 import { eventKey } from './commands/registry';
 import type { EditorHandle } from './context';
+import { ENTRY_START } from './input-syntax';
 
 function isField(t: EventTarget | null): boolean {
   return t instanceof HTMLInputElement || t instanceof HTMLTextAreaElement || t instanceof HTMLSelectElement;
 }
 
-const TYPED_START = /^[0-9@.\-+(]$/;
 
 /** Listen on the window; returns the function that stops listening. */
 export function installKeyboard(editor: EditorHandle): () => void {
@@ -30,8 +30,9 @@ export function installKeyboard(editor: EditorHandle): () => void {
       editor.run('tool.select');
       return;
     }
-    const drawing = st.tool !== 'select';
-    if (!e.ctrlKey && !e.metaKey && !e.altKey && TYPED_START.test(e.key) && (drawing || (e.key === '@' && st.selected.length))) {
+    // While drawing, or with a selection to move, a key that starts an entry goes to the entry box.
+    const canType = st.tool !== 'select' || st.selected.length > 0;
+    if (!e.ctrlKey && !e.metaKey && !e.altKey && ENTRY_START.test(e.key) && canType) {
       const input = document.getElementById('typed-input') as HTMLInputElement | null;
       if (input) {
         e.preventDefault();

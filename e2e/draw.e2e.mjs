@@ -49,7 +49,7 @@ export const tests = [
       await focusCanvas(page);
       await page.keyboard.press('r');
       await typeInput(page, '10, 20');
-      await typeInput(page, '@120, 2*40');
+      await typeInput(page, 'd 120, 2*40');
       close(await prop(page, 'area'), 120 * 80, 'A = b·h (Gere & Goodno, App. E)');
       close(await prop(page, 'Iy'), (80 * 120 ** 3) / 12, 'Iy = h·b³/12 (Gere & Goodno, App. E)');
       close(await prop(page, 'centroid.x'), 70, 'x̄ = x0 + b/2');
@@ -109,8 +109,8 @@ export const tests = [
       await focusCanvas(page);
       await page.keyboard.press('p');
       await typeInput(page, '0, 0');
-      await typeInput(page, '@80, 0');
-      await typeInput(page, '80<90');
+      await typeInput(page, 'Δ 80, 0');
+      await typeInput(page, '80 a 90');
       await typeInput(page, '0, 80');
       await page.press('[data-testid="typed-input"]', 'Enter'); // empty entry finishes
       const a = 80;
@@ -146,9 +146,9 @@ export const tests = [
       await focusCanvas(page);
       await page.keyboard.press('l');
       await typeInput(page, '0, 0');
-      await typeInput(page, '@60, 0');
+      await typeInput(page, 'd 60, 0');
       await page.click('[data-command="path.arcMode"]');
-      await typeInput(page, '@20, 20'); // through (80, 20)
+      await typeInput(page, 'd 20, 20'); // through (80, 20)
       await typeInput(page, '60, 40');
       await page.click('[data-command="path.arcMode"]');
       await typeInput(page, '0, 40');

@@ -135,8 +135,8 @@ export const tests = [
       assert.equal(snap?.kind, 'vertex', 'the snap target is shown before the click');
       await page.mouse.down();
       await page.mouse.up();
-      await typeInput(page, '@50, 0');
-      await typeInput(page, '@0, 40');
+      await typeInput(page, 'd 50, 0');
+      await typeInput(page, '50 ∠ 90');
       await page.press('[data-testid="typed-input"]', 'Enter');
       const shapes = await docShapes(page);
       assert.deepEqual(shapes[1].points[0], [100.3, 60.7], 'the first point is exactly the corner');

@@ -118,7 +118,7 @@ export const tests = [
       await page.fill('[data-testid="typed-input"]', '10, 2*');
       await page.press('[data-testid="typed-input"]', 'Enter');
       assert.match(await page.textContent('[data-testid="input-error"]'), /^y: .*position/);
-      await page.fill('[data-testid="typed-input"]', '@5, 5');
+      await page.fill('[data-testid="typed-input"]', 'd 5, 5');
       await page.press('[data-testid="typed-input"]', 'Enter');
       assert.match(await page.textContent('[data-testid="input-error"]'), /no previous point/);
       assert.equal((await docShapes(page)).length, 0);
@@ -126,7 +126,7 @@ export const tests = [
       await focusCanvas(page);
       await page.keyboard.type('0,0');
       await page.keyboard.press('Enter');
-      await typeInput(page, '@30, 20');
+      await typeInput(page, 'd 30, 20');
       await settle(page);
       close(await prop(page, 'area'), 600, 'A = b·h (Gere & Goodno, App. E)');
     },

@@ -37,3 +37,5 @@ export { contourToPath, regionToPaths, profileToOutline } from './shapes/from-re
 export { newShapeId } from './shapes/ids';
 export { regionSegments, segmentIntersections, segmentMidpoint, segmentBox, type Segment } from './geometry/segments';
 export { unionBounds, regionsBounds } from './geometry/bounds';
+export { filletCorner, filletPolygonCorner, pathEndDirection, tangentArc, type FilletResult, type FilletPath, type FilletSegment } from './geometry/fillet';
+export { catalogueSeries, catalogueSize, catalogueProfile, CatalogueError, type CatalogueSeries, type CatalogueSize, type CatalogueOptions } from './catalogue';

@@ -99,7 +99,7 @@ describe('commands on the section', () => {
     const e = editorWith();
     e.run('tool.rectangle');
     expect(e.type('0, 0')).toBeNull();
-    expect(e.type('@100, 200')).toBeNull();
+    expect(e.type('d 100, 200')).toBeNull();
     const p = props(e);
     expect(p.area).toBeCloseTo(20000, 8); // A = b·h (Gere & Goodno, App. E, rectangle)
     expect(rel(p.Ix, (100 * 200 ** 3) / 12)).toBeLessThan(1e-12); // Ix = b·h³/12 (Gere & Goodno, App. E, rectangle)
@@ -119,7 +119,7 @@ describe('commands on the section', () => {
     const e = editorWith();
     e.run('tool.polygon');
     e.type('0, 0');
-    e.type('@30, 0');
+    e.type('d 30, 0');
     e.type('0, 60');
     e.tool().key(e.env, 'enter');
     const p = props(e);
@@ -144,13 +144,13 @@ describe('commands on the section', () => {
     expect(rel(p.centroid.y, (4 * r) / (3 * Math.PI))).toBeLessThan(1e-12); // ȳ = 4r/3π (Gere & Goodno, App. E, semicircle)
     expect(rel(p.Ix, (Math.PI / 8 - 8 / (9 * Math.PI)) * r ** 4)).toBeLessThan(1e-10); // Ix = (π/8 − 8/9π) r⁴ (Gere & Goodno, App. E, semicircle)
   });
-  it('polar input: a square drawn with length<angle', () => {
+  it('polar input: a square drawn with length ∠ angle', () => {
     const e = editorWith();
     e.run('tool.polygon');
     e.type('0,0');
-    e.type('40<0');
-    e.type('40<90');
-    e.type('40<180');
+    e.type('40 a 0');
+    e.type('40 a 90');
+    e.type('40 a 180');
     e.tool().key(e.env, 'enter');
     expect(props(e).area).toBeCloseTo(1600, 9); // A = a² (square; Gere & Goodno, App. E)
   });

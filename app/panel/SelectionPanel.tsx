@@ -11,6 +11,7 @@ import { CommandButton } from '../fields/CommandButton';
 import { useApply } from '../fields/shape-edit';
 import { ShapeFields } from '../shapes';
 import { activeSection } from '../store/section';
+import { HINT } from '../input-syntax';
 
 const OP_LABEL: Record<Op, string> = { add: 'Add', subtract: 'Subtract', intersect: 'Intersect' };
 
@@ -47,7 +48,7 @@ export function SelectionPanel() {
     return (
       <section className="panel-section" data-testid="selection-panel">
         <h2>Selection</h2>
-        <p className="hint">Nothing selected. Click a shape, or draw one with the tools on the left. Type coordinates while drawing: “x, y”, “@dx, dy” or “length&lt;angle”.</p>
+        <p className="hint">Nothing selected. Click a shape, or draw one with the tools on the left. Type coordinates while drawing: {HINT.nextPoint}.</p>
       </section>
     );
   }

@@ -7,7 +7,7 @@
 import { translateShape } from '../../src';
 import { beginGesture, endGesture, previewGesture } from '../store/history';
 import type { PointInput } from '../expr';
-import type { PointerInfo, Tool, ToolEnv } from '../tools/types';
+import { resolveMove, type PointerInfo, type Tool, type ToolEnv } from '../tools/types';
 import { Idle } from './Idle';
 import type { SelectState } from './state';
 import { activeShapes, withActiveShapes } from '../store/section';
@@ -45,16 +45,13 @@ export class SelectTool implements Tool {
     return true;
   }
 
-  /** With a selection, "@dx, dy" or "length<angle" moves it in one undo step. */
+  /** With a selection, a displacement (Δ dx, dy) or a length at an angle (L ∠ θ) moves it in one undo step. */
   typed(env: ToolEnv, input: PointInput): string | null {
     const s = env.store.getState();
     if (!s.selected.length) return 'Select a shape first, or pick a drawing tool.';
-    let dx: number, dy: number;
-    if (input.kind === 'rel') [dx, dy] = [input.dx, input.dy];
-    else if (input.kind === 'polar') {
-      const t = (input.angleDeg * Math.PI) / 180;
-      [dx, dy] = [input.length * Math.cos(t), input.length * Math.sin(t)];
-    } else return 'Type a move as "@dx, dy" or "length<angle".';
+    const m = resolveMove(input);
+    if ('error' in m) return m.error;
+    const { dx, dy } = m;
     const sel = new Set(s.selected);
     const shapes = activeShapes(s.doc).map((sh) => (sel.has(sh.id) ? translateShape(sh, dx, dy) : sh));
     beginGesture(env.store);

@@ -6,9 +6,10 @@ import type { CircleShape, Point } from '../../src';
 import { NumberField } from '../fields/NumberField';
 import { PointFields } from '../fields/PointFields';
 import { useShapeEdit } from '../fields/shape-edit';
-import type { PointInput } from '../expr';
+import type { EntryExpectation, PointInput } from '../expr';
+import { HINT } from '../input-syntax';
 import { DrawingTool } from '../tools/base';
-import { clean, type ToolEnv } from '../tools/types';
+import { clean, resolveRadius, type ToolEnv } from '../tools/types';
 import type { ShapeEditor } from './kind';
 
 class CircleTool extends DrawingTool {
@@ -16,7 +17,7 @@ class CircleTool extends DrawingTool {
   protected override readonly finishOnDrag = true;
   private centre: Point | null = null;
   prompt() {
-    return this.centre ? 'Circle: radius (a number) or a point on the circle' : 'Circle: centre ("x, y")';
+    return this.centre ? `Circle: ${HINT.radius}` : `Circle: centre (${HINT.firstPoint})`;
   }
   last() {
     return this.centre;
@@ -46,10 +47,14 @@ class CircleTool extends DrawingTool {
     const r = Math.hypot(p[0] - this.centre[0], p[1] - this.centre[1]);
     if (r > 0) this.draft(env, { shape: { id: '~draft', type: 'circle', center: this.centre, radius: r }, markers: [this.centre], chain: [this.centre, p] });
   }
+  override expects(): EntryExpectation {
+    return this.centre ? 'number-or-point' : 'point';
+  }
   override typed(env: ToolEnv, input: PointInput) {
-    if (input.kind === 'scalar') {
-      if (!this.centre) return 'Type the centre first as "x, y".';
-      return this.finish(env, input.value);
+    const r = resolveRadius(input);
+    if (r) {
+      if (!this.centre) return `Type the centre first as “${HINT.firstPoint}”.`;
+      return 'error' in r ? r.error : this.finish(env, r.r);
     }
     return super.typed(env, input);
   }

@@ -8,7 +8,9 @@ import type { CommandContext } from '../commands/registry';
 import { PointFields, ToolButton } from '../fields/PointFields';
 import { useShapeEdit } from '../fields/shape-edit';
 import { DrawingTool, samePoint } from '../tools/base';
-import type { ToolEnv } from '../tools/types';
+import { resolveArc, type ToolEnv } from '../tools/types';
+import type { PointInput } from '../expr';
+import { HINT } from '../input-syntax';
 import type { Handle, ShapeEditor } from './kind';
 
 class PathTool extends DrawingTool {
@@ -21,11 +23,11 @@ class PathTool extends DrawingTool {
     return env.store.getState().pathArc;
   }
   prompt(env: ToolEnv) {
-    if (!this.start) return 'Path: start point ("x, y")';
+    if (!this.start) return `Path: start point (${HINT.firstPoint})`;
     if (this.via) return 'Path arc: end point';
     return this.arcMode(env)
       ? 'Path arc: a point the arc passes through (A switches to lines)'
-      : 'Path line: next point (A switches to arcs; Enter or the start point closes)';
+      : `Path line: next point (${HINT.nextPoint}; an arc by ${HINT.arc}); A switches to arcs; Enter or the start point closes`;
   }
   last() {
     if (this.via) return this.via;
@@ -102,6 +104,17 @@ class PathTool extends DrawingTool {
   protected preview(env: ToolEnv, p: Point) {
     this.hover = p;
     if (this.start) this.show(env);
+  }
+  /** An arc typed by radius and sweep continues the last segment (R ⌒ φ, R arc φ). */
+  override typed(env: ToolEnv, input: PointInput): string | null {
+    if (input.kind !== 'arc') return super.typed(env, input);
+    if (!this.start || this.via) return this.start ? 'Finish the three-point arc first: type or click its end point.' : `Type the start point first (${HINT.firstPoint}).`;
+    const r = resolveArc(input, { start: this.start, segments: this.segments });
+    if ('error' in r) return r.error;
+    this.segments.push(r.segment);
+    if (samePoint(r.segment.to, this.start)) return this.finish(env);
+    this.show(env);
+    return null;
   }
   override key(env: ToolEnv, key: string) {
     if (key === 'enter' && this.start) {

@@ -9,6 +9,7 @@ import { useShapeEdit } from '../fields/shape-edit';
 import { DrawingTool, samePoint } from '../tools/base';
 import type { ToolEnv } from '../tools/types';
 import type { ShapeEditor } from './kind';
+import { HINT } from '../input-syntax';
 
 class PolygonTool extends DrawingTool {
   readonly id = 'polygon';
@@ -16,8 +17,8 @@ class PolygonTool extends DrawingTool {
   private hover: Point | null = null;
   prompt() {
     return this.points.length === 0
-      ? 'Polygon: first point ("x, y")'
-      : `Polygon: next point ("x, y", "@dx, dy" or "length<angle"); ${this.points.length >= 3 ? 'Enter or click the first point to close' : 'at least 3 points'}`;
+      ? `Polygon: first point (${HINT.firstPoint})`
+      : `Polygon: next point (${HINT.nextPoint}); ${this.points.length >= 3 ? 'Enter or click the first point to close' : 'at least 3 points'}`;
   }
   last() {
     return this.points.length ? this.points[this.points.length - 1] : null;

@@ -24,6 +24,7 @@ import { DrawingTool, samePoint } from '../tools/base';
 import { clean, type NewShape, type ToolEnv } from '../tools/types';
 import { CommandButton } from '../fields/CommandButton';
 import type { ShapeEditor } from './kind';
+import { HINT } from '../input-syntax';
 
 function rectFrom(a: Point, b: Point): NewShape {
   return { type: 'rectangle', at: [Math.min(a[0], b[0]), Math.min(a[1], b[1])], width: clean(Math.abs(b[0] - a[0])), height: clean(Math.abs(b[1] - a[1])) };
@@ -34,7 +35,7 @@ class RectangleTool extends DrawingTool {
   protected override readonly finishOnDrag = true;
   private corner: Point | null = null;
   prompt() {
-    return this.corner ? 'Rectangle: opposite corner ("x, y", or "@width, height")' : 'Rectangle: first corner ("x, y")';
+    return this.corner ? `Rectangle: opposite corner (${HINT.corner})` : `Rectangle: first corner (${HINT.firstPoint})`;
   }
   last() {
     return this.corner;
@@ -74,7 +75,7 @@ export function defaultProfile(type: ProfileType, units: Units, at: Point): NewS
 class ProfileTool extends DrawingTool {
   readonly id = 'profile';
   prompt(env: ToolEnv) {
-    return `Profile (${env.store.getState().profileType}): click or type the placement point ("x, y")`;
+    return `Profile (${env.store.getState().profileType}): click or type the placement point (${HINT.firstPoint})`;
   }
   last() {
     return null;

@@ -5,7 +5,7 @@
  * (a rectangle's corners, a circle's centre and rim) may also be drawn by press, drag, release.
  */
 import type { Point } from '../../src';
-import type { PointInput } from '../expr';
+import type { EntryExpectation, PointInput } from '../expr';
 import type { Draft } from '../store/transient';
 import { toScreen } from '../view';
 import { resolveTyped, type PointerInfo, type Tool, type ToolEnv } from './types';
@@ -66,6 +66,9 @@ export abstract class DrawingTool implements Tool {
       return true;
     }
     return false;
+  }
+  expects(_env?: ToolEnv): EntryExpectation {
+    return 'point';
   }
   typed(env: ToolEnv, input: PointInput): string | null {
     const r = resolveTyped(input, this.last());

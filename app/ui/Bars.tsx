@@ -5,6 +5,7 @@ import { useEditor, useEditorState, useTransient } from '../context';
 import { CommandButton } from '../fields/CommandButton';
 import { SHAPE_EDITORS, TOOL_SPECS } from '../shapes';
 import { KeysHelp } from './KeysHelp';
+import { PLACEHOLDER } from '../input-syntax';
 
 export function TopBar() {
   const name = useEditorState((s) => s.doc.name);
@@ -102,7 +103,7 @@ export function StatusBar() {
         id="typed-input"
         data-testid="typed-input"
         className={`typed${err ? ' invalid' : ''}`}
-        placeholder="type x, y · @dx, dy · length<angle"
+        placeholder={PLACEHOLDER}
         spellCheck={false}
         autoComplete="off"
         onKeyDown={(e) => {

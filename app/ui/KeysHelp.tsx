@@ -3,6 +3,7 @@ import { useState } from 'react';
 import { createPortal } from 'react-dom';
 import { useEditor } from '../context';
 import { keyHint } from '../fields/CommandButton';
+import { HELP_LINES } from '../input-syntax';
 
 const GROUP_LABEL: Record<string, string> = {
   tool: 'Tools',
@@ -53,11 +54,22 @@ export function KeysHelp() {
                 </section>
               ))}
               <section>
+                <h3>Typed entries</h3>
+                <dl>
+                  {HELP_LINES.map((l) => (
+                    <div key={l.form} className="key-row">
+                      <dt>
+                        {l.form}
+                        {l.typed && <span className="typed-alias"> or {l.typed}</span>}
+                      </dt>
+                      <dd>{l.meaning}</dd>
+                    </div>
+                  ))}
+                </dl>
+              </section>
+              <section>
                 <h3>While drawing</h3>
                 <dl>
-                  <div className="key-row"><dt>x, y</dt><dd>point at x, y</dd></div>
-                  <div className="key-row"><dt>@dx, dy</dt><dd>point relative to the last one</dd></div>
-                  <div className="key-row"><dt>L&lt;A</dt><dd>length L at angle A° from the last point</dd></div>
                   <div className="key-row"><dt>Enter</dt><dd>finish a polygon or path</dd></div>
                   <div className="key-row"><dt>Backspace</dt><dd>take back the last point</dd></div>
                   <div className="key-row"><dt>Escape</dt><dd>abandon the shape, then leave the tool</dd></div>
