@@ -1,5 +1,6 @@
 /**
- * Kern's command line: `kern props FILE`, `kern cut FILE --y VALUE`, `kern report FILE ...`.
+ * Kern's command line: `kern props FILE`, `kern cut FILE --y VALUE`, `kern report FILE ...`,
+ * `kern compare BASE PROPOSED`, `kern netsection FILE --from X,Y --to X,Y`.
  * Run with `npm run -s cli -- <command> ...`. Exit codes: 0 ok, 2 bad input or usage, 1 internal.
  */
 import { readFileSync } from 'node:fs';
@@ -28,6 +29,11 @@ const USAGE = `Usage:
                                            degrees from +x (parallel-axis transfer)
   kern report FILE --out report.html [--pdf out.pdf] [--cut y=VALUE|x=VALUE] [--paper a4|letter]
                                            self-contained HTML report, optionally printed to PDF
+  kern compare BASE.json PROPOSED.json [--json] [--rules en1993|aisc360] [--limits FILE]
+  kern compare FILE --variant NAME [...]   a proposal against its baseline: every property before
+                                           and after, limits with a within/beyond verdict, cautions
+  kern netsection FILE --from X,Y --to X,Y [--json]
+                                           gross and net length along a line, each hole or gap
 Options: --units U  (mm, cm, m, in, ft) for a DXF file that does not state its units`;
 
 export class UsageError extends Error {}
@@ -200,6 +206,8 @@ export async function main(argv: string[]): Promise<number> {
       const mod = await import('./report');
       return await mod.reportCommand(rest);
     }
+    if (cmd === 'compare') return await (await import('./compare')).compareCommand(rest);
+    if (cmd === 'netsection') return await (await import('./netsection')).netsectionCommand(rest);
     if (cmd === undefined || cmd === 'help' || cmd === '--help' || cmd === '-h') {
       out(USAGE);
       return cmd === undefined ? 2 : 0;
