@@ -20,10 +20,6 @@ const PI = Math.PI;
 /** Hand values of the properties the comparison lists, by catalogue key. */
 type Hand = Record<string, number>;
 
-function handRect(b: number, h: number, x0: number, y0: number): Hand {
-  return { A: b * h, xc: x0 + b / 2, yc: y0 + h / 2, Ix: (b * h ** 3) / 12, Iy: (h * b ** 3) / 12 };
-}
-
 /** Check every row against the hand values, and each percentage as 100·(q − b)/|b|. */
 function checkRows(c: SectionComparison, base: Hand, prop: Hand, tol = 1e-9): void {
   for (const [key, b] of Object.entries(base)) {
