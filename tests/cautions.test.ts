@@ -251,3 +251,18 @@ describe('plain mode without shapes', () => {
     expect(analyseCutouts({ result: [] }).cautions).toEqual([]);
   });
 });
+
+describe('what counts as a cut against a baseline', () => {
+  it('the edges of an added plate are not cuts: no ligament is reported for them', () => {
+    const plate: Shape = { id: 'plate', type: 'rectangle', at: [0, 0], width: 200, height: 100 };
+    const stiffener: Shape = { id: 'stiff', name: 'Stiffener', type: 'rectangle', at: [95, 100], width: 10, height: 60 };
+    const hole: Shape = { id: 'hole', name: 'Hole', type: 'circle', center: [40, 50], radius: 8, op: 'subtract' };
+    const base = doc([plate]);
+    const added = cautions(doc([plate, stiffener]), base);
+    expect(added.filter((c) => c.kind === 'ligament' || c.kind === 'thin-ligament')).toEqual([]);
+    const both = cautions(doc([plate, stiffener, hole]), base).filter((c) => c.kind === 'ligament' || c.kind === 'thin-ligament');
+    expect(both.map((c) => c.shape?.id)).toEqual(['hole']);
+    // 40 − 8 = 32 to the left edge is the narrowest material next to the hole.
+    close(both[0].values!.width, 32, 1e-12);
+  });
+});

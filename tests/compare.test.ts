@@ -10,6 +10,7 @@
  * plastic modulus of a circle Z = d³/6 = 4r³/3 and of a rectangle bh²/4 (Gere & Goodno, Sec. 6.10,
  * plastic moduli; from memory); flexure formula S = I/c (Gere & Goodno, Sec. 5.5).
  */
+import fc from 'fast-check';
 import { afterAll, describe, expect, it } from 'vitest';
 import { polygonContour, reverseContour } from '../src/geometry/contour';
 import { compareSections, comparisonRow, type SectionComparison } from '../src/compare';
@@ -183,6 +184,29 @@ describe('rotation rules', () => {
     close(c.rotation.degrees!, 90, 1e-12);
     expect(c.rotation.exchanged).toBe(true);
     expect(c.rotation.note).toMatch(/exchanged/);
+  });
+});
+
+describe('fuzzed comparisons', () => {
+  it('never give NaN: every change is proposal − baseline, every percentage has its sign, or is null with a reason', () => {
+    const num = (lo: number, hi: number) => fc.double({ min: lo, max: hi, noNaN: true });
+    fc.assert(
+      fc.property(num(1, 300), num(1, 300), num(0.05, 0.45), num(0.1, 0.9), num(0.1, 0.9), (w, h, rr, fx, fy) => {
+        const r = rr * Math.min(w, h);
+        const cx = r + fx * (w - 2 * r), cy = r + fy * (h - 2 * r);
+        const c = compareSections(props([rect(0, 0, w, h)]), props([rect(0, 0, w, h), reverseContour(circle(cx, cy, r))]));
+        for (const row of c.rows) {
+          expect(Number.isFinite(row.baseline) && Number.isFinite(row.proposal)).toBe(true);
+          if (row.change === null || row.changePercent === null) expect(row.note).toBeTruthy();
+          if (row.kind !== 'angle' && row.change !== null) close(row.change, row.proposal - row.baseline, 1e-12, Math.abs(row.baseline) + Math.abs(row.proposal));
+          if (row.changePercent !== null) expect(Math.sign(row.changePercent)).toBe(Math.sign(row.change!));
+        }
+        // The hole removes exactly πr² of area (Gere & Goodno, plane areas, case 9).
+        close(comparisonRow(c, 'area')!.change!, -PI * r * r, 1e-9, w * h);
+        expect(Number.isFinite(c.centroidShift.length)).toBe(true);
+      }),
+      { numRuns: 100, seed: 17 },
+    );
   });
 });
 

@@ -9,7 +9,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { evaluateDocument, type SectionDocument } from '../src';
-import { contourFrom, polygonContour, reverseContour, type Region } from '../src/geometry/contour';
+import { contourFrom, polygonContour, reverseContour, transformContour, type Region } from '../src/geometry/contour';
 import { cutSection } from '../src/properties/section';
 import { netSection, NetSectionError } from '../src/netsection';
 import { circle, close, props, rect } from './helpers';
@@ -46,6 +46,16 @@ describe('row of three holes', () => {
     const chord = 2 * Math.sqrt(11 * 11 - 5 * 5);
     close(r.netLength, 200 - 3 * chord, 1e-12);
     for (const g of r.gaps) close(g.length, chord, 1e-12);
+  });
+
+  it('at any position and size: moved far from the origin and scaled, to 1e-9', () => {
+    for (const [k, dx, dy] of [[1e-3, 5e3, -2e3], [1e3, -4e6, 7e6], [1, 1e5, 1e5]]) {
+      const moved = bar.map((c) => transformContour(c, k, 0, 0, k, dx, dy));
+      const r = netSection(moved, { x: 50 * k + dx, y: -10 * k + dy }, { x: 50 * k + dx, y: 210 * k + dy });
+      close(r.grossLength, 200 * k, 1e-9);
+      close(r.netLength, 134 * k, 1e-9);
+      for (const g of r.gaps) close(g.diameter!, 22 * k, 1e-9);
+    }
   });
 
   it('the same row built by subtracting circle shapes (the document pipeline)', () => {

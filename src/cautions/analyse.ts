@@ -14,7 +14,7 @@
 import { pointAt } from '../boolean/carriers';
 import type { Region } from '../geometry/contour';
 import { regionBounds } from '../geometry/contour';
-import { distanceToBoundary, POINT_TOL, regionBoundary, type Boundary, type BoundarySegment } from '../netsection/boundary';
+import { distanceToBoundary, POINT_TOL, regionBoundary, windingAt, type Boundary, type BoundarySegment } from '../netsection/boundary';
 import { DEFAULT_MIN_CORNER_TURN, insideCorners, newCorners, type RadiusedCorner, type SharpCorner } from './corners';
 import { holeChecks, type HoleCheck } from './hole-checks';
 import { HOLE_RULE_SETS, type HoleRuleSet } from './hole-rules';
@@ -51,9 +51,27 @@ function middle(s: BoundarySegment): [number, number] {
   return pointAt(s.carrier, 0.5);
 }
 
-/** The pieces a cut made: new against the baseline, else on a subtracted shape, else hole loops. */
+/**
+ * A point just outside the material at the middle of a piece: material lies to the left of every
+ * piece, and at its middle an arc runs parallel to its chord, so the chord's right normal points out.
+ */
+function outsideOf(s: BoundarySegment, step: number): [number, number] {
+  const c = s.carrier;
+  const [mx, my] = middle(s);
+  const L = Math.hypot(c.bx - c.ax, c.by - c.ay);
+  return [mx + (step * (c.by - c.ay)) / L, my - (step * (c.bx - c.ax)) / L];
+}
+
+/**
+ * The pieces a cut made: against a baseline, the new pieces with baseline material just outside
+ * them (material was taken away there; an added plate's edges are not cuts); else the pieces on a
+ * subtracted shape; else the hole loops.
+ */
 function chooseCutPieces(result: Boundary, base: Boundary | null, input: CautionInput, tol: number): (s: BoundarySegment) => boolean {
-  if (base) return (s) => distanceToBoundary(base.segments, ...middle(s)) > tol;
+  if (base) {
+    const step = 1e3 * tol;
+    return (s) => distanceToBoundary(base.segments, ...middle(s)) > tol && windingAt(base.segments, ...outsideOf(s, step)) !== 0;
+  }
   const cuts = (input.shapes ?? []).filter((s) => s.op === 'subtract').map((s) => regionBoundary(s.region));
   if (cuts.length) return (s) => cuts.some((b) => distanceToBoundary(b.segments, ...middle(s)) <= tol);
   const holes = new Set(result.loops.filter((l) => l.kind === 'hole').map((l) => l.index));

@@ -10,7 +10,7 @@
  * effective net area factors still apply, which the result says in `caution`.
  */
 import type { Region } from '../geometry/contour';
-import { distanceToBoundary, loopByIndex, regionBoundary, windingAt, type Boundary } from './boundary';
+import { distanceToBoundary, loopByIndex, POINT_TOL, regionBoundary, windingAt, type Boundary } from './boundary';
 import { classifyPieces, lineBreakpoints, type Breakpoint, type Piece } from './line-crossings';
 
 export type GapKind = 'hole' | 'notch' | 'between-parts';
@@ -90,8 +90,9 @@ export function netSection(region: Region, from: { x: number; y: number }, to: {
   checkPoint(to, 'end');
   const boundary = regionBoundary(region);
   const L = Math.hypot(to.x - from.x, to.y - from.y);
-  const scale = Math.max(boundary.extent, L);
-  const tol = 1e-9 * scale;
+  // Points closer than 1e-9 of the section's size are one point; a line far longer than the
+  // section widens that only as far as its own round-off needs.
+  const tol = POINT_TOL * Math.max(boundary.extent, 1e-6 * L);
   if (!(L > tol)) throw new NetSectionError('the line has no length: its start and end points coincide');
   const result: NetSection = {
     from: { ...from }, to: { ...to }, lineLength: L, grossLength: 0, netLength: 0, entry: null, exit: null,
