@@ -9,10 +9,10 @@
  * memory); the ligament ratio is Kern's own screening ratio (no published source). Distances are
  * checked against hand geometry (Pythagoras, distances from a point to a line).
  */
-import { describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { DEMO_DOCUMENT, evaluateDocument, type SectionDocument, type Shape } from '../src';
 import { analyseCutouts, type Caution, type CautionInput, type CautionOptions } from '../src/cautions';
-import { close } from './helpers';
+import { close, worst } from './helpers';
 
 function doc(shapes: Shape[], units: SectionDocument['units'] = 'mm'): SectionDocument {
   return { format: 'kern-section', version: 1, units, shapes };
@@ -265,4 +265,8 @@ describe('what counts as a cut against a baseline', () => {
     // 40 − 8 = 32 to the left edge is the narrowest material next to the hole.
     close(both[0].values!.width, 32, 1e-12);
   });
+});
+
+afterAll(() => {
+  console.log(`cautions: largest relative error at tight tolerance ${worst.value.toExponential(2)}`);
 });

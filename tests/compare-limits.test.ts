@@ -5,13 +5,13 @@
  * The geometric cases are hand calculations by the composite method (Hibbeler, Statics, Sec. 9.3):
  * a 200 × 100 plate (A = 20000) with a corner notch of 40 × 50 loses exactly 2000 = 10 % of its area.
  */
-import { describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { polygonContour } from '../src/geometry/contour';
 import {
   compareSections, evaluateLimits, exampleLimits, EXAMPLE_LIMITS_NOTE, overallVerdict, validateLimits, type Limit,
 } from '../src/compare';
 import type { SectionProperties } from '../src/properties/section';
-import { close, props, rect } from './helpers';
+import { close, props, rect, worst } from './helpers';
 
 /** Plate 200 × 100 with the top-right corner notched w × h. */
 const notched = (w: number, h: number) => [polygonContour([[0, 0], [200, 0], [200, 100 - h], [200 - w, 100 - h], [200 - w, 100], [0, 100]])];
@@ -180,4 +180,8 @@ describe('validateLimits', () => {
     const r = evaluateLimits(c, [{ property: 'Ix', maxShift: 1 }, { property: 'nope', maxLossPercent: 1 }]);
     expect(r.map((x) => x.status)).toEqual(['not-applicable', 'not-applicable']);
   });
+});
+
+afterAll(() => {
+  console.log(`compare-limits: largest relative error at tight tolerance ${worst.value.toExponential(2)}`);
 });
