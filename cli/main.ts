@@ -1,5 +1,6 @@
 /**
- * Kern's command line: `kern props FILE`, `kern cut FILE --y VALUE`, `kern report FILE ...`.
+ * Kern's command line: `kern props FILE`, `kern cut FILE --y VALUE`, `kern report FILE ...`,
+ * `kern compare BASE PROPOSED`, `kern netsection FILE --from X,Y --to X,Y`.
  * Run with `npm run -s cli -- <command> ...`. Exit codes: 0 ok, 2 bad input or usage, 1 internal.
  */
 import { readFileSync } from 'node:fs';
@@ -13,6 +14,8 @@ import {
   inertiaAboutAxis,
   parseDocument,
   propertiesJson,
+  sectionOf,
+  VariantError,
   PROPERTY_CATALOG,
   type Evaluation,
   type SectionDocument,
@@ -20,7 +23,9 @@ import {
 } from '../src';
 
 const USAGE = `Usage:
-  kern props FILE [--json]                 section properties of a section document (.json)
+  kern props FILE [--json] [--variant NAME]
+                                           section properties of a section document (.json): its
+                                           baseline, or the proposal NAME
   kern cut FILE (--y VALUE | --x VALUE) [--json]
                                            width, area, centroid and Q of the part above y = VALUE
                                            (or right of x = VALUE)
@@ -29,7 +34,13 @@ const USAGE = `Usage:
                                            degrees from +x (parallel-axis transfer)
   kern report FILE --out report.html [--pdf out.pdf] [--cut y=VALUE|x=VALUE] [--paper a4|letter]
                                            self-contained HTML report, optionally printed to PDF
-Options: --units U  (mm, cm, m, in, ft) for a DXF file that does not state its units`;
+  kern compare BASE.json PROPOSED.json [--json] [--rules en1993|aisc360] [--limits FILE]
+  kern compare FILE --variant NAME [...]   a proposal against its baseline: every property before
+                                           and after, limits with a within/beyond verdict, cautions
+  kern netsection FILE --from X,Y --to X,Y [--json]
+                                           gross and net length along a line, each hole or gap
+Options: --units U  (mm, cm, m, in, ft) for a DXF file that does not state its units
+         --variant NAME  (props, cut, inertia) a proposal of the document instead of its baseline`;
 
 export class UsageError extends Error {}
 
@@ -93,21 +104,35 @@ function err(s: string): void {
   process.stderr.write(s.endsWith('\n') ? s : s + '\n');
 }
 
-async function evaluateFile(file: string | undefined, units: string | undefined) {
+/** Read, validate and evaluate a file: its baseline, or the proposal named by --variant. */
+async function evaluateFile(file: string | undefined, flags: Parsed['flags']) {
   if (!file) throw new UsageError('missing FILE');
-  const loaded = await loadFile(file, units);
+  const units = flags.get('units');
+  const variant = flags.get('variant');
+  if (variant === true) throw new UsageError('--variant needs the name of a proposal');
+  const loaded = await loadFile(file, typeof units === 'string' ? units : undefined);
   if (!loaded.ok) {
     err(`${file}: the section cannot be read:`);
     for (const m of loaded.messages) err(`  ${m}`);
     return null;
   }
-  const ev = evaluateDocument(loaded.doc);
+  let doc = loaded.doc;
+  if (variant !== undefined) {
+    try {
+      doc = sectionOf(loaded.doc, variant);
+    } catch (e) {
+      if (!(e instanceof VariantError)) throw e;
+      err(`${file}: ${e.message}`);
+      return null;
+    }
+  }
+  const ev = evaluateDocument(doc);
   if (!ev.props) {
     err(`${file}: ${ev.message ?? 'the section has no area'}`);
     for (const w of ev.warnings) err(`  warning: ${formatIssue(w)}`);
     return null;
   }
-  return { doc: loaded.doc, ev, props: ev.props, warnings: loaded.warnings };
+  return { doc, ev, props: ev.props, warnings: loaded.warnings };
 }
 
 
@@ -115,8 +140,8 @@ export async function main(argv: string[]): Promise<number> {
   const [cmd, ...rest] = argv;
   try {
     if (cmd === 'props') {
-      const a = parseArgs(rest, ['units']);
-      const r = await evaluateFile(a.positional[0], a.flags.get('units') as string | undefined);
+      const a = parseArgs(rest, ['units', 'variant']);
+      const r = await evaluateFile(a.positional[0], a.flags);
       if (!r) return 2;
       if (a.flags.has('json')) {
         out(JSON.stringify(propsJson(r.doc, r.ev, r.props, r.warnings), null, 2));
@@ -133,13 +158,13 @@ export async function main(argv: string[]): Promise<number> {
       return 0;
     }
     if (cmd === 'cut') {
-      const a = parseArgs(rest, ['x', 'y', 'units']);
+      const a = parseArgs(rest, ['x', 'y', 'units', 'variant']);
       const xs = a.flags.get('x'), ys = a.flags.get('y');
       if ((xs === undefined) === (ys === undefined)) throw new UsageError('give exactly one of --y VALUE or --x VALUE');
       const raw = (xs ?? ys) as string | true;
       const at = typeof raw === 'string' && raw.trim() !== '' ? Number(raw) : NaN;
       if (!Number.isFinite(at)) throw new UsageError(`--${xs !== undefined ? 'x' : 'y'} needs a finite number, got "${raw === true ? '' : raw}"`);
-      const r = await evaluateFile(a.positional[0], a.flags.get('units') as string | undefined);
+      const r = await evaluateFile(a.positional[0], a.flags);
       if (!r) return 2;
       const c = cutSection(r.ev.region, xs !== undefined ? 'x' : 'y', at, r.props);
       const result = { at: c.at, width: c.width, area: c.area, centroid: c.centroid, Q: c.Q };
@@ -159,12 +184,12 @@ export async function main(argv: string[]): Promise<number> {
       return 0;
     }
     if (cmd === 'inertia') {
-      const a = parseArgs(rest, ['through', 'angle', 'units']);
+      const a = parseArgs(rest, ['through', 'angle', 'units', 'variant']);
       const through = String(a.flags.get('through') ?? '0,0').split(',').map((v) => (v.trim() === '' ? NaN : Number(v)));
       const angle = Number(a.flags.get('angle') ?? 0);
       if (through.length !== 2 || !through.every(Number.isFinite)) throw new UsageError('--through needs two numbers, e.g. --through 0,12.5');
       if (!Number.isFinite(angle)) throw new UsageError('--angle needs a number of degrees');
-      const r = await evaluateFile(a.positional[0], a.flags.get('units') as string | undefined);
+      const r = await evaluateFile(a.positional[0], a.flags);
       if (!r) return 2;
       const I = inertiaAboutAxis(r.props, through[0], through[1], (angle * Math.PI) / 180);
       if (a.flags.has('json')) out(JSON.stringify({ through: { x: through[0], y: through[1] }, angle, I }, null, 2));
@@ -175,6 +200,8 @@ export async function main(argv: string[]): Promise<number> {
       const mod = await import('./report');
       return await mod.reportCommand(rest);
     }
+    if (cmd === 'compare') return await (await import('./compare')).compareCommand(rest);
+    if (cmd === 'netsection') return await (await import('./netsection')).netsectionCommand(rest);
     if (cmd === undefined || cmd === 'help' || cmd === '--help' || cmd === '-h') {
       out(USAGE);
       return cmd === undefined ? 2 : 0;

@@ -39,3 +39,8 @@ export { regionSegments, segmentIntersections, segmentMidpoint, segmentBox, type
 export { unionBounds, regionsBounds } from './geometry/bounds';
 export { filletCorner, filletPolygonCorner, pathEndDirection, tangentArc, type FilletResult, type FilletPath, type FilletSegment } from './geometry/fillet';
 export { catalogueSeries, catalogueSize, catalogueProfile, CatalogueError, type CatalogueSeries, type CatalogueSize, type CatalogueOptions } from './catalogue';
+export { compareSections, comparisonRow, evaluateLimits, overallVerdict, exampleLimits, EXAMPLE_LIMITS_NOTE, comparisonCatalog, CRITICAL_FIBRE_PROPERTIES, validateLimits } from './compare';
+export type { SectionComparison, PropertyChange, LimitResult, LimitStatus, Verdict, CentroidShift, AxesRotation } from './compare';
+export { analyseCutouts, sectionCautions, CUTOUT_CAUTION_TEXT, HOLE_CHECK_NOTE, HOLE_RULE_SETS } from './cautions';
+export type { Caution, CautionKind, CautionSeverity, CutoutFindings, InputShape, HoleRuleSetId } from './cautions';
+export { netSection, describeGap, NetSectionError, NET_SECTION_PURPOSE, NET_SECTION_CAUTION, type NetSection, type NetGap, type GapKind } from './netsection';

@@ -35,6 +35,19 @@ describe('kern props', () => {
     close(j.area, 20000 - Math.PI * 400, 1e-15);
   });
 
+  it('reports the baseline of a file with proposals, and a proposal with --variant', () => {
+    const file = 'tests/fixtures/plate-proposals.json';
+    const base = JSON.parse(kern('props', file, '--json').out);
+    const cope = JSON.parse(kern('props', file, '--variant', 'Corner cope', '--json').out);
+    // Composite method (Hibbeler, Statics, Sec. 9.3): plate 200 × 100 less the Ø40 bore; the cope
+    // takes a further 30 × 20 corner.
+    close(base.area, 20000 - Math.PI * 400, 1e-12);
+    close(cope.area, 20000 - Math.PI * 400 - 600, 1e-12);
+    const bad = kern('props', file, '--variant', 'Nope');
+    expect(bad.code).toBe(2);
+    expect(bad.err).toContain('there is no proposal named "Nope"; the document has "Corner cope"');
+  });
+
   it('prints a table with units and the caution', () => {
     const r = kern('props', 'tests/fixtures/plate-with-bore.json');
     expect(r.code).toBe(0);

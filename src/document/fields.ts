@@ -4,6 +4,7 @@
  * checker's fields. Every problem comes with its path; nothing is guessed.
  */
 import { fmtValue, isObj, type Issue } from '../shapes/check';
+import { validateLimits as validateLimitRecords } from '../compare/validate-limits';
 import { FORCE_UNITS, STRESS_UNITS } from './types';
 
 function finite(v: unknown): v is number {
@@ -56,26 +57,9 @@ export function validateMaterials(doc: Record<string, unknown>, shapes: readonly
   }
 }
 
-/** `limits` and `holeRules`. */
+/** `limits` (the comparison's own validation) and `holeRules`. */
 export function validateLimits(doc: Record<string, unknown>, out: Issue[]): void {
-  const ls = doc.limits;
-  if (ls !== undefined) {
-    if (!Array.isArray(ls)) out.push({ path: 'limits', message: 'limits must be a list of {property, maxLossPercent | maxGainPercent | maxShift | maxRotation}' });
-    else
-      ls.forEach((l, k) => {
-        const p = `limits[${k}]`;
-        if (!isObj(l)) return out.push({ path: p, message: 'a limit must be an object {property, ...}' });
-        if (typeof l.property !== 'string' || l.property === '') out.push({ path: `${p}.property`, message: 'name the property the limit applies to' });
-        let any = false;
-        for (const key of ['maxLossPercent', 'maxGainPercent', 'maxShift', 'maxRotation']) {
-          if (l[key] === undefined) continue;
-          any = true;
-          if (!finite(l[key]) || !((l[key] as number) >= 0)) out.push({ path: `${p}.${key}`, message: `must be a number of 0 or more, got ${fmtValue(l[key])}` });
-        }
-        if (!any) out.push({ path: p, message: 'a limit needs maxLossPercent, maxGainPercent, maxShift or maxRotation' });
-        for (const key of Object.keys(l)) if (!['property', 'maxLossPercent', 'maxGainPercent', 'maxShift', 'maxRotation'].includes(key)) out.push({ path: `${p}.${key}`, message: 'unknown field of a limit' });
-      });
-  }
+  if (doc.limits !== undefined) out.push(...validateLimitRecords(doc.limits, 'limits'));
   if (doc.holeRules !== undefined && doc.holeRules !== 'en1993' && doc.holeRules !== 'aisc360') out.push({ path: 'holeRules', message: `unknown hole rules ${fmtValue(doc.holeRules)}; use en1993 or aisc360` });
 }
 

@@ -7,11 +7,8 @@
 export const FORMAT = 'kern-section';
 export const CURRENT_VERSION = 2;
 
-export const UNITS = ['mm', 'cm', 'm', 'in', 'ft'] as const;
-export type Units = (typeof UNITS)[number];
-
-/** Length of one unit in metres. */
-export const UNIT_IN_METRES: Record<Units, number> = { mm: 1e-3, cm: 1e-2, m: 1, in: 0.0254, ft: 0.3048 };
+export { UNITS, UNIT_IN_METRES, type Units } from '../units';
+import type { Units } from '../units';
 
 export { OPS, type Op, type Point } from '../shapes/base';
 export type { PolygonShape } from '../shapes/polygon';
@@ -61,17 +58,13 @@ export interface Variant {
 }
 
 /**
- * An allowed change from the baseline to a proposal. `property` is a property key (as in
- * `props --json`), or `centroid` (with `maxShift`, a length) or `principalAxes` (with
- * `maxRotation`, degrees). Percent limits are of the baseline value.
+ * An allowed change from the baseline to a proposal (see src/compare/limits.ts): `property` is a
+ * property key as in `props --json` with `maxLossPercent`/`maxGainPercent` (of the baseline
+ * value), `centroid` or a coordinate with `maxShift` (a length), or `theta` with `maxRotation`
+ * (degrees).
  */
-export interface Limit {
-  property: string;
-  maxLossPercent?: number;
-  maxGainPercent?: number;
-  maxShift?: number;
-  maxRotation?: number;
-}
+export type { Limit } from '../compare/limits';
+import type { Limit } from '../compare/limits';
 
 /** A material: E and fy in the document's stress unit, density in kg/m³. */
 export interface Material {

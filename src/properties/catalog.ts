@@ -3,7 +3,7 @@
  * its length dimension (area is length², Ix is length⁴, θ has none), and one formatting function
  * that the panel, the CLI table and the report all use, so their digits always agree.
  */
-import type { Units } from '../document/types';
+import type { Units } from '../units';
 import type { SectionProperties } from './section';
 
 export interface PropertyInfo {
