@@ -17,6 +17,7 @@ import {
   type SectionProperties,
 } from '../src';
 import { CAUTION_TEXT } from '../src/report/caution';
+import { oneSidedWidths } from '../src/moments/width';
 
 const USAGE = `Usage:
   kern props FILE [--json]                 section properties of a section document (.json)
@@ -167,7 +168,9 @@ export async function main(argv: string[]): Promise<number> {
       const r = await evaluateFile(a.positional[0], a.flags.get('units') as string | undefined);
       if (!r) return 2;
       const c = cutSection(r.ev.region, xs !== undefined ? 'x' : 'y', at, r.props);
-      const result = { at: c.at, width: c.width, area: c.area, centroid: c.centroid, Q: c.Q };
+      // One-sided widths at a level where b jumps (src/moments/width.ts): just above/below, or right/left for --x.
+      const sides = oneSidedWidths(r.ev.region, xs !== undefined ? 'x' : 'y', at);
+      const result = { at: c.at, width: c.width, width_above: sides.above, width_below: sides.below, area: c.area, centroid: c.centroid, Q: c.Q };
       if (a.flags.has('json')) out(JSON.stringify(result, null, 2));
       else {
         const side = xs !== undefined ? `right of x = ${at}` : `above y = ${at}`;

@@ -19,6 +19,8 @@ export {
   type CutResult,
 } from './properties/section';
 export { PROPERTY_CATALOG, formatNumber, formatProperty, unitText, propertyByKey, DISPLAY_SIGFIGS, type PropertyInfo } from './properties/catalog';
+export { formatQuantity, parseFormatted, sectionSize, GEOMETRY_SIGFIGS, ZERO_RELATIVE } from './properties/catalog';
+export { oneSidedWidths, cutWithSides, qbWidth, type OneSidedWidths, type SidedCut, type QbSide } from './moments/width';
 export { regionMoments, polygonMoments, type RawMoments } from './moments/kernel';
 export { momentsAbove } from './moments/cut';
 export * from './geometry/contour';
