@@ -82,7 +82,8 @@ const SUP_MINUS = '⁻';
 /** Between the mantissa and the power of ten: "5.369 × 10⁶". */
 const TIMES_TEN = ' × 10';
 
-function superscript(n: number): string {
+/** An integer in superscript digits: superscript(-10) = '⁻¹⁰'. */
+export function superscript(n: number): string {
   const s = String(Math.abs(n))
     .split('')
     .map((d) => SUP_DIGITS[Number(d)])

@@ -1,0 +1,671 @@
+/**
+ * Dimensions for a drawing of the section: the diameter and position of each hole, the extent and
+ * position of other openings and of notches cut from an edge, and the thickness of each plate part
+ * where it can be found. Two steps, both pure data in world coordinates (y up):
+ *
+ * 1. `findDimensionFeatures(region, cuts)` reads the section (and the regions of the shapes that
+ *    were subtracted from it) and lists what deserves a dimension. It does not depend on a scale.
+ *    - Holes are the inner loops of the region: a loop of arcs on one circle is a round hole,
+ *      anything else an opening with its extent.
+ *    - A subtracted shape that is not a whole hole but reaches into the section is a notch: a
+ *      round one keeps its diameter and centre, any other gives the positions of its edges that
+ *      lie inside the section's extent.
+ *    - A plate part is a pair of straight boundary edges that face each other across material,
+ *      parallel and overlapping over at least 1.5 × their distance, with no boundary between them;
+ *      the thickness is that distance. One pair of supporting lines gives one feature. A pair
+ *      made of the section's own extreme faces is left to the overall dimensions.
+ * 2. `layoutDimensions(features, region, { mm })` places them for a drawing in which `mm` world
+ *    units make one millimetre of paper (or of screen, for the canvas): the overall width below
+ *    and height to the right; positions as running dimensions from the section's left and bottom
+ *    extremes (ISO 129-1 superimposed running dimensions: one line from an origin circle, the
+ *    value at each arrowhead), x below the width and y on the left; diameters inside the hole or
+ *    on a leader; thicknesses across the plate with the value outside. Every text is checked
+ *    against the section, the other texts and the lines already drawn; a dimension that finds no
+ *    free place is left off and listed in `omitted` with the reason, and at most `maxThickness`
+ *    thicknesses are drawn (distinct values first), so a busy section thins out instead of
+ *    cluttering.
+ *
+ * The report's figure draws the result as SVG (figure.ts); the editor can draw the same
+ * primitives on its canvas.
+ */
+import type { Bounds, Contour, Region } from '../geometry/contour';
+import { arcFromChord, contourPolyline, regionBounds } from '../geometry/contour';
+import { formatQuantity, GEOMETRY_SIGFIGS } from '../properties/catalog';
+
+// ---------------------------------------------------------------------------------------------
+// Features
+
+export type DimensionFeature =
+  /** A round hole, or a round cut that breaks an edge (`notch` true): centre and diameter. */
+  | { kind: 'hole'; cx: number; cy: number; diameter: number; notch: boolean }
+  /** A hole that is not round: its extent. */
+  | { kind: 'opening'; xmin: number; xmax: number; ymin: number; ymax: number }
+  /** A cut from an edge: the positions of its edges that lie inside the section's extent. */
+  | { kind: 'notch'; x: number[]; y: number[]; xmin: number; xmax: number; ymin: number; ymax: number }
+  /**
+   * A plate part: from (ax, ay) on one face straight across to (bx, by) on the other; `alternatives`
+   * are other places along the same faces where the same measure is clear of the boundary.
+   */
+  | { kind: 'thickness'; ax: number; ay: number; bx: number; by: number; t: number; alternatives: [number, number, number, number][] };
+
+type Hole = Extract<DimensionFeature, { kind: 'hole' }>;
+type Plate = Extract<DimensionFeature, { kind: 'thickness' }>;
+
+interface Circle {
+  cx: number;
+  cy: number;
+  r: number;
+}
+
+/** The circle a loop runs round, when every segment is an arc of it and they sweep a full turn. */
+export function loopCircle(c: Contour): Circle | null {
+  const n = c.xy.length >> 1;
+  if (!c.bulge || n < 2) return null;
+  let first: Circle | null = null;
+  let sweep = 0;
+  for (let i = 0; i < n; i++) {
+    const bulge = c.bulge[i];
+    if (bulge === 0) return null;
+    const j = (i + 1) % n;
+    const phi = 4 * Math.atan(bulge);
+    const a = arcFromChord(c.xy[2 * i], c.xy[2 * i + 1], c.xy[2 * j], c.xy[2 * j + 1], phi);
+    sweep += phi;
+    if (!first) first = { cx: a.cx, cy: a.cy, r: a.r };
+    else if (Math.hypot(a.cx - first.cx, a.cy - first.cy) > 1e-9 * first.r || Math.abs(a.r - first.r) > 1e-9 * first.r) return null;
+  }
+  return first && Math.abs(Math.abs(sweep) - 2 * Math.PI) < 1e-9 ? first : null;
+}
+
+/** Signed area of one loop (chords plus circular segments); holes are negative. */
+function signedArea(c: Contour): number {
+  const n = c.xy.length >> 1;
+  let a = 0;
+  for (let i = 0; i < n; i++) {
+    const j = (i + 1) % n;
+    const x0 = c.xy[2 * i], y0 = c.xy[2 * i + 1], x1 = c.xy[2 * j], y1 = c.xy[2 * j + 1];
+    a += (x0 * y1 - x1 * y0) / 2;
+    const bulge = c.bulge ? c.bulge[i] : 0;
+    if (bulge !== 0) {
+      const phi = 4 * Math.atan(bulge), al = Math.abs(phi);
+      const r = Math.hypot(x1 - x0, y1 - y0) / (2 * Math.sin(al / 2));
+      a += (Math.sign(phi) * r * r * (al - Math.sin(al))) / 2;
+    }
+  }
+  return a;
+}
+
+const near = (a: number, b: number, tol: number) => Math.abs(a - b) <= tol;
+
+interface Edge {
+  ax: number;
+  ay: number;
+  bx: number;
+  by: number;
+  dx: number;
+  dy: number;
+  len: number;
+}
+
+function straightEdges(region: Region): Edge[] {
+  const out: Edge[] = [];
+  for (const c of region) {
+    const n = c.xy.length >> 1;
+    for (let i = 0; i < n; i++) {
+      if (c.bulge && c.bulge[i] !== 0) continue;
+      const j = (i + 1) % n;
+      const ax = c.xy[2 * i], ay = c.xy[2 * i + 1], bx = c.xy[2 * j], by = c.xy[2 * j + 1];
+      const len = Math.hypot(bx - ax, by - ay);
+      if (len > 0) out.push({ ax, ay, bx, by, dx: (bx - ax) / len, dy: (by - ay) / len, len });
+    }
+  }
+  return out;
+}
+
+function segmentsCross(ax: number, ay: number, bx: number, by: number, cx: number, cy: number, dx: number, dy: number): boolean {
+  const d1 = (bx - ax) * (cy - ay) - (by - ay) * (cx - ax);
+  const d2 = (bx - ax) * (dy - ay) - (by - ay) * (dx - ax);
+  const d3 = (dx - cx) * (ay - cy) - (dy - cy) * (ax - cx);
+  const d4 = (dx - cx) * (by - cy) - (dy - cy) * (bx - cx);
+  return d1 * d2 < 0 && d3 * d4 < 0;
+}
+
+/** Nonzero winding of the outline polylines about (x, y): inside the material. */
+function inside(polys: readonly number[][], x: number, y: number): boolean {
+  let w = 0;
+  for (const p of polys) {
+    const n = p.length >> 1;
+    for (let i = 0; i < n; i++) {
+      const j = (i + 1) % n;
+      const x0 = p[2 * i], y0 = p[2 * i + 1], x1 = p[2 * j], y1 = p[2 * j + 1];
+      const side = (x1 - x0) * (y - y0) - (x - x0) * (y1 - y0);
+      if (y0 <= y) {
+        if (y1 > y && side > 0) w++;
+      } else if (y1 <= y && side < 0) w--;
+    }
+  }
+  return w !== 0;
+}
+
+/** True when the segment p→q (less a sliver at each end) crosses no outline edge. */
+function clearAcross(polys: readonly number[][], px: number, py: number, qx: number, qy: number): boolean {
+  const ex = (qx - px) * 1e-6, ey = (qy - py) * 1e-6;
+  for (const p of polys) {
+    const n = p.length >> 1;
+    for (let i = 0; i < n; i++) {
+      const j = (i + 1) % n;
+      if (segmentsCross(px + ex, py + ey, qx - ex, qy - ey, p[2 * i], p[2 * i + 1], p[2 * j], p[2 * j + 1])) return false;
+    }
+  }
+  return true;
+}
+
+/** Above this many straight edges the plate search (pairs of edges) is skipped. */
+export const MAX_EDGES_FOR_PLATES = 2000;
+
+function plateThicknesses(region: Region, b: Bounds, size: number, polys: readonly number[][]): Plate[] {
+  const edges = straightEdges(region);
+  if (edges.length > MAX_EDGES_FOR_PLATES) return [];
+  const tol = 1e-9 * size;
+  const found = new Map<string, { f: Plate; overlap: number }>();
+  const onExtreme = (e: Edge) =>
+    (near(e.ay, b.ymin, tol) && near(e.by, b.ymin, tol)) ||
+    (near(e.ay, b.ymax, tol) && near(e.by, b.ymax, tol)) ||
+    (near(e.ax, b.xmin, tol) && near(e.bx, b.xmin, tol)) ||
+    (near(e.ax, b.xmax, tol) && near(e.bx, b.xmax, tol));
+  for (let i = 0; i < edges.length; i++) {
+    const e = edges[i];
+    // Material lies to the left of every edge (outer loops CCW, holes CW).
+    const nx = -e.dy, ny = e.dx;
+    for (let k = 0; k < edges.length; k++) {
+      const g = edges[k];
+      if (k === i || e.dx * g.dx + e.dy * g.dy > -(1 - 1e-12)) continue; // antiparallel only
+      const t = (g.ax - e.ax) * nx + (g.ay - e.ay) * ny;
+      const t2 = (g.bx - e.ax) * nx + (g.by - e.ay) * ny;
+      if (!(t > tol) || Math.abs(t - t2) > tol) continue; // g must face e across the material
+      if (onExtreme(e) && onExtreme(g)) continue; // the overall dimension shows it
+      const s0 = (g.ax - e.ax) * e.dx + (g.ay - e.ay) * e.dy, s1 = (g.bx - e.ax) * e.dx + (g.by - e.ay) * e.dy;
+      const lo = Math.max(0, Math.min(s0, s1)), hi = Math.min(e.len, Math.max(s0, s1));
+      const overlap = hi - lo;
+      if (!(overlap >= 1.5 * t)) continue;
+      // One feature per pair of supporting lines (keyed by direction and both offsets).
+      const ang = Math.atan2(e.dx < 0 || (e.dx === 0 && e.dy < 0) ? -e.dy : e.dy, Math.abs(e.dx));
+      const off = (x: number, y: number) => Math.round((-x * Math.sin(ang) + y * Math.cos(ang)) / (1e-7 * size));
+      const key = `${Math.round(ang * 1e7)}:${[off(e.ax, e.ay), off(g.ax, g.ay)].sort((p, q) => p - q).join(':')}`;
+      const prev = found.get(key);
+      if (prev && prev.overlap >= overlap) continue;
+      const places: [number, number, number, number][] = [];
+      for (const f of [0.5, 0.3, 0.7, 0.15, 0.85]) {
+        const s = lo + f * overlap;
+        const ax = e.ax + s * e.dx, ay = e.ay + s * e.dy, bx = ax + t * nx, by = ay + t * ny;
+        if (inside(polys, (ax + bx) / 2, (ay + by) / 2) && clearAcross(polys, ax, ay, bx, by)) places.push([ax, ay, bx, by]);
+      }
+      if (places.length > 0) {
+        const [ax, ay, bx, by] = places[0];
+        found.set(key, { f: { kind: 'thickness', ax, ay, bx, by, t, alternatives: places.slice(1) }, overlap });
+      }
+    }
+  }
+  return [...found.values()].sort((p, q) => q.overlap - p.overlap).map((v) => v.f);
+}
+
+/**
+ * What to dimension on a section. `region` is the finished section; `cuts` are the regions of
+ * the shapes subtracted from it (without them notches are not found; holes still are).
+ */
+export function findDimensionFeatures(region: Region, cuts: readonly Region[] = []): DimensionFeature[] {
+  const b = regionBounds(region);
+  if (!b) return [];
+  const size = Math.max(b.xmax - b.xmin, b.ymax - b.ymin);
+  if (!(size > 0)) return [];
+  const tol = 1e-9 * size;
+  const out: DimensionFeature[] = [];
+  const holes: (Circle | Bounds)[] = [];
+  for (const c of region) {
+    if (!(signedArea(c) < 0)) continue;
+    const circ = loopCircle(c);
+    if (circ) {
+      out.push({ kind: 'hole', cx: circ.cx, cy: circ.cy, diameter: 2 * circ.r, notch: false });
+      holes.push(circ);
+      continue;
+    }
+    const hb = regionBounds([c]);
+    if (hb) {
+      out.push({ kind: 'opening', ...hb });
+      holes.push(hb);
+    }
+  }
+  const knownHole = (circ: Circle | null, cb: Bounds) =>
+    holes.some((h) =>
+      'r' in h
+        ? !!circ && near(h.cx, circ.cx, tol) && near(h.cy, circ.cy, tol) && near(h.r, circ.r, tol)
+        : near(h.xmin, cb.xmin, tol) && near(h.xmax, cb.xmax, tol) && near(h.ymin, cb.ymin, tol) && near(h.ymax, cb.ymax, tol),
+    );
+  for (const cut of cuts) {
+    const cb = regionBounds(cut);
+    // A cut that misses the section leaves nothing to dimension.
+    if (!cb || cb.xmin >= b.xmax || cb.xmax <= b.xmin || cb.ymin >= b.ymax || cb.ymax <= b.ymin) continue;
+    const circ = cut.length === 1 ? loopCircle(cut[0]) : null;
+    if (knownHole(circ, cb)) continue;
+    if (circ) {
+      out.push({ kind: 'hole', cx: circ.cx, cy: circ.cy, diameter: 2 * circ.r, notch: true });
+      continue;
+    }
+    const x = [cb.xmin, cb.xmax].filter((v) => v > b.xmin + tol && v < b.xmax - tol);
+    const y = [cb.ymin, cb.ymax].filter((v) => v > b.ymin + tol && v < b.ymax - tol);
+    if (x.length + y.length > 0) out.push({ kind: 'notch', x, y, ...cb });
+  }
+  const polys = region.map((c) => contourPolyline(c, 1e-4 * size));
+  out.push(...plateThicknesses(region, b, size, polys));
+  return out;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Layout
+
+export interface DimLine {
+  x1: number;
+  y1: number;
+  x2: number;
+  y2: number;
+  /** 'dim' dimension line, 'ext' extension line or leader, 'centre' centre mark. */
+  style: 'dim' | 'ext' | 'centre';
+}
+
+/** A filled arrowhead with its tip at (x, y), pointing along the unit vector (dx, dy). */
+export interface DimArrow {
+  x: number;
+  y: number;
+  dx: number;
+  dy: number;
+}
+
+/** A dimension value, centred at (x, y), turned `rotate` degrees counter-clockwise. */
+export interface DimText {
+  x: number;
+  y: number;
+  text: string;
+  rotate: 0 | 90;
+  /** 'width', 'height', 'x-position', 'y-position', 'diameter', 'thickness' or 'opening'. */
+  role: string;
+  /** The value written, at full precision. */
+  value: number;
+  /** The box the text is taken to fill (world units), as used for the overlap tests. */
+  box: Bounds;
+}
+
+export interface OmittedDimension {
+  feature: DimensionFeature | { kind: 'position'; axis: 'x' | 'y'; at: number };
+  reason: string;
+}
+
+export interface DimensionLayout {
+  lines: DimLine[];
+  arrows: DimArrow[];
+  texts: DimText[];
+  /** The origin (0) of each running dimension, drawn as a small open circle. */
+  origins: { x: number; y: number }[];
+  /** Extent of everything drawn, the section included (world units). */
+  extent: Bounds;
+  omitted: OmittedDimension[];
+  /** Sizes in world units: text height, arrowhead length and width, origin circle radius. */
+  style: { text: number; arrow: number; arrowWidth: number; origin: number };
+}
+
+export interface LayoutOptions {
+  /** World units per millimetre of paper (or screen): every spacing is set in millimetres. */
+  mm: number;
+  /** Text height in millimetres (2.8 on the report). */
+  textMm?: number;
+  /** Most plate thicknesses drawn, distinct values first (default 6). */
+  maxThickness?: number;
+  /** Draw the overall width and height (default true). */
+  overall?: boolean;
+  /** Other things drawn that texts must keep clear of (world units): lines [x1, y1, x2, y2] and boxes. */
+  avoid?: { lines?: readonly (readonly [number, number, number, number])[]; boxes?: readonly Bounds[] };
+}
+
+// Spacings in millimetres.
+/** Distance of the overall width and height lines from the section. */
+export const FIRST_LANE_MM = 8;
+const LANE_STEP = 7; // the running x dimension, below the overall width
+const EXT_GAP = 1; // gap between the object and an extension line
+const EXT_OVER = 1.5; // extension line beyond the dimension line
+const ARROW = 2.4;
+const ARROW_W = 0.9;
+const CHAR_W = 0.56; // mean width of a digit, in text heights (sans-serif)
+
+function segmentHitsBox(x0: number, y0: number, x1: number, y1: number, b: Bounds): boolean {
+  // Liang–Barsky clipping against the open box.
+  let t0 = 0, t1 = 1;
+  const dx = x1 - x0, dy = y1 - y0;
+  const p = [-dx, dx, -dy, dy];
+  const q = [x0 - b.xmin, b.xmax - x0, y0 - b.ymin, b.ymax - y0];
+  for (let i = 0; i < 4; i++) {
+    if (p[i] === 0) {
+      if (q[i] <= 0) return false;
+    } else {
+      const r = q[i] / p[i];
+      if (p[i] < 0) t0 = Math.max(t0, r);
+      else t1 = Math.min(t1, r);
+      if (t0 >= t1) return false;
+    }
+  }
+  return true;
+}
+
+/**
+ * The lowest (dir −1) or highest y of the outline on the vertical line x = at (axis 'x'), or the
+ * leftmost / rightmost x on the horizontal line y = at (axis 'y'), from the drawing polylines;
+ * `fallback` when the line misses the outline. For drawing only.
+ */
+function extremeAlong(polys: readonly number[][], axis: 'x' | 'y', at: number, dir: 1 | -1, fallback: number, tol: number): number {
+  let best = NaN;
+  const take = (v: number) => {
+    if (Number.isNaN(best) || (dir < 0 ? v < best : v > best)) best = v;
+  };
+  const [u, v] = axis === 'x' ? [0, 1] : [1, 0];
+  for (const p of polys) {
+    const n = p.length >> 1;
+    for (let i = 0; i < n; i++) {
+      const j = (i + 1) % n;
+      const a = p[2 * i + u], b = p[2 * j + u];
+      if (Math.abs(a - at) <= tol) take(p[2 * i + v]);
+      if ((a - at) * (b - at) < 0) take(p[2 * i + v] + ((at - a) / (b - a)) * (p[2 * j + v] - p[2 * i + v]));
+    }
+  }
+  return Number.isNaN(best) ? fallback : best;
+}
+
+const boxesMeet = (a: Bounds, b: Bounds, pad = 0) => a.xmin - pad < b.xmax && a.xmax + pad > b.xmin && a.ymin - pad < b.ymax && a.ymax + pad > b.ymin;
+
+/** What a new text must keep clear of: the section, the texts and the lines placed so far. */
+class Obstacles {
+  readonly boxes: Bounds[] = [];
+  readonly segs: [number, number, number, number][] = [];
+  constructor(
+    readonly polys: readonly number[][],
+    private readonly b: Bounds,
+  ) {}
+
+  free(box: Bounds, avoidSection: boolean): boolean {
+    if (this.boxes.some((o) => boxesMeet(box, o))) return false;
+    if (this.segs.some((s) => segmentHitsBox(s[0], s[1], s[2], s[3], box))) return false;
+    if (!avoidSection || !boxesMeet(box, this.b)) return true;
+    const cx = (box.xmin + box.xmax) / 2, cy = (box.ymin + box.ymax) / 2;
+    for (const [x, y] of [[cx, cy], [box.xmin, box.ymin], [box.xmax, box.ymin], [box.xmin, box.ymax], [box.xmax, box.ymax]]) if (inside(this.polys, x, y)) return false;
+    for (const p of this.polys) {
+      const n = p.length >> 1;
+      for (let i = 0; i < n; i++) {
+        const j = (i + 1) % n;
+        if (segmentHitsBox(p[2 * i], p[2 * i + 1], p[2 * j], p[2 * j + 1], box)) return false;
+      }
+    }
+    return true;
+  }
+
+  /** True when the segment passes through no text placed so far. */
+  clearOfTexts(x0: number, y0: number, x1: number, y1: number): boolean {
+    return !this.boxes.some((o) => segmentHitsBox(x0, y0, x1, y1, o));
+  }
+}
+
+/**
+ * Place the dimensions of `features` around `region`. Pure: the same input gives the same
+ * drawing. See the header for the rules.
+ */
+export function layoutDimensions(features: readonly DimensionFeature[], region: Region, opts: LayoutOptions): DimensionLayout {
+  const b = regionBounds(region);
+  const mm = opts.mm;
+  const th = (opts.textMm ?? 2.8) * mm;
+  const out: DimensionLayout = {
+    lines: [],
+    arrows: [],
+    texts: [],
+    origins: [],
+    extent: b ?? { xmin: 0, xmax: 0, ymin: 0, ymax: 0 },
+    omitted: [],
+    style: { text: th, arrow: ARROW * mm, arrowWidth: ARROW_W * mm, origin: 0.9 * mm },
+  };
+  if (!b || !(mm > 0) || !Number.isFinite(mm)) return out;
+  const size = Math.max(b.xmax - b.xmin, b.ymax - b.ymin);
+  const fmt = (v: number) => formatQuantity(v, 1, size, GEOMETRY_SIGFIGS);
+  const obs = new Obstacles(
+    region.map((c) => contourPolyline(c, Math.min(1e-3 * size, 0.05 * mm))),
+    b,
+  );
+  for (const l of opts.avoid?.lines ?? []) obs.segs.push([l[0], l[1], l[2], l[3]]);
+  for (const bx of opts.avoid?.boxes ?? []) obs.boxes.push(bx);
+  const widthOf = (s: string) => [...s].length * CHAR_W * th + 0.6 * mm;
+  const textBox = (x: number, y: number, s: string, rotate: 0 | 90): Bounds => {
+    const w = widthOf(s), h = th * 1.1;
+    return rotate === 0 ? { xmin: x - w / 2, xmax: x + w / 2, ymin: y - h / 2, ymax: y + h / 2 } : { xmin: x - h / 2, xmax: x + h / 2, ymin: y - w / 2, ymax: y + w / 2 };
+  };
+  const line = (x1: number, y1: number, x2: number, y2: number, style: DimLine['style']) => {
+    out.lines.push({ x1, y1, x2, y2, style });
+    if (style !== 'centre') obs.segs.push([x1, y1, x2, y2]);
+  };
+  const arrow = (x: number, y: number, dx: number, dy: number) => out.arrows.push({ x, y, dx, dy });
+  const text = (x: number, y: number, s: string, rotate: 0 | 90, role: string, value: number) => {
+    const box = textBox(x, y, s, rotate);
+    out.texts.push({ x, y, text: s, rotate, role, value, box });
+    obs.boxes.push(box);
+  };
+
+  // Where an extension line starts: the section's point nearest the dimension line along it.
+  const polys = obs.polys;
+  const lowestAt = (x: number) => extremeAlong(polys, 'x', x, -1, b.ymin, 1e-6 * size);
+  const leftmostAt = (y: number) => extremeAlong(polys, 'y', y, -1, b.xmin, 1e-6 * size);
+  const rightmostAt = (y: number) => extremeAlong(polys, 'y', y, 1, b.xmax, 1e-6 * size);
+
+  // Overall width (below) and height (right): first, so nothing else takes their place.
+  if (opts.overall !== false) {
+    const yd = b.ymin - FIRST_LANE_MM * mm;
+    line(b.xmin, lowestAt(b.xmin) - EXT_GAP * mm, b.xmin, yd - EXT_OVER * mm, 'ext');
+    line(b.xmax, lowestAt(b.xmax) - EXT_GAP * mm, b.xmax, yd - EXT_OVER * mm, 'ext');
+    line(b.xmin, yd, b.xmax, yd, 'dim');
+    arrow(b.xmin, yd, -1, 0);
+    arrow(b.xmax, yd, 1, 0);
+    text((b.xmin + b.xmax) / 2, yd + 1 * mm + th / 2, fmt(b.xmax - b.xmin), 0, 'width', b.xmax - b.xmin);
+    const xd = b.xmax + FIRST_LANE_MM * mm;
+    line(rightmostAt(b.ymin) + EXT_GAP * mm, b.ymin, xd + EXT_OVER * mm, b.ymin, 'ext');
+    line(rightmostAt(b.ymax) + EXT_GAP * mm, b.ymax, xd + EXT_OVER * mm, b.ymax, 'ext');
+    line(xd, b.ymin, xd, b.ymax, 'dim');
+    arrow(xd, b.ymax, 0, 1);
+    arrow(xd, b.ymin, 0, -1);
+    text(xd - 1 * mm - th / 2, (b.ymin + b.ymax) / 2, fmt(b.ymax - b.ymin), 90, 'height', b.ymax - b.ymin);
+  }
+
+  // Centre marks, then the positions (running dimensions), then diameters, openings, plates.
+  const holes = features.filter((f): f is Hole => f.kind === 'hole');
+  for (const f of holes) {
+    const r = f.diameter / 2;
+    const m = r + Math.min(r, 1.5 * mm);
+    line(f.cx - m, f.cy, f.cx + m, f.cy, 'centre');
+    line(f.cx, f.cy - m, f.cx, f.cy + m, 'centre');
+  }
+
+  const xs: { at: number; rank: number; from: number }[] = [], ys: { at: number; rank: number; from: number }[] = [];
+  for (const f of features) {
+    if (f.kind === 'hole') {
+      xs.push({ at: f.cx, rank: 0, from: f.cy - f.diameter / 2 });
+      ys.push({ at: f.cy, rank: 0, from: f.cx - f.diameter / 2 });
+    } else if (f.kind === 'opening' || f.kind === 'notch') {
+      const rank = f.kind === 'opening' ? 1 : 2;
+      const px = f.kind === 'opening' ? [f.xmin, f.xmax] : f.x;
+      const py = f.kind === 'opening' ? [f.ymin, f.ymax] : f.y;
+      for (const x of px) xs.push({ at: x, rank, from: Math.max(f.ymin, b.ymin) });
+      for (const y of py) ys.push({ at: y, rank, from: Math.max(f.xmin, b.xmin) });
+    }
+  }
+  runningDimension('x', xs, b.ymin - (FIRST_LANE_MM + LANE_STEP) * mm);
+  runningDimension('y', ys, b.xmin - FIRST_LANE_MM * mm);
+
+  function runningDimension(axis: 'x' | 'y', items: { at: number; rank: number; from: number }[], lane: number): void {
+    const datum = axis === 'x' ? b!.xmin : b!.ymin;
+    const tol = 1e-9 * size;
+    // One entry per distinct position, keeping the most important reason and the nearest start.
+    const uniq: { at: number; rank: number; from: number }[] = [];
+    for (const it of [...items].sort((p, q) => p.at - q.at || p.rank - q.rank)) {
+      const last = uniq[uniq.length - 1];
+      if (last && Math.abs(last.at - it.at) <= tol) {
+        last.from = Math.min(last.from, it.from);
+        continue;
+      }
+      if (Math.abs(it.at - datum) > tol) uniq.push({ ...it });
+    }
+    if (uniq.length === 0) return;
+    // Values at the arrowheads, beyond the line; a value that would touch a kept one is left off.
+    const kept: { at: number; from: number; box: Bounds; s: string }[] = [];
+    for (const it of [...uniq].sort((p, q) => p.rank - q.rank || p.at - q.at)) {
+      const s = fmt(it.at - datum);
+      const w = widthOf(s);
+      // Beside the extension line at the arrowhead: before it, or after it if that is taken.
+      let placed = false;
+      for (const sd of [-1, 1]) {
+        const off = sd * (0.4 * mm + th / 2);
+        const box = axis === 'x' ? textBox(it.at + off, lane - 1 * mm - w / 2, s, 90) : textBox(lane - 1 * mm - w / 2, it.at - off, s, 0);
+        if (kept.some((k) => boxesMeet(box, k.box, 0.4 * mm)) || !obs.free(box, true)) continue;
+        kept.push({ at: it.at, from: it.from, box, s });
+        placed = true;
+        break;
+      }
+      if (!placed) out.omitted.push({ feature: { kind: 'position', axis, at: it.at }, reason: 'too close to another position to write its value' });
+    }
+    if (kept.length === 0) return;
+    const far = Math.max(...kept.map((k) => k.at));
+    if (axis === 'x') {
+      out.origins.push({ x: datum, y: lane });
+      line(datum, lowestAt(datum) - EXT_GAP * mm, datum, lane - EXT_OVER * mm, 'ext');
+      line(datum, lane, far, lane, 'dim');
+      for (const k of kept) {
+        line(k.at, k.from - EXT_GAP * mm, k.at, lane - EXT_OVER * mm, 'ext');
+        arrow(k.at, lane, 1, 0);
+        text((k.box.xmin + k.box.xmax) / 2, (k.box.ymin + k.box.ymax) / 2, k.s, 90, 'x-position', k.at - datum);
+      }
+    } else {
+      out.origins.push({ x: lane, y: datum });
+      line(leftmostAt(datum) - EXT_GAP * mm, datum, lane - EXT_OVER * mm, datum, 'ext');
+      line(lane, datum, lane, far, 'dim');
+      for (const k of kept) {
+        line(k.from - EXT_GAP * mm, k.at, lane - EXT_OVER * mm, k.at, 'ext');
+        arrow(lane, k.at, 0, 1);
+        text((k.box.xmin + k.box.xmax) / 2, (k.box.ymin + k.box.ymax) / 2, k.s, 0, 'y-position', k.at - datum);
+      }
+    }
+  }
+
+  for (const f of holes) placeDiameter(f);
+
+  function placeDiameter(f: Hole): void {
+    const r = f.diameter / 2;
+    const s = `Ø${fmt(f.diameter)}`;
+    const w = widthOf(s);
+    // Inside the hole, on a diameter line above the centre, when it fits with its arrows.
+    if (!f.notch && 2 * r > w + 2 * ARROW * mm && r > 2 * th) {
+      const y = f.cy + 0.45 * r;
+      const half = Math.sqrt(r * r - (0.45 * r) ** 2);
+      const ty = y + 0.5 * mm + th / 2;
+      if (obs.free(textBox(f.cx, ty, s, 0), false)) {
+        line(f.cx - half, y, f.cx + half, y, 'dim');
+        arrow(f.cx - half, y, -1, 0);
+        arrow(f.cx + half, y, 1, 0);
+        text(f.cx, ty, s, 0, 'diameter', f.diameter);
+        return;
+      }
+    }
+    // Otherwise on a leader pointing at the centre, from outside, with the value on its shoulder.
+    for (const reach of [6, 11, 16]) {
+      for (const deg of [45, 135, -45, -135, 90, -90, 0, 180]) {
+        const a = (deg * Math.PI) / 180, ux = Math.cos(a), uy = Math.sin(a);
+        const px = f.cx + r * ux, py = f.cy + r * uy;
+        const kx = px + reach * mm * ux, ky = py + reach * mm * uy;
+        const dir = ux >= -1e-9 ? 1 : -1;
+        const sx = kx + dir * 1.5 * mm;
+        const tx = sx + (dir * w) / 2, ty = ky + 0.5 * mm + th / 2;
+        if (!obs.free(textBox(tx, ty, s, 0), true)) continue;
+        if (!obs.clearOfTexts(px + 0.3 * mm * ux, py + 0.3 * mm * uy, kx, ky)) continue;
+        line(px, py, kx, ky, 'ext');
+        line(kx, ky, sx + dir * w, ky, 'ext');
+        arrow(px, py, -ux, -uy);
+        text(tx, ty, s, 0, 'diameter', f.diameter);
+        return;
+      }
+    }
+    out.omitted.push({ feature: f, reason: 'no free place for the diameter' });
+  }
+
+  // Openings that are not round: width × height written inside, when it fits.
+  for (const f of features) {
+    if (f.kind !== 'opening') continue;
+    const s = `${fmt(f.xmax - f.xmin)} × ${fmt(f.ymax - f.ymin)}`;
+    const cx = (f.xmin + f.xmax) / 2, cy = (f.ymin + f.ymax) / 2;
+    const box = textBox(cx, cy, s, 0);
+    if (box.xmax - box.xmin < f.xmax - f.xmin && box.ymax - box.ymin < f.ymax - f.ymin && obs.free(box, false)) text(cx, cy, s, 0, 'opening', f.xmax - f.xmin);
+    else out.omitted.push({ feature: f, reason: 'too small to write its size in' });
+  }
+
+  // Plate thicknesses: one of each value first, then repeats, at most maxThickness.
+  const plates = features.filter((f): f is Plate => f.kind === 'thickness');
+  const values = new Set<string>();
+  const firsts = plates.filter((p) => !values.has(fmt(p.t)) && !!values.add(fmt(p.t)));
+  const maxT = opts.maxThickness ?? 6;
+  let drawn = 0;
+  for (const p of [...firsts, ...plates.filter((p) => !firsts.includes(p))]) {
+    if (drawn >= maxT) out.omitted.push({ feature: p, reason: 'thinned out: enough thicknesses are shown' });
+    else if (placeThickness(p)) drawn++;
+    else out.omitted.push({ feature: p, reason: 'no free place for the value' });
+  }
+
+  function placeThickness(plate: Plate): boolean {
+    for (const [ax, ay, bx, by] of [[plate.ax, plate.ay, plate.bx, plate.by], ...plate.alternatives]) {
+      if (placeThicknessAt({ ...plate, ax, ay, bx, by })) return true;
+    }
+    return false;
+  }
+
+  function placeThicknessAt(p: Plate): boolean {
+    const ux = (p.bx - p.ax) / p.t, uy = (p.by - p.ay) / p.t;
+    const s = fmt(p.t);
+    const over = 4 * mm;
+    const from = { x: p.ax - ux * over, y: p.ay - uy * over }, to = { x: p.bx + ux * over, y: p.by + uy * over };
+    const w = widthOf(s), h = th * 1.1;
+    // Arrows outside the plate pointing in; the value beyond one face, reading horizontally.
+    for (const side of [1, -1]) {
+      const end = side === 1 ? to : from;
+      const ox = side * ux, oy = side * uy;
+      const reach = Math.abs(ox) * (w / 2) + Math.abs(oy) * (h / 2) + 0.6 * mm;
+      const tx = end.x + ox * reach, ty = end.y + oy * reach;
+      if (!obs.free(textBox(tx, ty, s, 0), true)) continue;
+      if (!obs.clearOfTexts(from.x, from.y, to.x, to.y)) continue;
+      line(from.x, from.y, to.x, to.y, 'dim');
+      arrow(p.ax, p.ay, ux, uy);
+      arrow(p.bx, p.by, -ux, -uy);
+      text(tx, ty, s, 0, 'thickness', p.t);
+      return true;
+    }
+    return false;
+  }
+
+  // Extent of everything drawn.
+  const e = { ...b };
+  const take = (x: number, y: number) => {
+    e.xmin = Math.min(e.xmin, x);
+    e.xmax = Math.max(e.xmax, x);
+    e.ymin = Math.min(e.ymin, y);
+    e.ymax = Math.max(e.ymax, y);
+  };
+  for (const l of out.lines) {
+    take(l.x1, l.y1);
+    take(l.x2, l.y2);
+  }
+  for (const t of out.texts) {
+    take(t.box.xmin, t.box.ymin);
+    take(t.box.xmax, t.box.ymax);
+  }
+  for (const o of out.origins) {
+    take(o.x - out.style.origin, o.y - out.style.origin);
+    take(o.x + out.style.origin, o.y + out.style.origin);
+  }
+  out.extent = e;
+  return out;
+}
