@@ -465,14 +465,35 @@ export function layoutDimensions(features: readonly DimensionFeature[], region: 
     line(b.xmin, yd, b.xmax, yd, 'dim');
     arrow(b.xmin, yd, -1, 0);
     arrow(b.xmax, yd, 1, 0);
-    text((b.xmin + b.xmax) / 2, yd + 1 * mm + th / 2, fmt(b.xmax - b.xmin), 0, 'width', b.xmax - b.xmin);
+    const ws = fmt(b.xmax - b.xmin);
+    const wx = alongLine((b.xmin + b.xmax) / 2, b.xmax - b.xmin, widthOf(ws), (x) => textBox(x, yd + 1 * mm + th / 2, ws, 0));
+    text(wx, yd + 1 * mm + th / 2, ws, 0, 'width', b.xmax - b.xmin);
     const xd = b.xmax + FIRST_LANE_MM * mm;
     line(rightmostAt(b.ymin) + EXT_GAP * mm, b.ymin, xd + EXT_OVER * mm, b.ymin, 'ext');
     line(rightmostAt(b.ymax) + EXT_GAP * mm, b.ymax, xd + EXT_OVER * mm, b.ymax, 'ext');
     line(xd, b.ymin, xd, b.ymax, 'dim');
     arrow(xd, b.ymax, 0, 1);
     arrow(xd, b.ymin, 0, -1);
-    text(xd - 1 * mm - th / 2, (b.ymin + b.ymax) / 2, fmt(b.ymax - b.ymin), 90, 'height', b.ymax - b.ymin);
+    const hs = fmt(b.ymax - b.ymin);
+    const hy = alongLine((b.ymin + b.ymax) / 2, b.ymax - b.ymin, widthOf(hs), (y) => textBox(xd - 1 * mm - th / 2, y, hs, 90));
+    text(xd - 1 * mm - th / 2, hy, hs, 90, 'height', b.ymax - b.ymin);
+  }
+
+  /**
+   * Where along a dimension line of length `len` centred at `mid` its value goes: the middle, or
+   * the nearest shift (in steps of the text's length) that clears the marks already drawn; the
+   * middle when none does.
+   */
+  function alongLine(mid: number, len: number, w: number, boxAt: (pos: number) => Bounds): number {
+    const room = Math.max(0, (len - w) / 2 - ARROW * mm);
+    for (let k = 0; k <= 6; k++) {
+      for (const sg of k === 0 ? [0] : [1, -1]) {
+        const o = (sg * k * (w + 1 * mm)) / 2;
+        if (Math.abs(o) > room) continue;
+        if (obs.free(boxAt(mid + o), false)) return mid + o;
+      }
+    }
+    return mid;
   }
 
   // Centre marks, then the positions (running dimensions), then diameters, openings, plates.
@@ -519,11 +540,13 @@ export function layoutDimensions(features: readonly DimensionFeature[], region: 
     for (const it of [...uniq].sort((p, q) => p.rank - q.rank || p.at - q.at)) {
       const s = fmt(it.at - datum);
       const w = widthOf(s);
-      // Beside the extension line at the arrowhead: before it, or after it if that is taken.
+      // Beside the extension line at the arrowhead, beyond the dimension line; else on its other
+      // side (between the line and the section); before or after the extension line.
       let placed = false;
-      for (const sd of [-1, 1]) {
+      for (const [sd, across] of [[-1, -1], [1, -1], [-1, 1], [1, 1]]) {
         const off = sd * (0.4 * mm + th / 2);
-        const box = axis === 'x' ? textBox(it.at + off, lane - 1 * mm - w / 2, s, 90) : textBox(lane - 1 * mm - w / 2, it.at - off, s, 0);
+        const deep = lane + across * (1 * mm + w / 2);
+        const box = axis === 'x' ? textBox(it.at + off, deep, s, 90) : textBox(deep, it.at - off, s, 0);
         if (kept.some((k) => boxesMeet(box, k.box, 0.4 * mm)) || !obs.free(box, true)) continue;
         kept.push({ at: it.at, from: it.from, box, s });
         placed = true;
@@ -560,16 +583,20 @@ export function layoutDimensions(features: readonly DimensionFeature[], region: 
     const r = f.diameter / 2;
     const s = `Ø${fmt(f.diameter)}`;
     const w = widthOf(s);
-    // Inside the hole, on a diameter line above the centre, when it fits with its arrows.
-    if (!f.notch && 2 * r > w + 2 * ARROW * mm && r > 2 * th) {
-      const y = f.cy + 0.45 * r;
-      const half = Math.sqrt(r * r - (0.45 * r) ** 2);
-      const ty = y + 0.5 * mm + th / 2;
-      if (obs.free(textBox(f.cx, ty, s, 0), false)) {
-        line(f.cx - half, y, f.cx + half, y, 'dim');
-        arrow(f.cx - half, y, -1, 0);
-        arrow(f.cx + half, y, 1, 0);
-        text(f.cx, ty, s, 0, 'diameter', f.diameter);
+    // Inside the hole: a diameter line through the centre, arrows at the circle, the value beside
+    // it (left or right of the centre, above or below the line), when the place is empty: a round
+    // cut that breaks an edge may hold material there, and the section's axes often cross the centre.
+    if (2 * r > w + 2 * ARROW * mm + 2 * mm && r > 1.5 * th) {
+      const near = w / 2 + 1 * mm, far = Math.max(near, r - w / 2 - ARROW * mm - 0.5 * mm);
+      for (const [along, side] of [[-near, 1], [near, 1], [-near, -1], [near, -1], [-far, 1], [far, 1], [-far, -1], [far, -1]]) {
+        const tx = f.cx + along, ty = f.cy + side * (0.5 * mm + th * 0.55);
+        const box = textBox(tx, ty, s, 0);
+        if (Math.hypot(Math.max(Math.abs(box.xmin - f.cx), Math.abs(box.xmax - f.cx)), Math.max(Math.abs(box.ymin - f.cy), Math.abs(box.ymax - f.cy))) > r) continue;
+        if (!obs.free(box, true)) continue;
+        line(f.cx - r, f.cy, f.cx + r, f.cy, 'dim');
+        arrow(f.cx - r, f.cy, -1, 0);
+        arrow(f.cx + r, f.cy, 1, 0);
+        text(tx, ty, s, 0, 'diameter', f.diameter);
         return;
       }
     }
