@@ -538,6 +538,12 @@ export function layoutDimensions(features: readonly DimensionFeature[], region: 
     // Values at the arrowheads, beyond the line; a value that would touch a kept one is left off.
     const kept: { at: number; from: number; box: Bounds; s: string }[] = [];
     for (const it of [...uniq].sort((p, q) => p.rank - q.rank || p.at - q.at)) {
+      // Arrowheads may not run into each other: a position closer than one arrow to a kept one
+      // is left off (the schedule has it).
+      if (kept.some((k) => Math.abs(k.at - it.at) < (ARROW + 0.4) * mm)) {
+        out.omitted.push({ feature: { kind: 'position', axis, at: it.at }, reason: 'too close to another position to draw its arrow' });
+        continue;
+      }
       const s = fmt(it.at - datum);
       const w = widthOf(s);
       // Beside the extension line at the arrowhead, beyond the dimension line; else on its other
