@@ -85,6 +85,8 @@ function numberFormatter(size: number): { len: Fmt; deg: Fmt } {
   return { len, deg };
 }
 
+const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
+
 const isPoint = (p: unknown): p is [number, number] => Array.isArray(p) && p.length === 2 && typeof p[0] === 'number' && typeof p[1] === 'number';
 
 function pointText(p: unknown, len: Fmt): string {
@@ -173,7 +175,7 @@ export function shapeSchedule(shape: Shape, index: number, size: number): ShapeS
         ...base,
         params: [
           ['Start', pointText(shape.start, len)],
-          ['Segments', `${shape.segments.length} (${shape.segments.length - arcs} lines, ${arcs} arcs)`],
+          ['Segments', `${shape.segments.length} (${plural(shape.segments.length - arcs, 'line')}, ${plural(arcs, 'arc')})`],
         ],
         table: segmentTable(shape.start, shape.segments, len, deg, `${name}: segments`),
         extent: pointsExtent(segmentPoints(shape.start, shape.segments)),
@@ -206,7 +208,8 @@ function genericSchedule(rec: Record<string, unknown>, name: string, len: Fmt, d
   let extent: ShapeSchedule['extent'] = null;
   if (Array.isArray(rec.segments)) {
     const segs = rec.segments as SegmentLike[];
-    params.unshift(['Start', pointText(rec.start, len)], ['Segments', `${segs.length} (${segs.filter((g) => g.via === undefined).length} lines, ${segs.filter((g) => g.via !== undefined).length} arcs)`]);
+    const arcs = segs.filter((g) => g.via !== undefined).length;
+    params.unshift(['Start', pointText(rec.start, len)], ['Segments', `${segs.length} (${plural(segs.length - arcs, 'line')}, ${plural(arcs, 'arc')})`]);
     table = segmentTable(rec.start, segs, len, deg, `${name}: segments`);
     extent = pointsExtent(segmentPoints(rec.start, segs));
   } else if (Array.isArray(rec.points)) {
@@ -237,8 +240,10 @@ export function frameNotes(items: readonly ShapeSchedule[]): string[] {
 
 /** The one-line parameter text of a shape, for its row in the list of shapes. */
 export function paramsText(s: ShapeSchedule): string {
-  return s.params.map(([k, v]) => `${k.toLowerCase()} ${v}`).join('; ');
+  // Counts read number first ("8 segments (6 lines, 2 arcs)"), everything else label first.
+  return s.params.map(([k, v]) => (COUNT_LABELS.has(k) ? v.replace(/^(\d+)/, `$1 ${k.toLowerCase()}`) : `${k.toLowerCase()} ${v}`)).join('; ');
 }
+const COUNT_LABELS = new Set(['Corners', 'Segments', 'Points']);
 
 function tableHtml(t: ScheduleTable, id: string, groupsWanted: number, long: boolean): string {
   const groups = t.groupable ? Math.max(1, Math.min(groupsWanted, Math.ceil(t.rows.length / 4))) : 1;
