@@ -12,6 +12,7 @@ import {
   formatNumber,
   formatProperty,
   inertiaAboutAxis,
+  oneSidedWidths,
   parseDocument,
   propertiesJson,
   sectionOf,
@@ -167,7 +168,9 @@ export async function main(argv: string[]): Promise<number> {
       const r = await evaluateFile(a.positional[0], a.flags);
       if (!r) return 2;
       const c = cutSection(r.ev.region, xs !== undefined ? 'x' : 'y', at, r.props);
-      const result = { at: c.at, width: c.width, area: c.area, centroid: c.centroid, Q: c.Q };
+      // One-sided widths at a level where b jumps (src/moments/width.ts): just above/below, or right/left for --x.
+      const sides = oneSidedWidths(r.ev.region, xs !== undefined ? 'x' : 'y', at);
+      const result = { at: c.at, width: c.width, width_above: sides.above, width_below: sides.below, area: c.area, centroid: c.centroid, Q: c.Q };
       if (a.flags.has('json')) out(JSON.stringify(result, null, 2));
       else {
         const side = xs !== undefined ? `right of x = ${at}` : `above y = ${at}`;

@@ -1,7 +1,8 @@
 /**
  * `kern report FILE --out report.html [--pdf out.pdf] [--units U] [--cut y=VALUE|x=VALUE] [--paper a4|letter]`
  * Writes the self-contained HTML report and, with --pdf, prints it to PDF through headless
- * Chromium (playwright-core). Exit codes: 0 done, 2 bad input or Chromium missing, 1 internal error.
+ * Chromium (playwright-core). Exit codes: 0 done (an empty or zero-area section gives a report that
+ * says so), 2 bad input or Chromium missing, 1 internal error.
  */
 import { existsSync, writeFileSync } from 'node:fs';
 import { evaluateDocument, formatIssue } from '../src';
@@ -116,10 +117,8 @@ export async function reportCommand(args: string[]): Promise<number> {
   for (const w of loaded.warnings) err(`warning: ${w}`);
   const evaluation = evaluateDocument(loaded.doc);
   for (const w of evaluation.warnings) err(`warning: ${formatIssue(w)}`);
-  if (!evaluation.props) {
-    err(`${file}: ${evaluation.message ?? 'the section has no area'}`);
-    return 2;
-  }
+  // An empty or degenerate section still gets its report: a page that says so, with no figure.
+  if (!evaluation.props) err(`warning: ${file}: ${(evaluation.message ?? 'the section has no area').replace(/\.$/, '')}; the report says so and has no figure`);
   const html = renderReportHtml({ doc: loaded.doc, evaluation, cut, generated: new Date().toISOString().replace(/\.\d+Z$/, 'Z') });
   try {
     if (out) writeFileSync(out, html);

@@ -114,3 +114,16 @@ export async function open(t, opts) {
   t.opened.push(r.context);
   return r;
 }
+
+/**
+ * A number as the panel and the report show it ("4113", "29.81 × 10⁶", "−0.5"), read back; the
+ * same rule as the engine's parseFormatted (src/properties/catalog.ts).
+ */
+export function parseShown(text) {
+  const sup = '⁰¹²³⁴⁵⁶⁷⁸⁹';
+  const m = /^(-?\d+(?:\.\d+)?)(?:\s*×\s*10(⁻?[⁰¹²³⁴⁵⁶⁷⁸⁹]+))?$/.exec(text.trim().replace(/\u2212/g, '-'));
+  if (!m) return NaN;
+  if (m[2] === undefined) return Number(m[1]);
+  const exp = [...m[2]].map((ch) => (ch === '⁻' ? '-' : String(sup.indexOf(ch)))).join('');
+  return Number(`${m[1]}e${exp}`);
+}

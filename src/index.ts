@@ -29,6 +29,9 @@ export {
 export { propertiesJson, jsonValueAt, type PropertyJson } from './properties/json';
 export { CAUTION_TEXT } from './report/caution';
 export { PROPERTY_CATALOG, formatNumber, formatProperty, unitText, propertyByKey, DISPLAY_SIGFIGS, type PropertyInfo } from './properties/catalog';
+export { formatQuantity, parseFormatted, sectionSize, GEOMETRY_SIGFIGS, ZERO_RELATIVE } from './properties/catalog';
+export { oneSidedWidths, qbWidth, type OneSidedWidths, type QbSide } from './moments/width';
+export { cutWithSides, type SidedCut } from './properties/cut-sides';
 export { regionMoments, polygonMoments, type RawMoments } from './moments/kernel';
 export { momentsAbove } from './moments/cut';
 export * from './geometry/contour';

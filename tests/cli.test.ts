@@ -51,7 +51,8 @@ describe('kern props', () => {
   it('prints a table with units and the caution', () => {
     const r = kern('props', 'tests/fixtures/plate-with-bore.json');
     expect(r.code).toBe(0);
-    expect(r.out).toMatch(/Area\s+18743\.4 mm²/);
+    // A = 20000 − 400π = 18743.4 mm², shown to 4 figures in engineering form (src/properties/catalog.ts).
+    expect(r.out).toMatch(/Area\s+18\.74 × 10³ mm²/);
     expect(r.out).toMatch(/checked against the applicable code/);
   });
 
@@ -79,7 +80,10 @@ describe('kern cut', () => {
     close(j.centroid.y, 80, 1e-12);
     // Q = A' (ȳ' − ȳ) (Gere & Goodno, Sec. 5.8, first moment of the area beyond the cut).
     close(j.Q, 8000 * (80 - yb), 1e-12);
-    expect(Object.keys(j).sort()).toEqual(['Q', 'area', 'at', 'centroid', 'width']);
+    expect(Object.keys(j).sort()).toEqual(['Q', 'area', 'at', 'centroid', 'width', 'width_above', 'width_below']);
+    // No edge on y = 60: the one-sided widths are the width.
+    expect(j.width_above).toBe(j.width);
+    expect(j.width_below).toBe(j.width);
   });
 
   it('cuts vertically with --x through the bore', () => {

@@ -72,7 +72,7 @@ describe('report contents', () => {
   test('input shapes with their dimensions and operations; the method note; the Q/b diagram', () => {
     for (const s of DEMO_DOCUMENT.shapes) expect(html).toContain(s.name!.replace(/&/g, '&amp;'));
     expect(html).toContain('<td>subtract</td>');
-    expect(html).toContain('centre (0, 90), radius 30');
+    expect(html).toContain('centre (0, 90); diameter 60'); // the geometry schedule gives circles by centre and diameter
     expect(html).toMatch(/Green’s theorem/);
     expect(html).toMatch(/clipper-lib/);
     expect(html).toContain('Q/b diagram');

@@ -64,7 +64,8 @@ describe('report --pdf through Chromium', () => {
       expect(tokens.has(title.revision!)).toBe(true);
       for (const info of PROPERTY_CATALOG) {
         const f = formatProperty(info, props, DEMO_DOCUMENT.units);
-        expect(tokens.has(f.text), `${info.key} = ${f.text} not found in the PDF text`).toBe(true);
+        // Engineering notation has spaces ("582.6 × 10³"): look for the whole text between spaces.
+        expect(f.text.includes(' ') ? ` ${flat} `.includes(` ${f.text} `) : tokens.has(f.text), `${info.key} = ${f.text} not found in the PDF text`).toBe(true);
       }
       expect(flat).toContain(CAUTION_TEXT);
       expect(flat).toContain('to scale 1:2');
@@ -72,12 +73,22 @@ describe('report --pdf through Chromium', () => {
     }, 60_000);
   }
 
-  test('the figure prints at 1:2: the 160 mm dimension text sits 47 mm left of the 210 mm one', async () => {
+  test('the figure prints at its scale: the 160 and 210 dimension texts lie as far apart on paper as in the drawing', async () => {
     requireTools();
-    const pdf = join(dir, 'r-a4.pdf');
-    if (!existsSync(pdf)) expect(await reportCommand([demoFile, '--pdf', pdf, '--cut', 'y=150'])).toBe(0);
-    // In the figure the width text is centred on the section, the rotated height text 7 mm right
-    // of its right edge: 80/2 + 7 = 47 paper mm at 1:2 (1 pt = 25.4/72 mm, PDF 1.7 §8.3.2.3).
+    const pdf = join(dir, 'r-a4.pdf'), htmlFile = join(dir, 'r-a4.html');
+    if (!existsSync(pdf) || !existsSync(htmlFile)) expect(await reportCommand([demoFile, '--out', htmlFile, '--pdf', pdf, '--cut', 'y=150'])).toBe(0);
+    // The drawing's own coordinates: the SVG's user unit is one paper millimetre and the section is
+    // drawn at k = 0.5 (1:2, report-html.test.ts). The height text is centred 8 − 1 − 1.4 = 5.6 mm
+    // right of the section's right edge (src/report/dimensions.ts), the width text on the width
+    // dimension line (shifted along it, if at all, to clear the axes).
+    const html = readFileSync(htmlFile, 'utf8');
+    const svgX = (role: string) => Number(new RegExp(`<text x="([\\d.]+)"[^>]*data-dim="${role}"`).exec(html)![1]);
+    const matrix = /<path class="section" transform="matrix\(([\d.]+) 0 0 [\d.]+ ([-\d.]+) /.exec(html)!;
+    const k = Number(matrix[1]), tx = Number(matrix[2]);
+    expect(k).toBe(0.5);
+    expect(Math.abs(svgX('height') - (tx + 80 * k + 5.6))).toBeLessThan(1e-3);
+    const drawn = svgX('height') - svgX('width');
+    // On paper (1 pt = 25.4/72 mm, PDF 1.7 §8.3.2.3) the distance is the drawn one.
     const xml = execFileSync('pdftotext', ['-bbox', '-f', '1', '-l', '1', pdf, '-'], { encoding: 'utf8' });
     const word = (w: string) => {
       const m = new RegExp(`<word xMin="([\\d.]+)" yMin="([\\d.]+)" xMax="([\\d.]+)" yMax="([\\d.]+)">${w}</word>`).exec(xml);
@@ -86,7 +97,7 @@ describe('report --pdf through Chromium', () => {
     };
     const w160 = word('160'), h210 = word('210');
     const mm = ((h210.x - w160.x) * 25.4) / 72;
-    expect(Math.abs(mm - 47)).toBeLessThan(1); // within 1 mm (text boxes are rounded by the font)
+    expect(Math.abs(mm - drawn)).toBeLessThan(1); // within 1 mm (text boxes are rounded by the font)
   }, 60_000);
 
   test('without Chromium the command says how to install it and exits with 2', async () => {

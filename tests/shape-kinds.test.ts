@@ -21,12 +21,12 @@ describe('shape kinds', () => {
     for (const t of SHAPE_TYPES) expect(editorForType(t)).toBeDefined();
   });
 
-  it('every kind module is complete: label, validation, outline, transforms, description', () => {
+  it('every kind module is complete: label, validation, outline, transforms, schedule', () => {
     for (const t of SHAPE_TYPES) {
       const k = SHAPE_KINDS[t];
       expect(k.type).toBe(t);
       expect(k.label.length).toBeGreaterThan(0);
-      for (const f of ['validate', 'contours', 'mapPoints', 'scaled', 'describe'] as const) expect(typeof k[f], `${t}.${f}`).toBe('function');
+      for (const f of ['validate', 'contours', 'mapPoints', 'scaled', 'schedule'] as const) expect(typeof k[f], `${t}.${f}`).toBe('function');
     }
   });
 

@@ -1,7 +1,8 @@
 /**
  * Every reported property: its key (as in the CLI's --json and the panel's data-prop), a label,
- * its length dimension (area is length², Ix is length⁴, θ has none), and one formatting function
- * that the panel, the CLI table and the report all use, so their digits always agree.
+ * its length dimension (area is length², Ix is length⁴, θ has none), and the one number formatter
+ * that the panel, the CLI table and the report all use, so their digits always agree. The JSON
+ * output never goes through it: it keeps full precision.
  */
 import type { Units } from '../units';
 import type { SectionProperties } from './section';
@@ -57,38 +58,122 @@ export function unitText(units: Units, power: number, unit?: string): string {
   return units + (SUPERSCRIPT[power] ?? `^${power}`);
 }
 
-/** Significant figures shown everywhere (panel, CLI table, report). */
-export const DISPLAY_SIGFIGS = 6;
+/** Significant figures of every computed result shown (panel, CLI table, report, Q/b values). */
+export const DISPLAY_SIGFIGS = 4;
 
 /**
- * The one number formatter: `sig` significant figures, plain notation between 1e-4 and 1e9,
- * scientific outside; values that are zero to round-off relative to `scale` print as 0.
+ * Significant figures of input geometry shown back to people (coordinates, radii, dimensions on
+ * the figure, the report's geometry schedule): enough that a checker can rebuild the section and
+ * match its area to the DISPLAY_SIGFIGS shown.
  */
-export function formatNumber(v: number, sig = DISPLAY_SIGFIGS, scale = 0): string {
-  if (!Number.isFinite(v)) return '—';
-  if (v === 0 || (scale > 0 && Math.abs(v) < scale * 1e-12)) return '0';
-  const a = Math.abs(v);
-  if (a >= 1e-4 && a < 1e9) {
-    const digits = Math.max(0, sig - 1 - Math.floor(Math.log10(a)));
-    let s = v.toFixed(Math.min(digits, 20));
-    if (s.includes('.')) s = s.replace(/0+$/, '').replace(/\.$/, '');
-    return s === '-0' ? '0' : s;
-  }
-  const [m, e] = v.toExponential(sig - 1).split('e');
-  const mant = m.includes('.') ? m.replace(/0+$/, '').replace(/\.$/, '') : m;
-  return `${mant}e${e.replace('+', '')}`;
+export const GEOMETRY_SIGFIGS = 6;
+
+/**
+ * A value whose size is below ZERO_RELATIVE × its natural magnitude (Lⁿ for a value with n
+ * powers of length, L the larger side of the section's bounding box) is round-off, and shows as 0.
+ * The engine is exact to about 1e-13 relative to that magnitude near the origin; round-off grows
+ * with the section's distance from the origin (about eps × distance/L), so 1e-10 keeps a section up
+ * to ~1e5 sizes away clean while no value a drafter could mean is ever hidden.
+ */
+export const ZERO_RELATIVE = 1e-10;
+
+const SUP_DIGITS = '⁰¹²³⁴⁵⁶⁷⁸⁹';
+const SUP_MINUS = '⁻';
+/** Between the mantissa and the power of ten: "5.369 × 10⁶". */
+const TIMES_TEN = ' × 10';
+
+/** An integer in superscript digits: superscript(-10) = '⁻¹⁰'. */
+export function superscript(n: number): string {
+  const s = String(Math.abs(n))
+    .split('')
+    .map((d) => SUP_DIGITS[Number(d)])
+    .join('');
+  return n < 0 ? SUP_MINUS + s : s;
+}
+
+/** Decimal digits `ds` (a string) with the point after `intDigits` of them; trailing zeros after the point dropped. */
+function placePoint(ds: string, intDigits: number): string {
+  let s: string;
+  if (intDigits <= 0) s = '0.' + '0'.repeat(-intDigits) + ds;
+  else if (intDigits >= ds.length) s = ds + '0'.repeat(intDigits - ds.length);
+  else s = ds.slice(0, intDigits) + '.' + ds.slice(intDigits);
+  if (s.includes('.')) s = s.replace(/0+$/, '').replace(/\.$/, '');
+  return s;
 }
 
 /**
- * Format one property for display: text and unit. `scale` lets values that are zero up to
- * round-off (a product of inertia of a symmetric section) print as 0: it is the size of the
- * property's natural magnitude (e.g. J0 for inertias).
+ * The one number formatter. The rule, as the report's method note states it:
+ * - rounded to `sig` significant figures (correctly rounded from the binary value); zeros after
+ *   the decimal point that carry nothing are dropped (2.5, not 2.500);
+ * - plain notation from 0.001 up to the largest value whose integer digits fit in `sig` figures
+ *   (9999 at 4 figures), engineering notation outside that range: a mantissa from 1 to 999.9…
+ *   times a power of ten that is a multiple of 3, written "5.369 × 10⁶", "246.1 × 10⁶",
+ *   "12.5 × 10⁻⁶";
+ * - 0 for a value whose size is at most `scale` × ZERO_RELATIVE (round-off; pass the value's natural
+ *   magnitude as `scale`, see formatQuantity); "—" for a value that is not finite.
+ * Negative values carry an ASCII minus.
+ */
+export function formatNumber(v: number, sig = DISPLAY_SIGFIGS, scale = 0): string {
+  if (!Number.isFinite(v)) return '—';
+  const figures = Math.min(17, Math.max(1, Math.round(Number.isFinite(sig) ? sig : DISPLAY_SIGFIGS)));
+  if (v === 0 || (scale > 0 && Math.abs(v) <= scale * ZERO_RELATIVE)) return '0';
+  // toExponential rounds correctly and carries (9.9996e3 at 4 figures is "1.000e+4").
+  const [m, e] = Math.abs(v).toExponential(figures - 1).split('e');
+  const exp = Number(e);
+  const ds = m.replace('.', '');
+  const sign = v < 0 ? '-' : '';
+  if (exp >= -3 && exp < Math.max(figures, 1)) return sign + placePoint(ds, exp + 1);
+  const e3 = 3 * Math.floor(exp / 3);
+  return `${sign}${placePoint(ds, exp - e3 + 1)}${TIMES_TEN}${superscript(e3)}`;
+}
+
+/**
+ * A value with `power` powers of length (1 length, 2 area, 3 first moment or modulus, 4 second
+ * moment) in a section whose larger bounding-box side is `size`: formatNumber with the zero
+ * tolerance ZERO_RELATIVE × size^power. With size ≤ 0 or power 0 no value is taken for round-off.
+ */
+export function formatQuantity(v: number, power: number, size: number, sig = DISPLAY_SIGFIGS): string {
+  const scale = size > 0 && power > 0 ? Math.pow(size, power) : 0;
+  return formatNumber(v, sig, Number.isFinite(scale) ? scale : 0);
+}
+
+/** The section's size for zero tolerances: the larger side of its bounding box (0 if none). */
+export function sectionSize(b: { xmin: number; xmax: number; ymin: number; ymax: number } | null | undefined): number {
+  if (!b) return 0;
+  const s = Math.max(b.xmax - b.xmin, b.ymax - b.ymin);
+  return Number.isFinite(s) && s > 0 ? s : 0;
+}
+
+/**
+ * The number a formatted text stands for (the inverse of formatNumber up to its rounding):
+ * "5.369 × 10⁶" → 5369000, "-0.25" → −0.25, "—" → NaN. For tests and for tools that read the panel
+ * or the report; anything else gives NaN.
+ */
+export function parseFormatted(text: string): number {
+  const t = text.trim().replace(/\u2212/g, '-');
+  const m = /^(-?\d+(?:\.\d+)?)(?:\s*×\s*10([⁻]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+))?$/.exec(t);
+  if (!m) return NaN;
+  if (m[2] === undefined) return Number(m[1]);
+  const exp = Number(
+    m[2]
+      .split('')
+      .map((ch) => (ch === SUP_MINUS ? '-' : String(SUP_DIGITS.indexOf(ch))))
+      .join(''),
+  );
+  // Through a decimal string, so "5.369 × 10⁶" is exactly the double nearest 5.369e6.
+  return Number(`${m[1]}e${exp}`);
+}
+
+/**
+ * Format one property for display: text and unit. Values that are zero up to round-off (a
+ * product of inertia of a symmetric section, the centroid of a section centred on the origin)
+ * print as 0: the tolerance is ZERO_RELATIVE × L^power with L the section's larger side; for the
+ * angle θ it is ZERO_RELATIVE × 90°.
  */
 export function formatProperty(info: PropertyInfo, p: SectionProperties, units: Units): { text: string; unit: string; value: number } {
   const value = info.get(p);
-  const L = Math.max(p.bounds.xmax - p.bounds.xmin, p.bounds.ymax - p.bounds.ymin);
-  const scale = info.power === 0 ? 90 : Math.pow(L, info.power);
-  return { text: formatNumber(value, DISPLAY_SIGFIGS, scale), unit: unitText(units, info.power, info.unit), value };
+  const text = info.power === 0 ? formatNumber(value, DISPLAY_SIGFIGS, 90) : formatQuantity(value, info.power, sectionSize(p.bounds));
+  return { text, unit: unitText(units, info.power, info.unit), value };
 }
 
 /** A property's value by its key ('centroid.x', 'Ix', ...), or undefined. */

@@ -1,8 +1,10 @@
 /**
  * The report's figure: the section drawn to a standard scale on the printed page, with its
- * overall dimensions, the origin, the centroid, the principal axes, the cut (if any) and a scale
- * bar. The SVG is sized in millimetres and its user unit is one paper millimetre, so printing at
- * 100 % gives the stated scale. Outlines are exact (SVG arcs), never sampled.
+ * dimensions (overall size, holes, openings, notches and plate thicknesses, placed by
+ * dimensions.ts), the origin, the centroid, the principal axes, the cut (if any) and a scale bar.
+ * The SVG is sized in millimetres and its user unit is one paper millimetre, so printing at 100 %
+ * gives the stated scale. Outlines are exact (SVG arcs), never sampled. An empty region has no
+ * figure (null): the report says so in words instead.
  */
 import type { Region } from '../geometry/contour';
 import { regionBounds } from '../geometry/contour';
@@ -11,13 +13,19 @@ import { UNIT_IN_METRES } from '../document/types';
 import type { SectionProperties } from '../properties/section';
 import { formatNumber } from '../properties/catalog';
 import { regionPathData } from '../exchange/svg-export';
-import { chooseScale, type DrawingScale } from './scale';
+import { escapeHtml } from './escape';
+import { findDimensionFeatures, layoutDimensions, type DimensionFeature, type DimensionLayout } from './dimensions';
+import { STANDARD_SCALES, chooseScale, type DrawingScale } from './scale';
 
 export interface FigureOptions {
   /** Largest printed size of the whole figure (mm). */
   maxWidthMm: number;
   maxHeightMm: number;
   cut?: { axis: 'x' | 'y'; at: number } | null;
+  /** Regions of the shapes subtracted from the section, so notches can be dimensioned. */
+  cuts?: readonly Region[];
+  /** Dimension holes, openings, notches and plates (default true); the overall size always is. */
+  dimensions?: boolean;
 }
 
 export interface Figure {
@@ -25,11 +33,15 @@ export interface Figure {
   scale: DrawingScale;
   /** True when the origin lies inside the drawn frame (and is marked). */
   originShown: boolean;
+  /** The dimensions as placed (world units), including what was left off and why. */
+  dimensions: DimensionLayout;
 }
 
-// Margins around the section for dimensions and labels (paper mm).
-const LEFT = 12, RIGHT = 24, TOP = 7, BOTTOM = 16;
+// Room around the drawn things (paper mm): axis labels right and top, the scale bar below.
+const PAD_L = 4, PAD_R = 6, PAD_T = 4, PAD_B = 6;
 const FONT = 2.8;
+/** The origin marker's arrows (paper mm). */
+const ORIGIN_ARM = 8;
 
 const f = (v: number) => (Math.round(v * 1000) / 1000).toString();
 
@@ -50,17 +62,72 @@ function arrowHead(x: number, y: number, dx: number, dy: number): string {
   return `<path d="M${f(x)} ${f(y)} L${f(bx - 0.45 * uy)} ${f(by + 0.45 * ux)} L${f(bx + 0.45 * uy)} ${f(by - 0.45 * ux)} Z" class="ink"/>`;
 }
 
-export function renderSectionFigure(region: Region, props: SectionProperties | null, units: Units, opts: FigureOptions): Figure {
-  const b = regionBounds(region) ?? { xmin: 0, xmax: 1, ymin: 0, ymax: 1 };
+/** The drawn frame (world units) for a layout: the layout's extent plus the origin marker when near. */
+function frameFor(layout: DimensionLayout, near: boolean, k: number) {
+  const e = layout.extent;
+  const arm = (ORIGIN_ARM + 3) / k;
+  return {
+    x0: near ? Math.min(e.xmin, -3.5 / k) : e.xmin,
+    x1: near ? Math.max(e.xmax, arm) : e.xmax,
+    y0: near ? Math.min(e.ymin, -3.5 / k) : e.ymin,
+    y1: near ? Math.max(e.ymax, arm) : e.ymax,
+  };
+}
+
+/**
+ * The figure's other marks, for the dimension layout to keep its texts clear of: the principal
+ * axes, the cut line, the centroid symbol and its label, and the origin marker (world units;
+ * `mm` world units per paper millimetre).
+ */
+function drawnMarks(props: SectionProperties | null, cut: FigureOptions['cut'], near: boolean, ext: number, mm: number) {
+  const lines: [number, number, number, number][] = [];
+  const boxes: { xmin: number; xmax: number; ymin: number; ymax: number }[] = [];
+  const far = 4 * ext + 200 * mm;
+  if (props) {
+    const { x, y } = props.centroid;
+    const t = (props.theta * Math.PI) / 180;
+    for (const a of [t, t + Math.PI / 2]) lines.push([x - far * Math.cos(a), y - far * Math.sin(a), x + far * Math.cos(a), y + far * Math.sin(a)]);
+    boxes.push({ xmin: x - 2 * mm, xmax: x + 5 * mm, ymin: y - 5 * mm, ymax: y + 2 * mm });
+  }
+  if (cut && Number.isFinite(cut.at)) {
+    if (cut.axis === 'y') lines.push([-far, cut.at, far, cut.at]);
+    else lines.push([cut.at, -far, cut.at, far]);
+  }
+  if (near) {
+    boxes.push({ xmin: -4.5 * mm, xmax: (ORIGIN_ARM + 2.5) * mm, ymin: -4 * mm, ymax: 1 * mm });
+    boxes.push({ xmin: -2 * mm, xmax: 1 * mm, ymin: -1 * mm, ymax: (ORIGIN_ARM + 2.5) * mm });
+  }
+  return { lines, boxes };
+}
+
+export function renderSectionFigure(region: Region, props: SectionProperties | null, units: Units, opts: FigureOptions): Figure | null {
+  const b = regionBounds(region);
+  if (!b) return null;
   const w = b.xmax - b.xmin, h = b.ymax - b.ymin;
-  const ext = Math.max(w, h) || 1;
+  const ext = Math.max(w, h);
+  if (!(ext > 0)) return null;
   // Show the origin when it is near the section (within a quarter of its size).
   const near = 0 >= b.xmin - 0.25 * ext && 0 <= b.xmax + 0.25 * ext && 0 >= b.ymin - 0.25 * ext && 0 <= b.ymax + 0.25 * ext;
-  const fx0 = near ? Math.min(b.xmin, 0) : b.xmin, fx1 = near ? Math.max(b.xmax, 0) : b.xmax;
-  const fy0 = near ? Math.min(b.ymin, 0) : b.ymin, fy1 = near ? Math.max(b.ymax, 0) : b.ymax;
   const unitMm = UNIT_IN_METRES[units] * 1000;
-  const scale = chooseScale((fx1 - fx0) * unitMm, (fy1 - fy0) * unitMm, opts.maxWidthMm - LEFT - RIGHT, opts.maxHeightMm - TOP - BOTTOM);
+  const features: DimensionFeature[] = opts.dimensions === false ? [] : findDimensionFeatures(region, opts.cuts ?? []);
+  // The largest standard scale at which the section with its dimensions fits: the dimensions take
+  // a fixed room in paper millimetres, so each candidate scale is laid out and measured.
+  const boxW = opts.maxWidthMm - PAD_L - PAD_R, boxH = opts.maxHeightMm - PAD_T - PAD_B;
+  const first = chooseScale(w * unitMm, h * unitMm, boxW, boxH);
+  let scale = first;
+  let layout: DimensionLayout | null = null;
+  for (let i = STANDARD_SCALES.indexOf(first); i < STANDARD_SCALES.length; i++) {
+    scale = STANDARD_SCALES[Math.max(0, i)];
+    const k = scale.ratio * unitMm;
+    layout = layoutDimensions(features, region, { mm: 1 / k, textMm: FONT, avoid: drawnMarks(props, opts.cut ?? null, near, ext, 1 / k) });
+    const fr = frameFor(layout, near, k);
+    if ((fr.x1 - fr.x0) * k <= boxW && (fr.y1 - fr.y0) * k <= boxH) break;
+  }
+  const dims = layout!;
   const k = scale.ratio * unitMm; // paper mm per drawing unit
+  const fr = frameFor(dims, near, k);
+  const fx0 = fr.x0, fx1 = fr.x1, fy0 = fr.y0, fy1 = fr.y1;
+  const LEFT = PAD_L, RIGHT = PAD_R, TOP = PAD_T, BOTTOM = PAD_B;
   const W = (fx1 - fx0) * k + LEFT + RIGHT, H = (fy1 - fy0) * k + TOP + BOTTOM;
   const X = (x: number) => LEFT + (x - fx0) * k;
   const Y = (y: number) => TOP + (fy1 - y) * k;
@@ -72,16 +139,19 @@ export function renderSectionFigure(region: Region, props: SectionProperties | n
     `<path class="section" transform="matrix(${f(k)} 0 0 ${f(k)} ${f(tx)} ${f(ty)})" d="${regionPathData(region)}" stroke-width="${0.3 / k}"/>`,
   );
 
-  // Overall width (below) and height (right).
-  const dimY = Y(b.ymin) + 8;
-  parts.push(`<path class="thin" d="M${f(X(b.xmin))} ${f(Y(b.ymin) + 1)} V${f(dimY + 1.5)} M${f(X(b.xmax))} ${f(Y(b.ymin) + 1)} V${f(dimY + 1.5)} M${f(X(b.xmin))} ${f(dimY)} H${f(X(b.xmax))}"/>`);
-  parts.push(arrowHead(X(b.xmin), dimY, -1, 0), arrowHead(X(b.xmax), dimY, 1, 0));
-  parts.push(`<text x="${f((X(b.xmin) + X(b.xmax)) / 2)}" y="${f(dimY - 1)}" text-anchor="middle" data-dim="width">${formatNumber(w)}</text>`);
-  const dimX = X(b.xmax) + 8;
-  parts.push(`<path class="thin" d="M${f(X(b.xmax) + 1)} ${f(Y(b.ymin))} H${f(dimX + 1.5)} M${f(X(b.xmax) + 1)} ${f(Y(b.ymax))} H${f(dimX + 1.5)} M${f(dimX)} ${f(Y(b.ymin))} V${f(Y(b.ymax))}"/>`);
-  parts.push(arrowHead(dimX, Y(b.ymax), 0, -1), arrowHead(dimX, Y(b.ymin), 0, 1));
-  const hy = (Y(b.ymin) + Y(b.ymax)) / 2;
-  parts.push(`<text x="${f(dimX - 1)}" y="${f(hy)}" text-anchor="middle" transform="rotate(-90 ${f(dimX - 1)} ${f(hy)})" data-dim="height">${formatNumber(h)}</text>`);
+  // Dimensions, as placed in world units.
+  for (const l of dims.lines) parts.push(`<path class="${l.style === 'centre' ? 'centre' : 'thin'}" d="M${f(X(l.x1))} ${f(Y(l.y1))} L${f(X(l.x2))} ${f(Y(l.y2))}"/>`);
+  for (const a of dims.arrows) parts.push(arrowHead(X(a.x), Y(a.y), a.dx, -a.dy));
+  // A round cut that breaks an edge: its whole circle, thin and dashed, so the diameter reads.
+  for (const h of features) if (h.kind === 'hole' && h.notch) parts.push(`<circle class="cutout" cx="${f(X(h.cx))}" cy="${f(Y(h.cy))}" r="${f((h.diameter / 2) * k)}"/>`);
+  for (const o of dims.origins) parts.push(`<circle cx="${f(X(o.x))}" cy="${f(Y(o.y))}" r="${f(dims.style.origin * k)}" class="thin" fill="#fff"/>`);
+  for (const t of dims.texts) {
+    // (x, y) is the text's centre; the baseline sits 0.35 text heights below it (digits are
+    // about 0.7 high), measured in the text's own frame, so a turned text keeps it too.
+    const x = f(X(t.x)), y = f(Y(t.y));
+    const turn = t.rotate ? ` transform="rotate(-${t.rotate} ${x} ${y})"` : '';
+    parts.push(`<text x="${x}" y="${f(Y(t.y) + 0.35 * FONT)}" text-anchor="middle"${turn} data-dim="${t.role}">${escapeHtml(t.text)}</text>`);
+  }
 
   // Cut line.
   if (opts.cut && Number.isFinite(opts.cut.at)) {
@@ -132,9 +202,9 @@ export function renderSectionFigure(region: Region, props: SectionProperties | n
     parts.push(`<text x="${f(ox + 8.5)}" y="${f(oy + 1)}">x</text><text x="${f(ox - 0.9)}" y="${f(oy - 9)}">y</text><text x="${f(ox - 3.2)}" y="${f(oy + 3.2)}">O</text>`);
   }
 
-  // Scale bar, bottom left, level with the width dimension.
+  // Scale bar, bottom left, below everything else.
   const bar = scaleBarLength(k);
-  const by = H - 2, bx = 2;
+  const by = H - 1.2, bx = 2;
   parts.push(
     `<path class="ink" d="M${f(bx)} ${f(by - 1)} h${f(bar * k)} v1 h${f(-bar * k)} Z"/>` +
       `<path class="thin" d="M${f(bx)} ${f(by - 2.2)} v2.2 M${f(bx + bar * k)} ${f(by - 2.2)} v2.2"/>` +
@@ -145,8 +215,8 @@ export function renderSectionFigure(region: Region, props: SectionProperties | n
     `<svg xmlns="http://www.w3.org/2000/svg" width="${f(W)}mm" height="${f(H)}mm" viewBox="0 0 ${f(W)} ${f(H)}" data-scale="${scale.label}" role="img" aria-label="Section drawn to scale ${scale.label}">` +
     `<style>text{font:${FONT}px sans-serif;fill:#111}.section{fill:#c9d6e2;stroke:#111;fill-rule:nonzero}.thin{fill:none;stroke:#111;stroke-width:0.18}` +
     `.ink{fill:#111;stroke:none}.axis{fill:none;stroke:#8a1c1c;stroke-width:0.25;stroke-dasharray:4 1 0.6 1}.axis-label{fill:#8a1c1c;font-weight:bold}` +
-    `.cut{fill:none;stroke:#1c4f8a;stroke-width:0.3;stroke-dasharray:2 1}</style>` +
+    `.cut{fill:none;stroke:#1c4f8a;stroke-width:0.3;stroke-dasharray:2 1}.centre{fill:none;stroke:#111;stroke-width:0.13;stroke-dasharray:3 0.8 0.5 0.8}.cutout{fill:none;stroke:#555;stroke-width:0.15;stroke-dasharray:1 0.7}</style>` +
     parts.join('') +
     `</svg>`;
-  return { svg, scale, originShown: near };
+  return { svg, scale, originShown: near, dimensions: dims };
 }

@@ -2,7 +2,8 @@
 import { circleContour } from '../geometry/contour';
 import type { Point, ShapeBase } from './base';
 import { checkNumber, checkPoint, type Issue } from './check';
-import { pointText, scalePoint, type ShapeKind } from './kind';
+import { scalePoint, type ShapeKind } from './kind';
+import { pointText } from './schedule';
 
 export interface CircleShape extends ShapeBase {
   type: 'circle';
@@ -27,5 +28,12 @@ export const circleKind: ShapeKind<CircleShape> = {
   mayCrossItself: false,
   mapPoints: (s, f) => ({ ...s, center: f(s.center) }),
   scaled: (s, k) => ({ ...s, center: scalePoint(k)(s.center), radius: s.radius * k }),
-  describe: (s, num) => `centre ${pointText(s.center, num)}, radius ${num(s.radius)}`,
+  schedule: (s, f) => ({
+    params: [
+      ['Centre', pointText(s.center, f)],
+      ['Diameter', f.len(2 * s.radius)],
+    ],
+    table: null,
+    extent: null,
+  }),
 };

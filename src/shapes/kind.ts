@@ -8,6 +8,7 @@
 import type { Contour } from '../geometry/contour';
 import type { PointMap, ShapeBase } from './base';
 import type { Issue } from './check';
+import type { KindSchedule, ScheduleFormat } from './schedule';
 
 export interface ShapeKind<S extends ShapeBase & { type: string }> {
   readonly type: S['type'];
@@ -30,8 +31,8 @@ export interface ShapeKind<S extends ShapeBase & { type: string }> {
   mirrored?(s: S, axis: 'vertical' | 'horizontal'): S;
   /** The same shape with every length (points, radii, dimensions) multiplied by k (a unit change). */
   scaled(s: S, k: number): S;
-  /** One line of dimensions and placement, in document units, for the report's shape list. */
-  describe(s: S, num: (v: number) => string): string;
+  /** Everything needed to rebuild the shape by hand (the report's schedule), as data. */
+  schedule(s: S, f: ScheduleFormat): KindSchedule;
 }
 
 /** Normalise degrees to (−180, 180], with tiny round-off shown as 0. */
@@ -44,8 +45,3 @@ export function normaliseDeg(d: number): number {
 
 /** A point scaled about the origin. */
 export const scalePoint = (k: number): PointMap => (p) => [p[0] * k, p[1] * k];
-
-/** A point as the report prints it: (x, y). */
-export function pointText(p: readonly number[], num: (v: number) => string): string {
-  return `(${num(p[0])}, ${num(p[1])})`;
-}

@@ -6,7 +6,8 @@
 import { pushArc, sweepThrough, type Contour } from '../geometry/contour';
 import type { Point, PointMap, ShapeBase } from './base';
 import { checkPoint, dist, isObj, type Issue } from './check';
-import { pointText, scalePoint, type ShapeKind } from './kind';
+import { scalePoint, type ShapeKind } from './kind';
+import { plural, pointsExtent, pointText, segmentPoints, segmentTable } from './schedule';
 import { dropZeroLengthLines } from './loops';
 
 /** `{to}` is a straight line; `{to, via}` is the circular arc from the current point through via to to. */
@@ -114,8 +115,15 @@ export const pathKind: ShapeKind<PathShape> = {
   mayCrossItself: true,
   mapPoints: (s, f) => ({ ...s, start: f(s.start), segments: mapSegments(s.segments, f) }),
   scaled: (s, k) => ({ ...s, start: scalePoint(k)(s.start), segments: mapSegments(s.segments, scalePoint(k)) }),
-  describe: (s, num) => {
+  schedule: (s, f) => {
     const arcs = s.segments.filter((g) => g.via).length;
-    return `start ${pointText(s.start, num)}, ${s.segments.length} segments (${s.segments.length - arcs} lines, ${arcs} arcs)`;
+    return {
+      params: [
+        ['Start', pointText(s.start, f)],
+        ['Segments', `${s.segments.length} (${plural(s.segments.length - arcs, 'line')}, ${plural(arcs, 'arc')})`],
+      ],
+      table: segmentTable(s.start, s.segments, f, 'segments'),
+      extent: pointsExtent(segmentPoints(s.start, s.segments)),
+    };
   },
 };

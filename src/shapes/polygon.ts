@@ -1,7 +1,8 @@
 /** Polygon: a closed list of corner points. Its outline may cross itself (resolved even-odd). */
 import type { Point, ShapeBase } from './base';
 import { checkPoint, dist, type Issue } from './check';
-import { pointText, scalePoint, type ShapeKind } from './kind';
+import { scalePoint, type ShapeKind } from './kind';
+import { pointsExtent, vertexTable } from './schedule';
 import { dropZeroLengthLines } from './loops';
 
 export interface PolygonShape extends ShapeBase {
@@ -49,8 +50,5 @@ export const polygonKind: ShapeKind<PolygonShape> = {
   // A reflection reverses the winding; keep it counter-clockwise as drawn.
   mirrored: (s) => ({ ...s, points: s.points.slice().reverse() }),
   scaled: (s, k) => ({ ...s, points: s.points.map(scalePoint(k)) }),
-  describe: (s, num) => {
-    const pts = s.points.map((p) => pointText(p, num));
-    return `${s.points.length} corners: ${pts.length > 8 ? `${pts.slice(0, 6).join(', ')}, …` : pts.join(', ')}`;
-  },
+  schedule: (s, f) => ({ params: [['Corners', String(s.points.length)]], table: vertexTable(s.points, f, 'vertices'), extent: pointsExtent(s.points) }),
 };

@@ -7,7 +7,8 @@
  */
 import type { PointMap } from '../base';
 import { checkNumber, checkPoint, type Issue } from '../check';
-import { normaliseDeg, pointText, scalePoint, type ShapeKind } from '../kind';
+import { normaliseDeg, scalePoint, type ShapeKind } from '../kind';
+import { pointText } from '../schedule';
 import { orient } from '../loops';
 import { pathContour } from '../path';
 import { PROFILE_FIELDS, validateProfile, type ProfileField } from './fields';
@@ -26,6 +27,21 @@ const LABEL: Record<ProfileType, string> = {
   'round-tube': 'Round tube',
   'bent-plate': 'Bent plate',
 };
+
+/** How each profile's local frame is set (see types.ts), for the report's schedule. */
+const FRAME: Record<ProfileType, string> = {
+  rectangle: 'local origin at the bottom-left corner; the corner radius on all four corners',
+  'i-beam': 'doubly symmetric I; local origin at the bottom-left of its bounding box',
+  channel: 'web on the left, flanges to the right; local origin at the bottom-left',
+  angle: 'vertical leg on the left, horizontal leg at the bottom; local origin at the heel',
+  tee: 'flange on top, stem down; local origin at the bottom-left of its bounding box',
+  'rect-tube': 'local origin at the bottom-left; inside corner radius = max(outside radius − wall, 0)',
+  'round-tube': 'local origin at the centre',
+  'bent-plate': '90° bend: horizontal leg along the bottom, vertical leg on the left, legs to the outside faces; local origin where the outside faces meet',
+};
+
+/** How every profile is placed from its local frame. */
+export const PLACEMENT_RULE = 'A profile is drawn in its local frame, then mirrored about the local y axis (if so), turned counter-clockwise about the local origin, then moved so that its local origin is at the point given.';
 
 const NOT_LENGTHS = new Set(['rotation']);
 
@@ -68,14 +84,12 @@ function profileKind<T extends ProfileType>(type: T): ShapeKind<ProfileOf<T>> {
       for (const [key, v] of Object.entries(s)) if (typeof v === 'number' && !NOT_LENGTHS.has(key)) out[key] = v * k;
       return out as unknown as ProfileShape;
     },
-    describe: (s, num) => {
+    schedule: (s, f) => {
       const fields = PROFILE_FIELDS[type] as readonly ProfileField<ProfileType>[];
       const rec = s as unknown as Record<string, unknown>;
-      const dims = fields.filter((fl) => typeof rec[fl.key] === 'number').map((fl) => `${fl.label.toLowerCase()} ${num(rec[fl.key] as number)}`);
-      const place = [`at ${pointText(s.at, num)}`];
-      if (s.rotation) place.push(`rotated ${num(s.rotation)}°`);
-      if (s.mirror) place.push('mirrored');
-      return `${dims.join(', ')}; ${place.join(', ')}`;
+      const params: [string, string][] = fields.map((fl) => [fl.label, typeof rec[fl.key] === 'number' ? f.len(rec[fl.key] as number) : '0 (not set)']);
+      params.push(['Local origin at', pointText(s.at, f)], ['Turned', `${f.deg(s.rotation ?? 0)}°`], ['Mirrored', s.mirror ? 'yes' : 'no']);
+      return { params, table: null, extent: null, frame: FRAME[type] };
     },
   };
   return kind as unknown as ShapeKind<S>;
