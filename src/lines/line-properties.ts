@@ -71,8 +71,10 @@ export function lineProperties(group: LineGroup): LineProperties {
   const Ixy = m.m11 - L * dx * dy;
   const cx = gx + dx, cy = gy + dy;
   const { I1, I2, theta } = principal(Ix, Iy, Ixy);
-  const b = groupBoundsAbout(group, cx, cy) as Bounds;
-  const fibres = { top: b.ymax, bottom: -b.ymin, left: -b.xmin, right: b.xmax };
+  // Extremes about the first-pass centroid (a representable point), then moved by the small
+  // correction, so the fibre distances do not inherit the rounding of cx, cy far from the origin.
+  const b = groupBoundsAbout(group, gx, gy) as Bounds;
+  const fibres = { top: b.ymax - dy, bottom: dy - b.ymin, left: dx - b.xmin, right: b.xmax - dx };
   const tiny = 1e-12 * extent;
   const modulus = (I: number, c: number) => (c > tiny ? I / c : null);
   return {
@@ -85,7 +87,7 @@ export function lineProperties(group: LineGroup): LineProperties {
     I1,
     I2,
     theta: (theta * 180) / Math.PI,
-    bounds: { xmin: cx + b.xmin, xmax: cx + b.xmax, ymin: cy + b.ymin, ymax: cy + b.ymax },
+    bounds: { xmin: gx + b.xmin, xmax: gx + b.xmax, ymin: gy + b.ymin, ymax: gy + b.ymax },
     fibres,
     Sx_top: modulus(Ix, fibres.top),
     Sx_bottom: modulus(Ix, fibres.bottom),

@@ -92,7 +92,8 @@ export function stripOutline(centreline: LineChain, thickness: number, corners: 
   const loops = closed ? closedLoops(left, right, roundLeft, roundRight) : [openLoop(left, right, roundLeft, roundRight)];
   const contact = findContact(loops, tol);
   if (contact) {
-    const [p, q] = contact;
+    // Name the later segment first: that is where the centreline comes back.
+    const [q, p] = contact[1].segment >= contact[0].segment ? [contact[1], contact[0]] : contact;
     throw new LineError(
       `segments[${q.segment}] and segments[${p.segment}]: the wall overlaps itself there (${describe(q)} meets ${describe(p)}); the centreline doubles back or comes closer to itself than the thickness ${fmt(t)}`,
       { segment: q.segment, other: p.segment },
@@ -122,7 +123,9 @@ function centrelinePiece(chain: LineChain, i: number, ox: number, oy: number, t:
   const c = Math.hypot(bx - ax, by - ay);
   if (!(c > 0)) throw new LineError(`segments[${i}]: zero length (it ends where it starts)`, { segment: i });
   const ex = (bx - ax) / c, ey = (by - ay) / c;
-  const phi = s.sweep;
+  // A sweep below 1e-14 bends the piece by less than the round-off of its end points (sagitta
+  // c·sweep/8): it is a line. This also keeps subnormal curvatures out of the joint solver.
+  const phi = Math.abs(s.sweep) < 1e-14 ? 0 : s.sweep;
   const k = (2 * Math.sin(phi / 2)) / c;
   if (phi !== 0 && !(Math.abs(k) * (t / 2) < 1)) {
     throw new LineError(
@@ -187,12 +190,14 @@ function joinFaces(
   const dIn = insideLeft ? half : -half;
   // Inside: cut both faces where they cross.
   const w = facesMeet(t1, t2, dIn);
-  if (!w) {
-    throw new LineError(`segments[${i}] and segments[${j}]: the inner faces do not meet; the wall is too thick for the curves at this joint`, where);
-  }
-  const e1 = alongFace(t1, dIn, w[0], w[1]), s2 = alongFace(t2, dIn, w[0], w[1]);
-  if (e1.ds > tol || s2.ds < -tol) {
-    throw new LineError(`segments[${i}] and segments[${j}]: the inner faces cross on the wrong side of the joint; the wall is too thick for the curves there`, where);
+  const e1 = w && alongFace(t1, dIn, w[0], w[1]);
+  const s2 = w && alongFace(t2, dIn, w[0], w[1]);
+  if (!w || !e1 || !s2 || e1.ds > tol || s2.ds < -tol) {
+    // Nearly straight back: the inner faces meet far away or not at all.
+    if (Math.PI - Math.abs(turn) < 0.01) {
+      throw new LineError(`segments[${j}]: the centreline turns almost straight back on segments[${i}]; the wall would overlap itself`, where);
+    }
+    throw new LineError(`segments[${i}] and segments[${j}]: the inner faces do not meet at this joint; the wall is too thick for the curves there`, where);
   }
   moveEnd(inner[0], vx + w[0], vy + w[1], e1);
   moveStart(inner[1], vx + w[0], vy + w[1], s2);
