@@ -21,6 +21,7 @@ import { booleanRegions, resolveOutline } from '../src/boolean';
 import { shapeContours } from '../src/document/shapes';
 import { arcFromChord, circleContour, contourFrom, pushArc, reverseContour, type Contour, type Region } from '../src/geometry/contour';
 import { chainFrom, chainFromPath, chainSegment, LineError, segmentCount, type LineChain } from '../src/lines/chain';
+import { alongFace, facesMeet } from '../src/lines/offset-carrier';
 import { stripOutline, type StripCorners } from '../src/lines/strip-outline';
 import { thinWallComparison } from '../src/lines/thin-wall';
 import { regionMoments, regionMomentsAbout } from '../src/moments/kernel';
@@ -309,6 +310,57 @@ describe('strips against an independent construction (fast-check)', () => {
       { numRuns: 150 },
     );
     expect(stats.built).toBeGreaterThan(50);
+  });
+});
+
+describe('joint geometry (offset-carrier.ts): exact identities', () => {
+  // A face at offset d of a piece through the joint V = 0 with left normal n and curvature k is
+  // the circle about C = n/k of radius |1/k − d| (or the line w·n = d): elementary geometry.
+  const sideArb = fc.record({
+    ang: fc.double({ min: -PI, max: PI, noNaN: true }),
+    // Curvatures of either sign down to 1e-3 (the reference below forms the centre n/k), or 0.
+    k: fc.oneof(fc.constant(0), fc.double({ min: 1e-3, max: 2, noNaN: true })),
+    ccw: fc.boolean(),
+  }).map(({ ang, k, ccw }) => ({ tx: Math.cos(ang), ty: Math.sin(ang), nx: -Math.sin(ang), ny: Math.cos(ang), k: ccw ? k : -k }));
+
+  it('a point at arc distance s along a face gives ds = s and the rotation about the centre', () => {
+    fc.assert(
+      fc.property(sideArb, fc.double({ min: -0.4, max: 0.4, noNaN: true }), fc.double({ min: -1, max: 1, noNaN: true }), (p, d, s) => {
+        if (p.k === 0) {
+          const r = alongFace(p, d, d * p.nx + s * p.tx, d * p.ny + s * p.ty);
+          close(r.ds, s, 1e-14, 1);
+          expect(r.dphi).toBe(0);
+          return;
+        }
+        const R = 1 / p.k, rho = Math.abs(R - d);
+        if (!(rho > 0.05) || Math.abs(s) > 0.9 * PI * rho) return;
+        // Walk s along the face in the direction of travel: rotation s/ρ about C, CCW for k > 0.
+        const beta = (Math.sign(p.k) * s) / rho;
+        const ex = (d - R) * p.nx, ey = (d - R) * p.ny; // E − C
+        const wx = R * p.nx + Math.cos(beta) * ex - Math.sin(beta) * ey, wy = R * p.ny + Math.sin(beta) * ex + Math.cos(beta) * ey;
+        const r = alongFace(p, d, wx, wy);
+        close(r.ds, s, 1e-12, 1);
+        close(r.dphi, beta, 1e-12, 1);
+      }),
+      { numRuns: 500 },
+    );
+  });
+
+  it('where two faces meet, the point lies on both', () => {
+    fc.assert(
+      fc.property(sideArb, sideArb, fc.double({ min: -0.4, max: 0.4, noNaN: true }), (p, q, d) => {
+        // Corners only: stripOutline treats turns below 1e-10 as tangent and never asks.
+        if (Math.abs(p.tx * q.ty - p.ty * q.tx) < 1e-6) return;
+        const w = facesMeet(p, q, d);
+        if (!w) return;
+        for (const f of [p, q]) {
+          // Signed distance from the face: |w − C| − ρ for an arc, w·n − d for a line.
+          const gap = f.k === 0 ? w[0] * f.nx + w[1] * f.ny - d : Math.hypot(w[0] - f.nx / f.k, w[1] - f.ny / f.k) - Math.abs(1 / f.k - d);
+          expect(Math.abs(gap)).toBeLessThan(1e-9 * (1 + Math.hypot(w[0], w[1])));
+        }
+      }),
+      { numRuns: 500 },
+    );
   });
 });
 

@@ -129,8 +129,15 @@ describe('elastic weld-group force at the critical point', () => {
       py: fc.double({ min: -30, max: 30, noNaN: true }),
       M: fc.double({ min: -500, max: 500, noNaN: true }),
     });
+    // Single arcs too, where an interior maximum is common.
+    const arcArb = fc
+      .record({ r: fc.double({ min: 0.5, max: 10, noNaN: true }), a0: fc.double({ min: -PI, max: PI, noNaN: true }), sweep: fc.double({ min: 0.05, max: 6, noNaN: true }), ccw: fc.boolean() })
+      .map(({ r, a0, sweep, ccw }) => {
+        const a1 = a0 + (ccw ? sweep : -sweep);
+        return [chainFrom([r * Math.cos(a0), r * Math.sin(a0), r * Math.cos(a1), r * Math.sin(a1)], [Math.tan((ccw ? sweep : -sweep) / 4)])];
+      });
     fc.assert(
-      fc.property(groupArb, loadArb, (g: LineGroup, l) => {
+      fc.property(fc.oneof(groupArb, arcArb), loadArb, (g: LineGroup, l) => {
         if (g.length === 0) return;
         const r = weldGroupForces(g, { Fx: l.Fx, Fy: l.Fy, at: [l.px, l.py], M: l.M });
         let sampled = 0;
@@ -150,7 +157,7 @@ describe('elastic weld-group force at the critical point', () => {
         expect((r.critical.f - sampled) / scale).toBeLessThan(1e-5);
         expect(Number.isFinite(r.critical.f)).toBe(true);
       }),
-      { numRuns: 120 },
+      { numRuns: 200 },
     );
   });
 
