@@ -1,6 +1,16 @@
 /**
  * Line elements: line groups (weld groups per unit throat), the elastic weld-group method, and thin
  * walls built from a centreline. Plain data in, plain data out; nothing here knows the document.
+ *
+ * Wiring (for the document, the app, the CLI and the report):
+ * - a `line` shape: chainFromPath(shape.start, shape.segments); the shapes of one `group` form a
+ *   LineGroup; lineProperties(group) gives length, centroid, Ix, Iy, Ixy, J (the CLI's `lines`
+ *   object), principal values and section moduli. Dimensions: length L, Ix… L³, S L².
+ * - a weld check: weldGroupForces(group, {Fx, Fy, at, M?}) → critical point, its force and parts.
+ * - a `strip` shape: stripOutline(chainFromPath(start, segments), thickness, corners) is its exact
+ *   Region (an area shape like any other); thinWallComparison(chain, thickness, outline) gives the
+ *   thin-wall values beside the exact ones and their difference in per cent.
+ * - every refusal is a LineError whose message names segments[k] and whose `where` holds k.
  */
 export {
   chainFrom,

@@ -62,7 +62,7 @@ export interface WeldGroupResult {
   critical: WeldPoint;
   /** Other distinct points within 1e-9 of the largest force (e.g. a symmetric group's mirror point). */
   alsoCritical: WeldPoint[];
-  /** True when there is no moment about the centroid: every point carries F / L. */
+  /** True when there is no moment about the centroid (to round-off): every point carries F / L. */
   uniform: boolean;
 }
 
@@ -104,7 +104,11 @@ export function weldGroupForces(group: LineGroup, load: WeldLoad): WeldGroupResu
     const seen = [best, ...alsoCritical].some((p) => Math.hypot(p.x - c.x, p.y - c.y) <= 1e-9 * extent);
     if (!seen) alsoCritical.push(c);
   }
-  return { properties, M, direct: state.direct, critical: best, alsoCritical, uniform: M === 0 };
+  // Uniform when the torsional part at the farthest point is lost in the direct part's round-off.
+  const b = properties.bounds;
+  const rmax = Math.max(Math.hypot(b.xmin - G.x, b.ymin - G.y), Math.hypot(b.xmax - G.x, b.ymax - G.y), Math.hypot(b.xmin - G.x, b.ymax - G.y), Math.hypot(b.xmax - G.x, b.ymin - G.y));
+  const uniform = (Math.abs(M) * rmax) / properties.J <= 1e-12 * Math.hypot(state.direct.fx, state.direct.fy);
+  return { properties, M, direct: state.direct, critical: best, alsoCritical, uniform };
 }
 
 /** Segment ends and, on arcs, the stationary points of |f| inside the sweep. */
