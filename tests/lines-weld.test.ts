@@ -161,6 +161,21 @@ describe('elastic weld-group force at the critical point', () => {
     );
   });
 
+  it('far from the origin (1e6) the critical force holds to 1e-9', () => {
+    // Exact identity (translation of the group and the load together); dyadic offset 2^20, so the
+    // moved group is exactly the same geometry.
+    const off = 2 ** 20;
+    const arcC = (dx: number, dy: number) =>
+      chainFromPath([5 + dx, 5 + dy], [{ to: [0 + dx, 5 + dy] }, { to: [0 + dx, -5 + dy], via: [-5 + dx, 0 + dy] }, { to: [5 + dx, -5 + dy] }]);
+    const a = weldGroupForces([arcC(0, 0)], { Fx: 4, Fy: -20, at: [13, 2], M: 30 });
+    const b = weldGroupForces([arcC(off, -off)], { Fx: 4, Fy: -20, at: [13 + off, 2 - off], M: 30 });
+    close(b.M, a.M, 1e-9);
+    close(b.critical.f, a.critical.f, 1e-9);
+    close(b.critical.fx, a.critical.fx, 1e-9, a.critical.f);
+    close(b.critical.fy, a.critical.fy, 1e-9, a.critical.f);
+    expect(Math.abs(b.critical.x - off - a.critical.x)).toBeLessThanOrEqual(2 * Number.EPSILON * off);
+  });
+
   it('refuses unusable loads with a message', () => {
     const c = chainFromPath([0, 0], [{ to: [1, 0] }]);
     expect(() => weldGroupForces([c], { Fx: NaN, Fy: 0, at: [0, 0] })).toThrow(/finite/);
