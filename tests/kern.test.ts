@@ -15,7 +15,9 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { contourFrom, pushArc, reverseContour, rotateRegion, translateRegion, type Contour, type Region } from '../src/geometry/contour';
+import { contourFrom, contourLength, contourPolyline, pushArc, reverseContour, rotateRegion, translateRegion, type Contour, type Region } from '../src/geometry/contour';
+import { booleanRegions } from '../src/boolean';
+import { boundaryDistance, regionContainsPoint } from '../src/materials/locate';
 import { regionMoments } from '../src/moments/kernel';
 import { sectionProperties } from '../src/properties/section';
 import { convexHull } from '../src/kern/hull';
@@ -58,7 +60,7 @@ describe('kern closed forms', () => {
     for (const p of pts) close(Math.hypot(p[0] - cx, p[1] - cy), r / 4, 1e-12);
     const rel = Math.abs(area - PI * (r / 4) ** 2) / (PI * (r / 4) ** 2);
     expect(rel).toBeLessThan(1e-4);
-    expect(rel).toBeLessThan(3e-5); // the tracing budget is 2e-5 of the area
+    expect(rel).toBeLessThan(4e-5); // the tracing budget (src/kern/kern.ts)
   });
 
   it('tube: circle of radius (R² + r²)/(4R)', () => {
@@ -231,6 +233,111 @@ describe('convex hull (exact)', () => {
       ),
       { numRuns: 60 },
     );
+  });
+});
+
+/** Area of the polygon hull of points (Andrew's monotone chain), written out here independently. */
+function pointHullArea(pts: [number, number][]): number {
+  const p = [...pts].sort((a, b) => a[0] - b[0] || a[1] - b[1]);
+  const cross = (o: number[], a: number[], b: number[]) => (a[0] - o[0]) * (b[1] - o[1]) - (a[1] - o[1]) * (b[0] - o[0]);
+  const half = (list: [number, number][]) => {
+    const h: [number, number][] = [];
+    for (const q of list) {
+      while (h.length >= 2 && cross(h[h.length - 2], h[h.length - 1], q) <= 0) h.pop();
+      h.push(q);
+    }
+    return h.slice(0, -1);
+  };
+  const hull = [...half(p), ...half([...p].reverse())];
+  let a = 0;
+  hull.forEach((q, i) => {
+    const r = hull[(i + 1) % hull.length];
+    a += q[0] * r[1] - r[0] * q[1];
+  });
+  return a / 2;
+}
+
+describe('convex hull against dense polygonisation (REFERENCES.md: convergence check)', () => {
+  it('boolean results with tangents, notches and arcs of every size (fast-check)', () => {
+    // The hull of points sampled on the boundary with chord error ≤ tol lies inside the exact hull,
+    // and every point of the exact hull's boundary lies within tol of it (arcs: by the chord error;
+    // bridges: by convexity between their ends), so its area falls short by at most
+    // tol · (perimeter of the exact hull).
+    fc.assert(
+      fc.property(
+        fc.array(fc.record({ x: fc.double({ min: -40, max: 40, noNaN: true }), y: fc.double({ min: -40, max: 40, noNaN: true }), r: fc.double({ min: 2, max: 25, noNaN: true }), box: fc.boolean() }), { minLength: 1, maxLength: 5 }),
+        fc.record({ x: fc.double({ min: -30, max: 30, noNaN: true }), y: fc.double({ min: -30, max: 30, noNaN: true }), r: fc.double({ min: 1, max: 15, noNaN: true }) }),
+        (adds, hole) => {
+          const shapes: Region[] = adds.map((a) => (a.box ? [rect(a.x, a.y, a.r * 2, a.r)] : [circle(a.x, a.y, a.r)]));
+          let region = shapes.length > 1 ? booleanRegions(shapes[0], shapes.slice(1), 'union') : shapes[0];
+          region = booleanRegions(region, [[circle(hole.x, hole.y, hole.r)]], 'difference');
+          fc.pre(region.length > 0 && regionMoments(region).m00 > 1);
+          const hull = convexHull(region);
+          const exact = regionMoments([hull]).m00;
+          const tol = 1e-3;
+          const pts: [number, number][] = [];
+          for (const c of region) {
+            const poly = contourPolyline(c, tol);
+            for (let k = 0; k < poly.length; k += 2) pts.push([poly[k], poly[k + 1]]);
+          }
+          const perimeter = contourLength(hull);
+          const dense = pointHullArea(pts);
+          expect(exact).toBeGreaterThanOrEqual(dense - 1e-9 * exact);
+          expect(exact - dense).toBeLessThanOrEqual(tol * perimeter + 1e-9 * exact);
+          expect(exact).toBeGreaterThanOrEqual(regionMoments(region).m00 * (1 - 1e-12));
+          // Every boundary point of the section lies in the hull (within round-off).
+          for (const [x, y] of pts.filter((_, k) => k % 23 === 0)) {
+            expect(regionContainsPoint([hull], x, y) || boundaryDistance([hull], x, y) < 1e-9 * 100).toBe(true);
+          }
+          // And the kern of the section exists, with a finite boundary.
+          const p = sectionProperties(region);
+          const kern = kernFromHull(hull, p);
+          expect(kern.every(([x, y]) => Number.isFinite(x) && Number.isFinite(y))).toBe(true);
+        },
+      ),
+      { numRuns: 60 },
+    );
+  });
+});
+
+describe('kern tracing accuracy on off-centre hull arcs', () => {
+  it('area within 1e-4 of a dense independent trace (the issue\'s requirement)', () => {
+    // e(θ) = G − I ν(θ) / (A ν(θ)·(P(θ) − G)) sampled every 1e-4 rad on each hull arc, written out
+    // here independently of src/kern/kern.ts; straight hull edges give one point each.
+    const region: Region = [rect(0, 0, 50, 8), circle(10, 16, 8), ...translateRegion([dShape(6, 12)], 60, 30), circle(-20, -5, 3)];
+    const m = regionMoments(region);
+    const A = m.m00, G = { x: m.m10 / A, y: m.m01 / A };
+    const s = { area: A, centroid: G, Ix: m.m02 - A * G.y * G.y, Iy: m.m20 - A * G.x * G.x, Ixy: m.m11 - A * G.x * G.y };
+    const hull = convexHull(region);
+    const dense: KernPoint[] = [];
+    const n = hull.xy.length >> 1;
+    const e = (nx: number, ny: number, px: number, py: number): KernPoint => {
+      const h = nx * (px - G.x) + ny * (py - G.y);
+      return [G.x - (s.Iy * nx + s.Ixy * ny) / (A * h), G.y - (s.Ixy * nx + s.Ix * ny) / (A * h)];
+    };
+    for (let i = 0; i < n; i++) {
+      const j = (i + 1) % n;
+      const ax = hull.xy[2 * i], ay = hull.xy[2 * i + 1], bx = hull.xy[2 * j], by = hull.xy[2 * j + 1];
+      const b = hull.bulge ? hull.bulge[i] : 0;
+      const L = Math.hypot(bx - ax, by - ay);
+      if (b === 0) {
+        dense.push(e((by - ay) / L, -(bx - ax) / L, ax, ay));
+        continue;
+      }
+      const phi = 4 * Math.atan(b), alpha = phi / 2, r = L / (2 * Math.sin(alpha));
+      const ux = (by - ay) / L, uy = -(bx - ax) / L; // towards the bulge (phi > 0 on a hull)
+      const cx = (ax + bx) / 2 - ux * r * Math.cos(alpha), cy = (ay + by) / 2 - uy * r * Math.cos(alpha);
+      const t0 = Math.atan2(ay - cy, ax - cx);
+      const k = Math.ceil(phi / 1e-4);
+      for (let q = 0; q <= k; q++) {
+        const t = t0 + (phi * q) / k;
+        dense.push(e(Math.cos(t), Math.sin(t), cx + r * Math.cos(t), cy + r * Math.sin(t)));
+      }
+    }
+    const want = polygonAreaPerimeter(dense).area;
+    const got = polygonAreaPerimeter(sectionKern(region, s)).area;
+    expect(Math.abs(got - want) / want).toBeLessThan(1e-4);
+    expect(Math.abs(got - want) / want).toBeLessThan(4e-5);
   });
 });
 

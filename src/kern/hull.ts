@@ -17,7 +17,8 @@
  * and a convex arcs.
  *
  * Written by hand: no allowed library computes hulls of curved boundaries. Arcs flatter than a
- * radius of 1e7 section sizes are taken as their chords (their bulge is below 1e-8 of the size).
+ * radius of 3e7 section sizes are taken as their chords (their bulge is below 5e-9 of the size,
+ * about the round-off of a centre that far away).
  */
 import { arcPointAtAngle, regionBounds, type Contour, type Region } from '../geometry/contour';
 import { SectionError } from '../properties/section';
@@ -37,6 +38,8 @@ interface Arc {
   ay: number;
   bx: number;
   by: number;
+  /** Distance within which a point counts as on the circle: the tolerance plus the round-off of a centre r away. */
+  eps: number;
 }
 
 type State = { kind: 'point'; x: number; y: number } | { kind: 'arc'; k: number; theta: number };
@@ -90,7 +93,7 @@ function polygonHull(pts: [number, number][]): [number, number][] {
 }
 
 /** Vertices and convex arcs of the region. */
-function collect(region: Region, size: number): { pts: [number, number][]; arcs: Arc[] } {
+function collect(region: Region, size: number, tol: number): { pts: [number, number][]; arcs: Arc[] } {
   const pts: [number, number][] = [];
   const arcs: Arc[] = [];
   for (const c of region) {
@@ -105,12 +108,12 @@ function collect(region: Region, size: number): { pts: [number, number][]; arcs:
       const L = Math.hypot(bx - ax, by - ay);
       const phi = 4 * Math.atan(b);
       const r = L / (2 * Math.sin(phi / 2));
-      if (!(L > 0) || !(r < 1e7 * size)) continue;
+      if (!(L > 0) || !(r < 3e7 * size)) continue;
       // Centre: from the chord midpoint, against u = (ey, −ex), the normal towards the bulge.
       const ex = (bx - ax) / L, ey = (by - ay) / L;
       const d = r * Math.cos(phi / 2);
       const cx = (ax + bx) / 2 - ey * d, cy = (ay + by) / 2 + ex * d;
-      arcs.push({ cx, cy, r, t0: Math.atan2(ay - cy, ax - cx), sweep: phi, ax, ay, bx, by });
+      arcs.push({ cx, cy, r, t0: Math.atan2(ay - cy, ax - cx), sweep: phi, ax, ay, bx, by, eps: tol + 1e-14 * r });
     }
   }
   return { pts, arcs };
@@ -133,7 +136,7 @@ export function convexHull(region: Region): Contour {
   const size = Math.max(bounds.xmax - bounds.xmin, bounds.ymax - bounds.ymin);
   if (!(size > 0) || !Number.isFinite(size)) throw new SectionError('The section has no extent: it has no convex hull.');
   const tol = 1e-12 * Math.max(size, Math.abs(bounds.xmin), Math.abs(bounds.xmax), Math.abs(bounds.ymin), Math.abs(bounds.ymax));
-  const { pts: raw, arcs } = collect(region, size);
+  const { pts: raw, arcs } = collect(region, size, tol);
   const pts = polygonHull(raw);
 
   const pointEvents = (x: number, y: number, theta: number, out: Event[]) => {
@@ -153,7 +156,7 @@ export function convexHull(region: Region): Contour {
       const wx = x - a.cx, wy = y - a.cy;
       const rho = Math.hypot(wx, wy);
       const phi = Math.atan2(wy, wx);
-      if (Math.abs(rho - a.r) <= tol) {
+      if (Math.abs(rho - a.r) <= a.eps) {
         // The point lies on the arc's circle: the walk may continue along the arc from here.
         if (onArc(a, phi) && arcLeft(a, phi) > ANG_EPS) out.push({ advance: advance(phi, theta), reach: 0, to: { kind: 'arc', k, theta: phi }, x, y });
         return;
@@ -174,7 +177,7 @@ export function convexHull(region: Region): Contour {
     for (const [qx, qy] of pts) {
       const wx = qx - a.cx, wy = qy - a.cy;
       const rho = Math.hypot(wx, wy);
-      if (rho <= a.r + tol) continue; // on or inside the circle: never overtakes the arc
+      if (rho <= a.r + a.eps) continue; // on or inside the circle: never overtakes the arc
       const t = Math.atan2(wy, wx) - Math.acos(a.r / rho);
       if (!onArc(a, t)) continue;
       const [sx, sy] = arcPoint(a, t);
@@ -185,9 +188,10 @@ export function convexHull(region: Region): Contour {
       const wx = b.cx - a.cx, wy = b.cy - a.cy;
       const rho = Math.hypot(wx, wy);
       const dr = a.r - b.r;
-      if (rho <= tol && Math.abs(dr) <= tol) return; // the same circle: joined through the end points
+      const eps = a.eps + b.eps;
+      if (rho <= eps && Math.abs(dr) <= eps) return; // the same circle: joined through the end points
       // One circle inside the other (or touching it from inside): the smaller never overtakes.
-      if (!(rho - Math.abs(dr) > tol)) return;
+      if (!(rho - Math.abs(dr) > eps)) return;
       const t = Math.atan2(wy, wx) - Math.acos(dr / rho);
       if (!onArc(a, t) || !onArc(b, t)) return;
       const [tx, ty] = arcPoint(b, t);
@@ -231,8 +235,10 @@ export function convexHull(region: Region): Contour {
   const arcTo = (a: Arc, t1: number, sweep: number) => {
     if (!(sweep > ANG_EPS)) return;
     const pieces = Math.ceil(sweep / Math.PI - 1e-12);
+    // Ending on the arc's end: take its exact vertex (an angle about a far centre carries r·ε).
+    const atEnd = arcLeft(a, t1 + sweep) <= ANG_EPS;
     for (let p = 1; p <= pieces; p++) {
-      const [x, y] = arcPoint(a, t1 + (sweep * p) / pieces);
+      const [x, y] = p === pieces && atEnd ? [a.bx, a.by] : arcPoint(a, t1 + (sweep * p) / pieces);
       bulge.push(Math.tan(sweep / pieces / 4));
       xy.push(x, y);
       cx = x;

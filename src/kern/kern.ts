@@ -13,9 +13,11 @@
  * (Timoshenko, Strength of Materials, Part I, core of a section; Gere & Goodno, eccentric axial
  * loads, core of the cross section; both from memory). Each straight edge of the hull gives one kern
  * vertex, each hull vertex (a pencil of support lines through one point) gives a straight kern edge,
- * and each hull arc gives a curved piece e(θ) of the kern boundary, traced here adaptively: the
- * sagitta of every chord is kept below 3e-5 · (kern area / kern perimeter), which bounds the area
- * lost to the chords (about ⅔ · sagitta · chord each) by 2e-5 of the kern's area.
+ * and each hull arc gives a curved piece e(θ) of the kern boundary, traced here adaptively by
+ * bisection in θ: an interval is split until the midpoint lies within tol = 2.4e-4 · (kern area /
+ * kern perimeter) of its chord, and the midpoint is kept, so each output chord spans half a tested
+ * interval and has a quarter of its sagitta. The area lost to the chords (about ⅔ · sagitta · chord
+ * each) is then at most ⅔ · tol/4 · perimeter = 4e-5 of the kern's area (a circle: 512 points).
  *
  * Checks: rectangle b × h → rhombus with half-diagonals b/6 and h/6; solid circle → circle of
  * radius r/4; tube → circle of radius (R² + r²)/(4R) (tests/kern.test.ts).
@@ -109,13 +111,17 @@ function trace(s: KernSection, hull: Contour, tol: number | null): KernPoint[] {
   const n = hull.xy.length >> 1;
   const arcs = hullArcs(hull);
   const out: KernPoint[] = [];
+  // Edges shorter than this have no reliable normal; dropping one moves the kern by as little.
+  let size = 0;
+  for (let i = 0; i < n; i++) size = Math.max(size, Math.abs(hull.xy[2 * i] - hull.xy[0]), Math.abs(hull.xy[2 * i + 1] - hull.xy[1]));
+  const shortEdge = 1e-8 * size;
   for (let i = 0; i < n; i++) {
     const j = i + 1 === n ? 0 : i + 1;
     const ax = hull.xy[2 * i], ay = hull.xy[2 * i + 1], bx = hull.xy[2 * j], by = hull.xy[2 * j + 1];
     const a = arcs[i];
     if (!a) {
       const L = Math.hypot(bx - ax, by - ay);
-      if (!(L > 0)) continue;
+      if (!(L > shortEdge)) continue;
       out.push(kernPoint(s, (by - ay) / L, -(bx - ax) / L, ax, ay));
       continue;
     }
@@ -136,12 +142,15 @@ function trace(s: KernSection, hull: Contour, tol: number | null): KernPoint[] {
   return dedupe(out);
 }
 
-/** Drop consecutive points that coincide (tangent joins of the hull give the same kern point twice). */
+/**
+ * Drop consecutive points closer than 1e-9 of the kern's size: tangent joins of the hull give the
+ * same kern point twice, and tiny hull pieces give points whose spacing is round-off.
+ */
 function dedupe(pts: KernPoint[]): KernPoint[] {
   if (pts.length === 0) return pts;
   let size = 0;
   for (const p of pts) size = Math.max(size, Math.abs(p[0] - pts[0][0]), Math.abs(p[1] - pts[0][1]));
-  const tol = 1e-12 * size;
+  const tol = 1e-9 * size;
   const out: KernPoint[] = [];
   for (const p of pts) {
     const q = out[out.length - 1];
@@ -162,8 +171,8 @@ export function polygonAreaPerimeter(pts: readonly KernPoint[]): { area: number;
   return { area: a / 2, perimeter: p };
 }
 
-/** Relative sagitta budget: chords lose at most about 2e-5 of the kern's area. */
-const SAGITTA_BUDGET = 3e-5;
+/** Sagitta tolerance of a tested interval, relative to kern area / perimeter (see the header). */
+const SAGITTA_BUDGET = 2.4e-4;
 
 /**
  * The kern boundary, CCW, as points [x, y] (not repeating the first), from the section's convex
