@@ -7,23 +7,28 @@
  *                (a later shape replaces the material of the earlier ones where they overlap);
  *   subtract     removes all material: every R_k = R_k − S;
  *   intersect    keeps the common part with the material already there: every R_k = R_k ∩ S.
- * The union of the material regions is therefore exactly the region the evaluator builds from the
- * same layers (src/evaluate.ts), and each point of it carries the material of the last `add` layer
- * that covers it.
  *
- * Like the evaluator, consecutive layers with the same operation (and, for add, the same material)
- * form one run and go to the boolean module in one call, and layers with an empty region are left
- * out. For live dragging, `createMaterialComposer` caches every (run, material) result by the
- * identity of its inputs; when exactly one input of a run changed, the run is rebuilt from a cached
- * combination of the others plus the changed one. A drag frame with k materials then costs about
- * k + 1 boolean calls per run from the dragged layer on, and none before it.
+ * Computed without the layer-by-layer chain: a point ends up in material m exactly when the last
+ * add layer covering it has material m, no later subtract covers it and every later intersect
+ * does. So each add layer j of material m contributes its piece
+ *     P_j = (S_j ∩ every later intersect) − (every later subtract ∪ every later add of another material)
+ * and R_m is the union of the pieces of m. The union of all materials is the evaluator's region
+ * (src/evaluate.ts) for the same layers; layers with an empty region are left out, as there.
  *
- * With one material only, pass the evaluator's region as `union`: it is returned as that material's
+ * Why pieces: a chain would make every later boolean depend on every earlier one, so dragging an
+ * early shape would redo the whole document per material. Pieces depend only on the later layers
+ * whose boxes meet them. `createMaterialComposer` caches each piece by the identities of its inputs,
+ * and each material's union by its pieces: when the same few pieces keep changing (a drag), the
+ * union of the unchanged ones is kept and only the changed ones are added to it. A drag frame then
+ * costs one small difference per piece the dragged shape meets, plus one union per material whose
+ * pieces changed.
+ *
+ * With one material, pass the evaluator's region as `union`: it is returned as that material's
  * region (the same object), so a single-material section gives exactly the evaluator's numbers.
  */
 import { booleanRegions } from '../boolean';
 import type { Op } from '../document/types';
-import type { Region } from '../geometry/contour';
+import { regionBounds, type Bounds, type Region } from '../geometry/contour';
 
 export interface MaterialLayer {
   region: Region;
@@ -37,80 +42,64 @@ export interface MaterialRegion {
   region: Region;
 }
 
-type Kind = 'union' | 'difference' | 'intersection';
-
-interface Run {
-  op: Op;
-  material: string;
-  inputs: Region[];
-}
-
-interface OpCache {
-  kind: Kind;
-  before: Region;
-  inputs: Region[];
-  result: Region;
-  /** For one changed input: the operation applied to `before` with every input but `index`. */
-  partial: { index: number; others: Region[]; value: Region } | null;
-}
-
 const EMPTY: Region = [];
 
 function sameList(a: readonly Region[], b: readonly Region[]): boolean {
   return a.length === b.length && a.every((v, k) => v === b[k]);
 }
 
-/** `before` itself when the result holds the same contours (no clip reached it): keeps identities stable for the caches. */
-function keepIdentity(before: Region, result: Region): Region {
-  if (result === before || result.length !== before.length) return result;
-  const set = new Set(before);
-  return result.every((c) => set.has(c)) ? before : result;
+/** Boxes that touch count as meeting (the boolean module treats touching the same way). */
+function meet(a: Bounds | null, b: Bounds | null): boolean {
+  if (!a || !b) return false;
+  const tol = 1e-9 * Math.max(a.xmax - a.xmin, a.ymax - a.ymin, b.xmax - b.xmin, b.ymax - b.ymin);
+  return !(b.xmin > a.xmax + tol || b.xmax < a.xmin - tol || b.ymin > a.ymax + tol || b.ymax < a.ymin - tol);
 }
 
-/** One operation of a run on one material's region (the evaluator's run rules). */
-function apply(kind: Kind, before: Region, inputs: Region[]): Region {
-  if (inputs.length === 0) return before;
-  if (kind === 'union') {
-    if (before.length === 0) return inputs.length === 1 ? inputs[0] : booleanRegions(inputs[0], inputs.slice(1), 'union');
-    return booleanRegions(before, inputs, 'union');
-  }
-  if (before.length === 0) return EMPTY;
-  if (kind === 'difference') return keepIdentity(before, booleanRegions(before, inputs, 'difference'));
-  let r = before;
-  for (const s of inputs) r = r.length ? booleanRegions(r, [s], 'intersection') : EMPTY;
-  return r;
+/** Union of regions (empty ones skipped). */
+function unionOf(regions: readonly Region[]): Region {
+  const live = regions.filter((r) => r.length > 0);
+  if (live.length === 0) return EMPTY;
+  if (live.length === 1) return live[0];
+  return booleanRegions(live[0], live.slice(1), 'union');
 }
 
-/** The operation with its cache: reuse, rebuild from the others plus one changed input, or compute. */
-function cachedApply(prev: OpCache | undefined, kind: Kind, before: Region, inputs: Region[]): OpCache {
-  if (prev && prev.kind === kind && prev.before === before) {
-    if (sameList(prev.inputs, inputs)) return prev;
-    if (kind !== 'intersection' && prev.inputs.length === inputs.length) {
-      const changed: number[] = [];
-      inputs.forEach((r, i) => r !== prev.inputs[i] && changed.push(i));
-      if (changed.length === 1) {
-        const i = changed[0];
-        const others = inputs.filter((_, j) => j !== i);
-        let partial = prev.partial;
-        if (!partial || partial.index !== i || !sameList(partial.others, others)) partial = { index: i, others, value: apply(kind, before, others) };
-        const result = apply(kind, partial.value, [inputs[i]]);
-        return { kind, before, inputs, result, partial };
-      }
-    }
-  }
-  return { kind, before, inputs, result: apply(kind, before, inputs), partial: null };
+/** (S ∩ each keep) − ∪ clips. */
+function pieceOf(S: Region, clips: readonly Region[], keeps: readonly Region[]): Region {
+  let v = S;
+  for (const k of keeps) v = v.length ? booleanRegions(v, [k], 'intersection') : EMPTY;
+  if (v.length && clips.length) v = booleanRegions(v, [...clips], 'difference');
+  return v;
 }
 
-/** Consecutive layers with the same operation (and material, for add) form one run; intersect layers stay single. */
-function buildRuns(layers: readonly MaterialLayer[]): Run[] {
-  const runs: Run[] = [];
-  for (const l of layers) {
-    if (l.region.length === 0) continue;
-    const last = runs[runs.length - 1];
-    if (last && last.op === l.op && l.op !== 'intersect' && (l.op !== 'add' || last.material === l.material)) last.inputs.push(l.region);
-    else runs.push({ op: l.op, material: l.op === 'add' ? l.material : '', inputs: [l.region] });
+interface PieceCache {
+  S: Region;
+  clips: Region[];
+  keeps: Region[];
+  value: Region;
+}
+
+interface UnionCache {
+  pieces: Region[];
+  value: Region;
+  /** The union of every piece outside `changed`, for frames where only those pieces change. */
+  partial: { changed: Set<number>; pieces: Region[]; value: Region } | null;
+}
+
+/** The union of a material's pieces, reusing the union of the unchanged ones when it can. */
+function cachedUnion(prev: UnionCache | undefined, pieces: Region[]): UnionCache {
+  if (!prev || prev.pieces.length !== pieces.length) return { pieces, value: unionOf(pieces), partial: null };
+  if (sameList(prev.pieces, pieces)) return prev;
+  const changed = new Set<number>();
+  pieces.forEach((p, i) => p !== prev.pieces[i] && changed.add(i));
+  let partial = prev.partial;
+  const covers = partial && [...changed].every((i) => partial!.changed.has(i)) && pieces.every((p, i) => partial!.changed.has(i) || p === partial!.pieces[i]);
+  if (!covers) {
+    // Worth keeping only when few pieces change; otherwise unite them all.
+    if (2 * changed.size > pieces.length) return { pieces, value: unionOf(pieces), partial: null };
+    partial = { changed, pieces, value: unionOf(pieces.filter((_, i) => !changed.has(i))) };
   }
-  return runs;
+  const moving = pieces.filter((_, i) => partial!.changed.has(i));
+  return { pieces, value: unionOf([partial!.value, ...moving]), partial };
 }
 
 export interface MaterialComposer {
@@ -123,35 +112,49 @@ export interface MaterialComposer {
 }
 
 export function createMaterialComposer(): MaterialComposer {
-  let caches: Map<string, OpCache>[] = [];
+  const boxes = new WeakMap<Region, Bounds | null>();
+  const box = (r: Region) => {
+    let b = boxes.get(r);
+    if (b === undefined) {
+      b = regionBounds(r);
+      boxes.set(r, b);
+    }
+    return b;
+  };
+  let pieceCache: (PieceCache | undefined)[] = [];
+  let unionCache = new Map<string, UnionCache>();
   return {
-    compose(layers, options) {
-      const runs = buildRuns(layers);
+    compose(input, options) {
+      const layers = input.filter((l) => l.region.length > 0);
       const order: string[] = [];
-      for (const r of runs) if (r.op === 'add' && !order.includes(r.material)) order.push(r.material);
+      for (const l of layers) if (l.op === 'add' && !order.includes(l.material)) order.push(l.material);
       if (order.length === 1 && options?.union) return options.union.length ? [{ material: order[0], region: options.union }] : [];
-      let state = new Map<string, Region>();
-      const next: Map<string, OpCache>[] = [];
-      runs.forEach((run, k) => {
-        const prev = caches[k];
-        const here = new Map<string, OpCache>();
-        const after = new Map<string, Region>();
-        if (run.op === 'add' && !state.has(run.material)) state.set(run.material, EMPTY);
-        for (const [id, before] of state) {
-          const kind: Kind = run.op === 'add' ? (id === run.material ? 'union' : 'difference') : run.op === 'subtract' ? 'difference' : 'intersection';
-          const c = cachedApply(prev?.get(id), kind, before, run.inputs);
-          here.set(id, c);
-          after.set(id, c.result);
+      const nextPieces: (PieceCache | undefined)[] = [];
+      const byMaterial = new Map<string, Region[]>(order.map((m) => [m, []]));
+      layers.forEach((l, j) => {
+        if (l.op !== 'add') return;
+        const bj = box(l.region);
+        const clips: Region[] = [], keeps: Region[] = [];
+        for (let k = j + 1; k < layers.length; k++) {
+          const o = layers[k];
+          if (o.op === 'intersect') keeps.push(o.region);
+          else if ((o.op === 'subtract' || o.material !== l.material) && meet(bj, box(o.region))) clips.push(o.region);
         }
-        next.push(here);
-        state = after;
+        const prev = pieceCache[j];
+        const hit = prev && prev.S === l.region && sameList(prev.clips, clips) && sameList(prev.keeps, keeps);
+        const c = hit ? prev : { S: l.region, clips, keeps, value: pieceOf(l.region, clips, keeps) };
+        nextPieces[j] = c;
+        byMaterial.get(l.material)!.push(c.value);
       });
-      caches = next;
+      pieceCache = nextPieces;
+      const nextUnions = new Map<string, UnionCache>();
       const out: MaterialRegion[] = [];
-      for (const id of order) {
-        const region = state.get(id) ?? EMPTY;
-        if (region.length) out.push({ material: id, region });
+      for (const m of order) {
+        const u = cachedUnion(unionCache.get(m), byMaterial.get(m)!);
+        nextUnions.set(m, u);
+        if (u.value.length) out.push({ material: m, region: u.value });
       }
+      unionCache = nextUnions;
       return out;
     },
   };
