@@ -33,6 +33,9 @@ import { composeMaterials, createMaterialComposer, type MaterialLayer } from '..
 import { mixedSection, partsFromRegions, type MaterialPart } from '../src/materials/mixed';
 import { compositePlastic } from '../src/materials/plastic';
 import type { Material } from '../src/materials/material';
+import { mixedPropsJson } from '../src/materials/json';
+import { sectionKern } from '../src/kern/kern';
+import { CODE_DEFERRAL, TRANSFORMED_CAUTION } from '../src/materials/cautions';
 
 const wood: Material = { id: 'wood', name: 'Wood', E: 1500, density: 500, fy: 6 }; // ksi (Gere Ex. 6-1)
 const steelUS: Material = { id: 'steel', name: 'Steel', E: 30000, density: 7850, fy: 36 }; // ksi
@@ -396,6 +399,39 @@ describe('invariance of the transformed section (fast-check, exact identities)',
       }),
       { numRuns: 80 },
     );
+  });
+});
+
+describe('props JSON for the CLI', () => {
+  it('has the keys the CLI prints, with the kern of the transformed section', () => {
+    // Timber 100 × 200 over a steel flat 100 × 10 (as above); the kern of a section whose hull is
+    // its 100 × 210 bounding rectangle has four vertices, one per hull edge.
+    const timber: Material = { id: 'c24', name: 'Softwood C24', E: 11000, density: 420, fy: 24 };
+    const steel: Material = { id: 's355', name: 'Steel S355', E: 210000, density: 7850, fy: 355 };
+    const parts: MaterialPart[] = [
+      { material: timber, region: [rect(0, 0, 100, 200)] },
+      { material: steel, region: [rect(0, -10, 100, 10)] },
+    ];
+    const s = mixedSection(parts, steel, 'mm');
+    const kern = sectionKern(parts.flatMap((p) => p.region), s.transformed);
+    const j = mixedPropsJson(s, { plastic: compositePlastic(parts), kern });
+    expect(Object.keys(j).sort()).toEqual(['by_material', 'cautions', 'cg', 'kern', 'mass_per_length', 'plastic', 'transformed']);
+    expect(Object.keys(j.transformed).sort()).toEqual(['E', 'I1', 'I2', 'Ix', 'Ixy', 'Iy', 'area', 'centroid', 'reference', 'theta']);
+    expect(j.transformed.reference).toBe('s355');
+    expect(Object.keys(j.by_material)).toEqual(['c24', 's355']);
+    close(j.by_material.c24.area, 20000, 1e-15);
+    expect(j.by_material.c24.centroid).toEqual({ x: 50, y: 100 });
+    close(j.mass_per_length, 16.25, 1e-14);
+    expect(j.kern!.length).toBe(4);
+    // Transformed to steel, n = 11000/210000: hand calculation of the kern's vertical reach
+    // e = I / (A c) for the top and bottom edges (Gere & Goodno, core of a section).
+    const n = 11000 / 210000, A = 1000 + n * 20000, yb = (1000 * -5 + n * 20000 * 100) / A;
+    const I = (100 * 1000) / 12 + 1000 * (yb + 5) ** 2 + n * ((100 * 200 ** 3) / 12 + 20000 * (100 - yb) ** 2);
+    const ys = j.kern!.map((p) => p[1]);
+    close(Math.min(...ys), yb - I / (A * (200 - yb)), 1e-13);
+    close(Math.max(...ys), yb + I / (A * (yb + 10)), 1e-13);
+    expect(j.cautions).toEqual([TRANSFORMED_CAUTION, CODE_DEFERRAL]);
+    expect(JSON.parse(JSON.stringify(j))).toEqual(j);
   });
 });
 

@@ -62,7 +62,8 @@ export function mixedPropsJson(section: MixedSection, extras: { plastic?: Compos
   const out: MixedPropsJson = {
     cg: section.cg && { ...section.cg },
     mass_per_length: section.massPerLength,
-    transformed: { reference: t.reference, E: t.E, area: t.area, centroid: { ...t.centroid }, Ix: t.Ix, Iy: t.Iy, Ixy: t.Ixy, I1: t.I1, I2: t.I2, theta: t.theta },
+    // θ + 0 turns the −0 of a symmetric section into the 0 that JSON prints anyway.
+    transformed: { reference: t.reference, E: t.E, area: t.area, centroid: { ...t.centroid }, Ix: t.Ix, Iy: t.Iy, Ixy: t.Ixy, I1: t.I1, I2: t.I2, theta: t.theta + 0 },
     by_material: by,
     cautions: sectionCautions(section),
   };
