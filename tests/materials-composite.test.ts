@@ -19,8 +19,8 @@
  *   worked by hand for a steel plate on timber.
  */
 import fc from 'fast-check';
-import { describe, expect, it } from 'vitest';
-import { circle, close, rect } from './helpers';
+import { afterAll, describe, expect, it } from 'vitest';
+import { circle, close, rect, worst } from './helpers';
 import { contourFrom, reverseContour, rotateRegion, translateRegion, type Region } from '../src/geometry/contour';
 import { regionMoments } from '../src/moments/kernel';
 import { booleanRegions } from '../src/boolean';
@@ -444,4 +444,8 @@ describe('bad input', () => {
     expect(() => mixedSection([{ material: good, region: [reverseContour(rect(0, 0, 1, 1))] }], good, 'mm')).toThrow(/negative area/);
     expect(() => partsFromRegions([{ material: 'x', region: [rect(0, 0, 1, 1)] }], [good])).toThrow(/unknown material "x"; known materials: "g"/);
   });
+});
+
+afterAll(() => {
+  console.log(`materials-composite: largest relative error ${worst.value.toExponential(2)}`);
 });

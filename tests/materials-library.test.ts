@@ -9,8 +9,8 @@
  * NIST SP 811, App. B (1 lbf = 4.4482216152605 N, 1 in = 0.0254 m exactly, 1 psi =
  * 6894.757 Pa, 1 ksi = 6.894757 MPa).
  */
-import { describe, expect, it } from 'vitest';
-import { close } from './helpers';
+import { afterAll, describe, expect, it } from 'vitest';
+import { close, worst } from './helpers';
 import { MATERIAL_LIBRARY, libraryMaterial, materialInStressUnit } from '../src/materials/library';
 import { materialIssues, materialListIssues, materialReferenceIssues, findMaterial, type Material } from '../src/materials/material';
 import { convertStress, massPerLength, momentFactor, resistanceMomentFactor, stressFactor, STRESS_UNIT_IN_PASCALS } from '../src/materials/units';
@@ -104,4 +104,8 @@ describe('unit model', () => {
     close(massPerLength(10, 7850, 'cm'), 7.85, 1e-14);
     close(massPerLength(1000 / 645.16, 7850, 'in'), 7.85, 1e-14);
   });
+});
+
+afterAll(() => {
+  console.log(`materials-library: largest relative error ${worst.value.toExponential(2)}`);
 });

@@ -18,8 +18,8 @@
  *   to about 1 %, the stated tolerance.
  */
 import fc from 'fast-check';
-import { describe, expect, it } from 'vitest';
-import { circle, close, rect } from './helpers';
+import { afterAll, describe, expect, it } from 'vitest';
+import { circle, close, rect, worst } from './helpers';
 import { contourFrom, reverseContour, rotateRegion, type Region } from '../src/geometry/contour';
 import { mixedSection, type MaterialPart } from '../src/materials/mixed';
 import type { Material } from '../src/materials/material';
@@ -380,4 +380,8 @@ describe('colour-map data', () => {
     // Uniform stress (axial only): one colour per material.
     expect(stressGradients(stressField(s, { N: 5 }, SI), stressExtremes(stressField(s, { N: 5 }, SI))).every((g) => g.uniform)).toBe(true);
   });
+});
+
+afterAll(() => {
+  console.log(`materials-stress: largest relative error ${worst.value.toExponential(2)}`);
 });

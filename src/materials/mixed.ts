@@ -27,7 +27,7 @@ import type { Units } from '../document/types';
 import { regionBounds, type Bounds, type Region } from '../geometry/contour';
 import { regionMoments, type RawMoments } from '../moments/kernel';
 import { centroidalFromRaw, principal, SectionError } from '../properties/section';
-import { assertMaterial, type Material } from './material';
+import { assertMaterial, MaterialError, type Material } from './material';
 import { massPerLength } from './units';
 
 export interface MaterialPart {
@@ -217,7 +217,7 @@ export function mixedSection(parts: readonly MaterialPart[], reference: Material
 export function partsFromRegions(regions: readonly { material: string; region: Region }[], materials: readonly Material[]): MaterialPart[] {
   return regions.map((r) => {
     const material = materials.find((m) => m.id === r.material);
-    if (!material) throw new SectionError(`unknown material "${r.material}"; known materials: ${materials.map((m) => `"${m.id}"`).join(', ') || 'none'}`);
+    if (!material) throw new MaterialError(`unknown material "${r.material}"; known materials: ${materials.map((m) => `"${m.id}"`).join(', ') || 'none'}`);
     return { material, region: r.region };
   });
 }
