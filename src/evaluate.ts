@@ -9,9 +9,21 @@
  * record's identity (the store keeps unchanged records identical), each run's result by its
  * inputs, and when exactly one shape of a run changes, the run is rebuilt from a cached combination
  * of the others plus the changed one, so a drag frame costs a couple of boolean calls.
+ *
+ * Two more results come with the section when the document has them: line elements, which stay
+ * out of the booleans and form line groups (src/lines/), and materials, where the same layers are
+ * composed per material by document order (src/materials/) for the centre of gravity and the
+ * transformed section. Both reuse their work across calls in the same way.
  */
 import { booleanRegions, resolveOutline } from './boolean';
 import type { Region } from './geometry/contour';
+import type { LineChain } from './lines/chain';
+import { LineError } from './lines/chain';
+import { lineProperties, type LineProperties } from './lines/line-properties';
+import { createMaterialComposer, type MaterialRegion } from './materials/compose';
+import { MaterialError } from './materials/material';
+import { mixedSection, partsFromRegions, type MixedSection } from './materials/mixed';
+import { kindOf } from './shapes/registry';
 import { mayCrossItself, shapeContours } from './shapes/ops';
 import type { Issue } from './document/validate';
 import type { Op, SectionDocument, Shape } from './document/types';
@@ -20,7 +32,24 @@ import { SectionError, sectionProperties, type SectionProperties } from './prope
 export interface ShapeResult {
   id: string;
   region: Region;
+  /** A line element's exact chains (its region is empty). */
+  chains?: LineChain[];
   error?: string;
+}
+
+/** One line group: its name, the line elements in it, and its properties per unit thickness. */
+export interface LineGroupResult {
+  group: string;
+  ids: string[];
+  props: LineProperties | null;
+  message: string | null;
+}
+
+/** The section by material: one region per material and the mixed-section results. */
+export interface MaterialsResult {
+  regions: MaterialRegion[];
+  section: MixedSection | null;
+  message: string | null;
 }
 
 export interface Evaluation {
@@ -29,6 +58,10 @@ export interface Evaluation {
   props: SectionProperties | null;
   message: string | null;
   warnings: Issue[];
+  /** Line groups, in the order their first element appears; empty without line elements. */
+  lines: LineGroupResult[];
+  /** Present when the document has materials. */
+  materials: MaterialsResult | null;
 }
 
 interface CachedShape {
@@ -55,6 +88,8 @@ interface CachedRun {
 
 function buildShape(shape: Shape): CachedShape {
   try {
+    const line = kindOf(shape).line;
+    if (line) return { region: [], warning: null, error: null, result: { id: shape.id, region: [], chains: line.chains(shape) } };
     const raw = shapeContours(shape);
     if (!mayCrossItself(shape)) return { region: raw, warning: null, error: null, result: { id: shape.id, region: raw } };
     const { region, selfIntersecting } = resolveOutline(raw);
@@ -99,13 +134,72 @@ export interface Evaluator {
   shapes(doc: SectionDocument): ShapeResult[];
 }
 
+/** Line groups from the line elements, each group's properties reused while its elements are unchanged. */
+function createLineStage() {
+  let cache = new Map<string, { chains: LineChain[]; result: LineGroupResult }>();
+  return (elements: readonly { group: string; id: string; chains: LineChain[] }[]): LineGroupResult[] => {
+    const groups = new Map<string, { ids: string[]; chains: LineChain[] }>();
+    for (const e of elements) {
+      const g = groups.get(e.group) ?? { ids: [], chains: [] };
+      g.ids.push(e.id);
+      g.chains.push(...e.chains);
+      groups.set(e.group, g);
+    }
+    const next = new Map<string, { chains: LineChain[]; result: LineGroupResult }>();
+    const out: LineGroupResult[] = [];
+    for (const [group, g] of groups) {
+      const prev = cache.get(group);
+      let result: LineGroupResult;
+      if (prev && prev.chains.length === g.chains.length && prev.chains.every((c, k) => c === g.chains[k]) && prev.result.ids.join() === g.ids.join()) result = prev.result;
+      else {
+        try {
+          result = { group, ids: g.ids, props: lineProperties(g.chains), message: null };
+        } catch (e) {
+          if (!(e instanceof LineError)) throw e;
+          result = { group, ids: g.ids, props: null, message: e.message };
+        }
+      }
+      next.set(group, { chains: g.chains, result });
+      out.push(result);
+    }
+    cache = next;
+    return out;
+  };
+}
+
+/** The layers composed per material, and the mixed-section results, reused while nothing they use changed. */
+function createMaterialStage() {
+  const composer = createMaterialComposer();
+  let last: { regions: MaterialRegion[]; doc: Pick<SectionDocument, 'materials' | 'reference' | 'units'>; result: MaterialsResult } | null = null;
+  return (doc: SectionDocument, layers: { region: Region; op: Op; material: string }[], union: Region): MaterialsResult | null => {
+    const materials = doc.materials;
+    if (!materials?.length) return null;
+    const reference = materials.find((m) => m.id === doc.reference);
+    if (!reference) return { regions: [], section: null, message: `The reference material "${doc.reference ?? ''}" is not one of the document's materials.` };
+    const regions = composer.compose(layers, { union });
+    const same = last && last.doc.materials === materials && last.doc.reference === doc.reference && last.doc.units === doc.units && last.regions.length === regions.length && last.regions.every((r, k) => r.material === regions[k].material && r.region === regions[k].region);
+    if (same) return last!.result;
+    let result: MaterialsResult;
+    try {
+      result = { regions, section: mixedSection(partsFromRegions(regions, materials), reference, doc.units), message: null };
+    } catch (e) {
+      if (!(e instanceof SectionError) && !(e instanceof MaterialError)) throw e;
+      result = { regions, section: null, message: e.message };
+    }
+    last = { regions, doc: { materials, reference: doc.reference, units: doc.units }, result };
+    return result;
+  };
+}
+
 export function createEvaluator(): Evaluator {
   const shapeCache = new WeakMap<Shape, CachedShape>();
   const runCache: CachedRun[] = [];
   let shapesDoc: SectionDocument | null = null;
   let shapesList: ShapeResult[] = [];
   let lastRegion: Region | null = null;
-  let lastProps: { region: Region; props: SectionProperties | null; message: string | null } | null = null;
+  let lastProps: { region: Region; areaShapes: boolean; props: SectionProperties | null; message: string | null } | null = null;
+  const lineStage = createLineStage();
+  const materialStage = createMaterialStage();
 
   function evalRun(k: number, before: Region, run: Run): Region {
     const prev = runCache[k];
@@ -155,12 +249,22 @@ export function createEvaluator(): Evaluator {
     evaluate(doc: SectionDocument): Evaluation {
       const warnings: Issue[] = [];
       const runs: Run[] = [];
+      const elements: { group: string; id: string; chains: LineChain[] }[] = [];
+      const layers: { region: Region; op: Op; material: string }[] = [];
+      let areaShapes = 0;
       doc.shapes.forEach((s, idx) => {
         const c = cached(s);
         if (c.error) warnings.push({ path: `shapes[${idx}]`, message: `left out of the section: ${c.error}` });
         if (c.warning) warnings.push({ path: `shapes[${idx}]`, message: c.warning });
+        const line = kindOf(s).line;
+        if (line) {
+          if (c.result.chains) elements.push({ group: line.group(s), id: s.id, chains: c.result.chains });
+          return;
+        }
+        areaShapes++;
         if (c.error || c.region.length === 0) return;
         const op = s.op ?? 'add';
+        layers.push({ region: c.region, op, material: s.material ?? doc.reference ?? '' });
         const last = runs[runs.length - 1];
         if (last && last.op === op && op !== 'intersect') last.inputs.push(c.region);
         else runs.push({ op, inputs: [c.region] });
@@ -170,11 +274,12 @@ export function createEvaluator(): Evaluator {
         region = evalRun(k, region, run);
       });
       runCache.length = runs.length;
-      if (region !== lastRegion || !lastProps) {
+      if (region !== lastRegion || !lastProps || lastProps.areaShapes !== areaShapes > 0) {
         lastRegion = region;
         let props: SectionProperties | null = null;
         let message: string | null = null;
         if (doc.shapes.length === 0) message = 'The section is empty: add a shape to see its properties.';
+        else if (areaShapes === 0) message = 'There are line elements only: the section has no area, so there are no area properties.';
         else {
           try {
             props = sectionProperties(region);
@@ -183,9 +288,17 @@ export function createEvaluator(): Evaluator {
             message = e.message;
           }
         }
-        lastProps = { region, props, message };
+        lastProps = { region, areaShapes: areaShapes > 0, props, message };
       }
-      return { region, shapes: shapes(doc), props: lastProps.props, message: lastProps.message, warnings };
+      return {
+        region,
+        shapes: shapes(doc),
+        props: lastProps.props,
+        message: lastProps.message,
+        warnings,
+        lines: lineStage(elements),
+        materials: lastProps.props ? materialStage(doc, layers, region) : null,
+      };
     },
   };
 }

@@ -12,10 +12,12 @@ export type { PointMap } from './shapes/base';
 export { shapeToRegion, shapeContours, mayCrossItself, translateShape, rotateShape, mirrorShape, scaleShape, shapeKindLabel, shapeDisplayName } from './shapes/ops';
 export { pathContour } from './shapes/path';
 export { PROFILE_TYPES, isProfile, isProfileType } from './shapes/profile';
+export { STRIP_CORNERS } from './shapes/strip';
+export { DEFAULT_LINE_GROUP } from './shapes/line';
 export { profileToPaths, ProfileError, type ProfilePaths } from './shapes/profile/outline';
 export { validateProfile, PROFILE_DEFAULTS, PROFILE_FIELDS, type ProfileField, type ProfileIssue } from './shapes/profile/fields';
 export type { ProfileType, ProfileDimensions } from './shapes/profile/types';
-export { createEvaluator, evaluateDocument, type Evaluation, type Evaluator, type ShapeResult } from './evaluate';
+export { createEvaluator, evaluateDocument, type Evaluation, type Evaluator, type ShapeResult, type LineGroupResult, type MaterialsResult } from './evaluate';
 export {
   sectionProperties,
   cutSection,
@@ -47,3 +49,5 @@ export type { SectionComparison, PropertyChange, LimitResult, LimitStatus, Verdi
 export { analyseCutouts, sectionCautions, CUTOUT_CAUTION_TEXT, HOLE_CHECK_NOTE, HOLE_RULE_SETS } from './cautions';
 export type { Caution, CautionKind, CautionSeverity, CutoutFindings, InputShape, HoleRuleSetId } from './cautions';
 export { netSection, describeGap, NetSectionError, NET_SECTION_PURPOSE, NET_SECTION_CAUTION, type NetSection, type NetGap, type GapKind } from './netsection';
+export * from './lines';
+export * from './materials';

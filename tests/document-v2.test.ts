@@ -129,3 +129,21 @@ describe('materials, loads and checker fields', () => {
     expect(errs).toContain('checked: checked must be an object {by, date}');
   });
 });
+
+describe('units of a version-2 document', () => {
+  it('a change of units scales the proposals, the length limits and the moments given per document length', async () => {
+    const { convertDocumentUnits } = await import('../src');
+    const d = ok({
+      ...v1,
+      variants: [{ name: 'P', shapes: ['plate', { id: 'cope', type: 'rectangle', at: [180, 80], width: 20, height: 20, op: 'subtract' }] }],
+      limits: [{ property: 'centroid', maxShift: 2 }, { property: 'Ix', maxLossPercent: 10 }],
+      loads: { N: 10, Mx: 5000 },
+    });
+    const cm = convertDocumentUnits(d, 'cm');
+    // 1 cm = 10 mm exactly (SI).
+    expect(cm.variants![0].shapes[1]).toMatchObject({ at: [18, 8], width: 2, height: 2 });
+    expect(cm.limits).toEqual([{ property: 'centroid', maxShift: 0.2 }, { property: 'Ix', maxLossPercent: 10 }]);
+    expect(cm.loads).toEqual({ N: 10, Mx: 500 });
+    expect(convertDocumentUnits({ ...d, momentLength: 'm' }, 'cm').loads).toEqual({ N: 10, Mx: 5000 });
+  });
+});

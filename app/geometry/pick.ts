@@ -4,7 +4,7 @@
  * stays in the engine.
  */
 import type { ShapeResult } from '../../src';
-import { regionPolylines } from '../paint/trace';
+import { chainPoints, regionPolylines } from '../paint/trace';
 
 type Poly = Float64Array;
 
@@ -37,6 +37,13 @@ export function distanceToPolylines(polys: Poly[], x: number, y: number): number
   return best;
 }
 
+/** Smallest distance from (x, y) to open polylines. */
+function distanceToOpenPolylines(polys: Poly[], x: number, y: number): number {
+  let best = Infinity;
+  for (const p of polys) for (let i = 0; i + 1 < p.length >> 1; i++) best = Math.min(best, segDist(x, y, p[2 * i], p[2 * i + 1], p[2 * i + 2], p[2 * i + 3]));
+  return best;
+}
+
 function segDist(px: number, py: number, ax: number, ay: number, bx: number, by: number): number {
   const dx = bx - ax, dy = by - ay;
   const L2 = dx * dx + dy * dy;
@@ -48,6 +55,11 @@ function segDist(px: number, py: number, ax: number, ay: number, bx: number, by:
 export function pickShape(shapes: readonly ShapeResult[], x: number, y: number, tol: number, near: number): string | null {
   for (let k = shapes.length - 1; k >= 0; k--) {
     const s = shapes[k];
+    // A line element is picked near its stroke.
+    if (s.chains) {
+      if (distanceToOpenPolylines(s.chains.map((c) => chainPoints(c, tol)), x, y) <= near) return s.id;
+      continue;
+    }
     if (!s.region.length) continue;
     const polys = regionPolylines(s.region, tol);
     if (windingNumber(polys, x, y) !== 0 || distanceToPolylines(polys, x, y) <= near) return s.id;

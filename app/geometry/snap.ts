@@ -3,7 +3,7 @@
  * within a few pixels, else to the grid (when on). The orthogonal mode then keeps the point
  * horizontal or vertical from the previous one.
  */
-import { regionSegments, segmentBox, segmentIntersections, segmentMidpoint, type Point, type Segment, type ShapeResult } from '../../src';
+import { chainSegments, regionSegments, segmentBox, segmentIntersections, segmentMidpoint, type Point, type Segment, type ShapeResult } from '../../src';
 import type { SnapSettings } from '../store/store';
 import type { SnapResult } from '../store/transient';
 
@@ -93,10 +93,12 @@ export function snapPoints(shapes: readonly ShapeResult[], intersections: boolea
   const points: SnapPoint[] = [];
   const segsByShape: { id: string; segs: Segment[]; boxes: [number, number, number, number][] }[] = [];
   for (const s of shapes) {
-    const segs = regionSegments(s.region);
+    const segs = s.chains ? s.chains.flatMap(chainSegments) : regionSegments(s.region);
     segsByShape.push({ id: s.id, segs, boxes: segs.map(segmentBox) });
     for (const g of segs) {
       points.push({ x: g.ax, y: g.ay, kind: 'vertex', shape: s.id });
+      // An open line's last end is a vertex too (a closed loop's is its first).
+      if (s.chains && g === segs[segs.length - 1]) points.push({ x: g.bx, y: g.by, kind: 'vertex', shape: s.id });
       const [mx, my] = segmentMidpoint(g);
       points.push({ x: mx, y: my, kind: 'midpoint', shape: s.id });
       if (g.kind === 'arc') points.push({ x: g.cx, y: g.cy, kind: 'centre', shape: s.id });

@@ -3,7 +3,7 @@
  * result, or convert a parametric profile into paths. Both keep arcs exact (engine geometry)
  * and record one undo step; a conversion that would change the section is refused.
  */
-import { allShapeIds, isProfile, profileToOutline, regionToPaths, type Shape } from '../../src';
+import { allShapeIds, isProfile, kindOf, profileToOutline, regionToPaths, type Shape } from '../../src';
 import type { CommandContext } from '../commands/registry';
 import { commit } from '../store/history';
 import { notify } from './notice';
@@ -14,7 +14,8 @@ export function mergeSelection(ctx: CommandContext): void {
   const s = ctx.store.getState();
   const sel = new Set(s.selected);
   const current = activeShapes(s.doc);
-  const picked = current.filter((sh) => sel.has(sh.id));
+  // Only area shapes merge: line elements enclose no area and stay as they are.
+  const picked = current.filter((sh) => sel.has(sh.id) && !kindOf(sh).line);
   if (picked.length === 0) return;
   const ev = ctx.evaluate({ ...activeSection(s.doc), shapes: picked });
   if (ev.region.length === 0) {
@@ -22,9 +23,10 @@ export function mergeSelection(ctx: CommandContext): void {
     return;
   }
   const paths = regionToPaths(ev.region, allShapeIds(s.doc));
-  const first = current.findIndex((sh) => sel.has(sh.id));
-  const before = current.slice(0, first).filter((sh) => !sel.has(sh.id));
-  const after = current.slice(first).filter((sh) => !sel.has(sh.id));
+  const merged = new Set(picked.map((sh) => sh.id));
+  const first = current.findIndex((sh) => merged.has(sh.id));
+  const before = current.slice(0, first).filter((sh) => !merged.has(sh.id));
+  const after = current.slice(first).filter((sh) => !merged.has(sh.id));
   const firstName = picked.length === 1 ? picked[0].name : undefined;
   const named = paths.map((p, i) => (i === 0 ? { ...p, name: firstName ?? 'Merged outline' } : p));
   commit(ctx.store, withActiveShapes(s.doc, [...before, ...named, ...after]), named.map((p) => p.id));

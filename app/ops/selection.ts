@@ -3,7 +3,7 @@
  * duplicate, delete, reorder and the boolean operation. Moves and turns come from the engine's
  * shape operations, so a shape kind needs nothing here.
  */
-import { allShapeIds, mirrorShape, newShapeId, regionsBounds, rotateShape, translateShape, type Bounds, type Op, type Shape, type Units } from '../../src';
+import { allShapeIds, kindOf, mirrorShape, newShapeId, regionsBounds, rotateShape, translateShape, type Bounds, type Op, type Shape, type Units } from '../../src';
 import type { CommandContext } from '../commands/registry';
 import { commit } from '../store/history';
 import type { EditorState } from '../store/store';
@@ -101,8 +101,9 @@ export function duplicateSelection(ctx: CommandContext): void {
   commit(ctx.store, withActiveShapes(s.doc, [...activeShapes(s.doc), ...copies]), copies.map((c) => c.id));
 }
 
+/** The boolean operation of the selected area shapes (line elements take none). */
 export function setSelectionOp(ctx: CommandContext, op: Op): void {
-  mapSelected(ctx, (sh) => ((sh.op ?? 'add') === op ? sh : { ...sh, op }));
+  mapSelected(ctx, (sh) => ((sh.op ?? 'add') === op || kindOf(sh).line ? sh : { ...sh, op }));
 }
 
 /** Shapes apply in list order, so the order changes the result. */

@@ -24,6 +24,7 @@ export const INK = {
   cut: '#b03a5b',
   cutFill: 'rgba(176, 58, 91, 0.14)',
   error: '#b3261e',
+  lineElement: '#7a4e12',
 } as const;
 
 const patternCache = new WeakMap<CanvasRenderingContext2D, Record<string, CanvasPattern | null>>();

@@ -3,7 +3,7 @@
  * is a fraction of a pixel), and the polylines are cached by region identity and tolerance so a
  * repaint that did not change a region costs nothing.
  */
-import { contourPolyline, type Region } from '../../src';
+import { chainPolyline, contourPolyline, type LineChain, type Region } from '../../src';
 import { screenX, screenY, type ViewTransform } from '../view';
 
 type Poly = Float64Array;
@@ -17,6 +17,29 @@ export function regionPolylines(region: Region, tol: number): Poly[] {
   const polys = region.map((c) => Float64Array.from(contourPolyline(c, tol)));
   polyCache.set(region, { tol, polys });
   return polys;
+}
+
+const chainCache = new WeakMap<LineChain, { tol: number; poly: Poly }>();
+
+/** Points along an open or closed line chain (world coordinates), cached like regionPolylines. */
+export function chainPoints(chain: LineChain, tol: number): Poly {
+  const hit = chainCache.get(chain);
+  if (hit && hit.tol <= tol * 1.5 && hit.tol >= tol / 3) return hit.poly;
+  const poly = Float64Array.from(chainPolyline(chain, tol));
+  chainCache.set(chain, { tol, poly });
+  return poly;
+}
+
+/** Add line chains to the current path, in screen coordinates (open chains stay open). */
+export function traceChains(ctx: CanvasRenderingContext2D, chains: readonly LineChain[], v: ViewTransform): void {
+  for (const c of chains) {
+    const p = chainPoints(c, 0.35 / v.scale);
+    const n = p.length >> 1;
+    if (n < 2) continue;
+    ctx.moveTo(screenX(v, p[0]), screenY(v, p[1]));
+    for (let i = 1; i < n; i++) ctx.lineTo(screenX(v, p[2 * i]), screenY(v, p[2 * i + 1]));
+    if (c.closed) ctx.closePath();
+  }
 }
 
 /** Add the region's contours to the current path, in screen coordinates. */

@@ -4,7 +4,7 @@
  * edit changes nothing.
  */
 import { useState } from 'react';
-import { isProfile, OPS, shapeDisplayName, shapeKindLabel, type Op, type Shape } from '../../src';
+import { isProfile, kindOf, OPS, shapeDisplayName, shapeKindLabel, type Op, type Shape } from '../../src';
 import { useEditor, useEditorState } from '../context';
 import { evaluateExpression } from '../expr';
 import { CommandButton } from '../fields/CommandButton';
@@ -66,20 +66,22 @@ export function SelectionPanel() {
           `${shapes.length} shapes selected`
         )}
       </h2>
-      <div className="op-switch" role="radiogroup" aria-label="Operation">
-        {OPS.map((op) => (
-          <button
-            key={op}
-            role="radio"
-            aria-checked={ops.size === 1 && ops.has(op)}
-            className={`op op-${op}${ops.size === 1 && ops.has(op) ? ' on' : ''}`}
-            data-testid={`op-${op}`}
-            onClick={() => editor.run(`op.${op}`)}
-          >
-            {OP_LABEL[op]}
-          </button>
-        ))}
-      </div>
+      {shapes.some((sh) => !kindOf(sh).line) && (
+        <div className="op-switch" role="radiogroup" aria-label="Operation">
+          {OPS.map((op) => (
+            <button
+              key={op}
+              role="radio"
+              aria-checked={ops.size === 1 && ops.has(op)}
+              className={`op op-${op}${ops.size === 1 && ops.has(op) ? ' on' : ''}`}
+              data-testid={`op-${op}`}
+              onClick={() => editor.run(`op.${op}`)}
+            >
+              {OP_LABEL[op]}
+            </button>
+          ))}
+        </div>
+      )}
       {one && (
         <div className="fields" key={one.id}>
           <label className="field">

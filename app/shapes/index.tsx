@@ -7,13 +7,15 @@
 import type { Point, Shape, ShapeType } from '../../src';
 import { circleEditor } from './circle';
 import type { Handle, HandleRef, ShapeEditor } from './kind';
+import { lineEditor } from './line';
 import { pathEditor } from './path';
 import { polygonEditor } from './polygon';
 import { profileEditor } from './profile';
+import { stripEditor } from './strip';
 
 export type { Handle, HandleRef, ShapeEditor, ToolSpec } from './kind';
 
-export const SHAPE_EDITORS: readonly ShapeEditor<Shape>[] = [polygonEditor, circleEditor, pathEditor, profileEditor] as unknown as ShapeEditor<Shape>[];
+export const SHAPE_EDITORS: readonly ShapeEditor<Shape>[] = [polygonEditor, circleEditor, pathEditor, profileEditor, stripEditor, lineEditor] as unknown as ShapeEditor<Shape>[];
 
 const byType = new Map<string, ShapeEditor<Shape>>();
 for (const e of SHAPE_EDITORS) for (const t of e.types) byType.set(t, e);

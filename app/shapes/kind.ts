@@ -31,6 +31,8 @@ export interface ToolSpec {
   hint?: string;
   /** Whether the tool rail's Draw group shows a button (the profile tool has its own control). */
   inDrawGroup: boolean;
+  /** Commands shown under the tool's button while it is active (the arc mode of chain tools). */
+  subCommands?: string[];
   create(): Tool;
   /** Takes the command's argument before the tool is chosen (the profile type). */
   configure?(c: CommandContext, arg: unknown): void;

@@ -42,7 +42,7 @@ export interface ToolSlice {
   tool: ToolId;
   profileType: ProfileType;
   snap: SnapSettings;
-  /** Arc mode of the path tool: the next two points are (through, end) of a three-point arc. */
+  /** Arc mode of the chain tools (path, line, strip): the next two points are (through, end) of a three-point arc. */
   pathArc: boolean;
 }
 

@@ -1,5 +1,5 @@
 /** Messages between the editor and the evaluation worker. */
-import type { Issue, Region, SectionDocument, SectionProperties, Shape } from '../../src';
+import type { Issue, LineGroupResult, MaterialsResult, Region, SectionDocument, SectionProperties, Shape } from '../../src';
 
 export interface WorkerRequest {
   seq: number;
@@ -10,5 +10,15 @@ export interface WorkerRequest {
 }
 
 export type WorkerResponse =
-  | { seq: number; ok: true; region: Region; props: SectionProperties | null; message: string | null; warnings: Issue[]; ms: number }
+  | {
+      seq: number;
+      ok: true;
+      region: Region;
+      props: SectionProperties | null;
+      message: string | null;
+      warnings: Issue[];
+      lines: LineGroupResult[];
+      materials: MaterialsResult | null;
+      ms: number;
+    }
   | { seq: number; ok: false; error: string; ms: number };

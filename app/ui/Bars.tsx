@@ -56,11 +56,9 @@ export function ToolRail() {
         {TOOL_SPECS.filter((t) => t.inDrawGroup).map((t) => (
           <CommandButton key={t.id} name={`tool.${t.id}`} />
         ))}
-        {SHAPE_EDITORS.flatMap((e) => e.commands ?? [])
-          .filter((c) => c.name.startsWith(`${tool}.`))
-          .map((c) => (
-            <CommandButton key={c.name} name={c.name} className="sub" />
-          ))}
+        {(TOOL_SPECS.find((t) => t.id === tool)?.subCommands ?? []).map((name) => (
+          <CommandButton key={name} name={name} className="sub" />
+        ))}
       </div>
       {SHAPE_EDITORS.map((e, i) => e.RailControl && <e.RailControl key={i} />)}
       <div className="rail-group">

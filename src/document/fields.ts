@@ -5,7 +5,7 @@
  */
 import { fmtValue, isObj, type Issue } from '../shapes/check';
 import { validateLimits as validateLimitRecords } from '../compare/validate-limits';
-import { FORCE_UNITS, STRESS_UNITS } from './types';
+import { FORCE_UNITS, STRESS_UNITS, UNITS } from './types';
 
 function finite(v: unknown): v is number {
   return typeof v === 'number' && Number.isFinite(v);
@@ -46,6 +46,7 @@ export function validateMaterials(doc: Record<string, unknown>, shapes: readonly
   }
   if (doc.stressUnit !== undefined && !(STRESS_UNITS as readonly unknown[]).includes(doc.stressUnit)) out.push({ path: 'stressUnit', message: `unknown stress unit ${fmtValue(doc.stressUnit)}; use one of ${STRESS_UNITS.join(', ')}` });
   if (doc.forceUnit !== undefined && !(FORCE_UNITS as readonly unknown[]).includes(doc.forceUnit)) out.push({ path: 'forceUnit', message: `unknown force unit ${fmtValue(doc.forceUnit)}; use one of ${FORCE_UNITS.join(', ')}` });
+  if (doc.momentLength !== undefined && !(UNITS as readonly unknown[]).includes(doc.momentLength)) out.push({ path: 'momentLength', message: `unknown length unit ${fmtValue(doc.momentLength)} for moments; use one of ${UNITS.join(', ')}` });
   const loads = doc.loads;
   if (loads !== undefined) {
     if (!isObj(loads)) out.push({ path: 'loads', message: 'loads must be an object {N, Mx, My, V}' });

@@ -14,6 +14,8 @@ export { OPS, type Op, type Point } from '../shapes/base';
 export type { PolygonShape } from '../shapes/polygon';
 export type { CircleShape } from '../shapes/circle';
 export type { PathShape, PathSegment } from '../shapes/path';
+export type { StripShape, StripCornerKind } from '../shapes/strip';
+export type { LineShape } from '../shapes/line';
 export type {
   ProfileShape,
   RectangleShape,
@@ -66,30 +68,15 @@ export interface Variant {
 export type { Limit } from '../compare/limits';
 import type { Limit } from '../compare/limits';
 
-/** A material: E and fy in the document's stress unit, density in kg/m³. */
-export interface Material {
-  id: string;
-  name: string;
-  E: number;
-  density: number;
-  fy: number;
-  /** Poisson's ratio (for the shear modulus in torsion); 0.3 when absent. */
-  nu?: number;
-}
+/** A material (src/materials/material.ts): E and fy in the document's stress unit, density in kg/m³. */
+export type { Material } from '../materials/material';
+/** Loads on the section (src/materials/stress.ts): N (+ tension) in the force unit, moments in force × `momentLength`. */
+export type { Loads } from '../materials/stress';
+import type { Material } from '../materials/material';
+import type { Loads } from '../materials/stress';
 
-/** Loads on the section: N (+ tension) in the force unit, moments in force × document length. */
-export interface Loads {
-  N?: number;
-  Mx?: number;
-  My?: number;
-  /** Shear force at the current cut. */
-  V?: number;
-}
-
-export const STRESS_UNITS = ['MPa', 'kPa', 'Pa', 'psi', 'ksi'] as const;
-export type StressUnit = (typeof STRESS_UNITS)[number];
-export const FORCE_UNITS = ['N', 'kN', 'lbf', 'kip'] as const;
-export type ForceUnit = (typeof FORCE_UNITS)[number];
+export { STRESS_UNITS, FORCE_UNITS, type StressUnit, type ForceUnit } from '../materials/units';
+import type { ForceUnit, StressUnit } from '../materials/units';
 
 export interface SectionDocument {
   format: typeof FORMAT;
@@ -110,8 +97,12 @@ export interface SectionDocument {
   /** Materials; a shape names one by `material`, or takes the reference material. */
   materials?: Material[];
   reference?: string;
+  /** Unit of E, fy and every stress shown (MPa when absent). */
   stressUnit?: StressUnit;
+  /** Unit of N and V (kN when absent). */
   forceUnit?: ForceUnit;
+  /** Length unit of the moments Mx and My (force × this); the document's unit when absent. */
+  momentLength?: Units;
   loads?: Loads;
   /** The checker's fields. */
   revisions?: Revision[];

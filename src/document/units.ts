@@ -1,4 +1,8 @@
-/** Unit conversion of whole documents: every length is scaled; angles and flags are kept. */
+/**
+ * Unit conversion of whole documents: every length is scaled (the baseline's and the proposals'
+ * shapes, length limits, moments given per document length); angles, flags, material values and
+ * forces are kept.
+ */
 import { scaleShape } from '../shapes/ops';
 import { UNIT_IN_METRES, type SectionDocument, type Units } from './types';
 
@@ -11,5 +15,13 @@ export function unitFactor(from: Units, to: Units): number {
 export function convertDocumentUnits(doc: SectionDocument, units: Units): SectionDocument {
   const k = unitFactor(doc.units, units);
   if (k === 1) return { ...doc, units };
-  return { ...doc, units, shapes: doc.shapes.map((s) => scaleShape(s, k)) };
+  const out: SectionDocument = { ...doc, units, shapes: doc.shapes.map((s) => scaleShape(s, k)) };
+  if (doc.variants) out.variants = doc.variants.map((v) => ({ ...v, shapes: v.shapes.map((e) => (typeof e === 'string' ? e : scaleShape(e, k))) }));
+  if (doc.limits) out.limits = doc.limits.map((l) => (l.maxShift === undefined ? l : { ...l, maxShift: l.maxShift * k }));
+  // Moments in force × document length follow the length unit; with `momentLength` set they keep theirs.
+  if (doc.loads && doc.momentLength === undefined && (doc.loads.Mx !== undefined || doc.loads.My !== undefined)) {
+    const { Mx, My } = doc.loads;
+    out.loads = { ...doc.loads, ...(Mx !== undefined ? { Mx: Mx * k } : {}), ...(My !== undefined ? { My: My * k } : {}) };
+  }
+  return out;
 }

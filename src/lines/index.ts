@@ -33,5 +33,6 @@ export { groupBoundsAbout } from './chain-bounds';
 export { lineProperties, lineMoments, type LineProperties } from './line-properties';
 export { weldGroupForces, weldForceAt, type WeldLoad, type WeldForce, type WeldPoint, type WeldGroupResult, type WeldState } from './weld-group';
 export { stripOutline, type StripCorners } from './strip-outline';
+export { chainSegments, chainPolyline } from './chain-geometry';
 export { thinWallComparison, type ThinWallComparison, type AreaValues } from './thin-wall';
 export { WELD_GROUP_CAUTION, LINE_GROUP_CAUTION, THIN_WALL_CAUTION } from './cautions';

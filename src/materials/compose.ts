@@ -27,7 +27,7 @@
  * region (the same object), so a single-material section gives exactly the evaluator's numbers.
  */
 import { booleanRegions } from '../boolean';
-import type { Op } from '../document/types';
+import type { Op } from '../shapes/base';
 import { regionBounds, type Bounds, type Region } from '../geometry/contour';
 
 export interface MaterialLayer {

@@ -23,7 +23,7 @@
  * With one material that is the reference, every number equals sectionProperties' exactly (the
  * same moments, the same arithmetic with n = 1).
  */
-import type { Units } from '../document/types';
+import type { Units } from '../units';
 import { regionBounds, type Bounds, type Region } from '../geometry/contour';
 import { regionMoments, type RawMoments } from '../moments/kernel';
 import { centroidalFromRaw, principal, SectionError } from '../properties/section';

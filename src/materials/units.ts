@@ -15,7 +15,7 @@
  * Conversion constants: the inch is 0.0254 m exactly and the pound-force is 0.45359237 kg ×
  * 9.80665 m/s² = 4.4482216152605 N exactly (NIST SP 811, App. B); hence 1 psi = 6894.757293168361 Pa.
  */
-import { UNIT_IN_METRES, type Units } from '../document/types';
+import { UNIT_IN_METRES, type Units } from '../units';
 
 export const STRESS_UNITS = ['MPa', 'kPa', 'Pa', 'GPa', 'psi', 'ksi'] as const;
 export type StressUnit = (typeof STRESS_UNITS)[number];

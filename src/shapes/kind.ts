@@ -6,6 +6,7 @@
  * report all go through it, so adding a kind means adding one module here.
  */
 import type { Contour } from '../geometry/contour';
+import type { LineChain } from '../lines/chain';
 import type { PointMap, ShapeBase } from './base';
 import type { Issue } from './check';
 import type { KindSchedule, ScheduleFormat } from './schedule';
@@ -19,8 +20,13 @@ export interface ShapeKind<S extends ShapeBase & { type: string }> {
    * by the document). Push every problem with its path below `path` (e.g. `shapes[3]`).
    */
   validate(s: Record<string, unknown>, path: string, out: Issue[]): void;
-  /** Raw exact contours: outer loops CCW, holes CW. A polygon or path may still cross itself. */
+  /** Raw exact contours: outer loops CCW, holes CW. A polygon or path may still cross itself. None for a line element. */
   contours(s: S): Contour[];
+  /**
+   * Only for line elements (weld lines, centrelines), which enclose no area and never take part
+   * in the booleans: their exact chains of lines and arcs, and the line group they belong to.
+   */
+  line?: { chains(s: S): LineChain[]; group(s: S): string };
   /** True when the outline may cross itself and must be resolved (even-odd) before use. */
   readonly mayCrossItself: boolean;
   /** The record with every stored point mapped by an isometry (lengths unchanged). */

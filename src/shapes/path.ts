@@ -48,12 +48,18 @@ export function mapSegments(segments: readonly PathSegment[], f: PointMap): Path
   return segments.map((g) => (g.via ? { to: f(g.to), via: f(g.via) } : { to: f(g.to) }));
 }
 
-function validate(s: Record<string, unknown>, path: string, out: Issue[]): void {
-  if (!checkPoint(s.start, `${path}.start`, out)) return;
+/**
+ * Check a start point and its segments (lines `{to}`, three-point arcs `{to, via}`): every point,
+ * and that no arc is degenerate. Returns the last point and the largest distance from the start
+ * (for the closing tolerance), or null when something was wrong. Paths, line elements and strips
+ * share it.
+ */
+export function checkSegments(s: Record<string, unknown>, path: string, out: Issue[]): { last: Point; extent: number } | null {
+  if (!checkPoint(s.start, `${path}.start`, out)) return null;
   const segs = s.segments;
   if (!Array.isArray(segs) || segs.length === 0) {
-    out.push({ path: `${path}.segments`, message: 'a path needs at least one segment' });
-    return;
+    out.push({ path: `${path}.segments`, message: 'at least one segment is needed' });
+    return null;
   }
   const start = s.start as Point;
   let cur: Point | null = start;
@@ -94,15 +100,20 @@ function validate(s: Record<string, unknown>, path: string, out: Issue[]): void 
     // A zero-length line is harmless; it is dropped when the outline is built.
     cur = to;
   });
-  if (!ok) return;
-  const last = (segs[segs.length - 1] as { to: Point }).to;
-  const gap = dist(last, start);
-  if (gap > 1e-9 * Math.max(ext, 1e-300)) {
+  return ok ? { last: (segs[segs.length - 1] as { to: Point }).to, extent: ext } : null;
+}
+
+function validate(s: Record<string, unknown>, path: string, out: Issue[]): void {
+  const r = checkSegments(s, path, out);
+  if (!r) return;
+  const start = s.start as Point;
+  const segs = s.segments as PathSegment[];
+  if (dist(r.last, start) > 1e-9 * Math.max(r.extent, 1e-300)) {
     out.push({
       path: `${path}.segments`,
-      message: `path does not close: it ends at (${last[0]}, ${last[1]}) but starts at (${start[0]}, ${start[1]})`,
+      message: `path does not close: it ends at (${r.last[0]}, ${r.last[1]}) but starts at (${start[0]}, ${start[1]})`,
     });
-  } else if (segs.length < 2 && (segs[0] as { via?: unknown }).via === undefined) {
+  } else if (segs.length < 2 && segs[0].via === undefined) {
     out.push({ path: `${path}.segments`, message: 'a closed path needs at least two segments' });
   }
 }

@@ -5,9 +5,11 @@
 import type { Shape, ShapeType } from './shape';
 import { circleKind } from './circle';
 import type { ShapeKind } from './kind';
+import { lineKind } from './line';
 import { pathKind } from './path';
 import { polygonKind } from './polygon';
 import { PROFILE_KINDS } from './profile';
+import { stripKind } from './strip';
 
 type KindOf<T extends ShapeType> = ShapeKind<Extract<Shape, { type: T }>>;
 
@@ -16,6 +18,8 @@ export const SHAPE_KINDS: { readonly [T in ShapeType]: KindOf<T> } = {
   circle: circleKind,
   path: pathKind,
   ...PROFILE_KINDS,
+  strip: stripKind,
+  line: lineKind,
 };
 
 export const SHAPE_TYPES = Object.keys(SHAPE_KINDS) as ShapeType[];

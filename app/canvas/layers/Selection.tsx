@@ -1,7 +1,7 @@
 /** The selected shapes' outlines, and the handles of a single selected shape (hovered one larger). */
 import { useEditor, useEditorState, useTransient } from '../../context';
 import { INK } from '../../paint/ink';
-import { traceRegion } from '../../paint/trace';
+import { traceChains, traceRegion } from '../../paint/trace';
 import { shapeHandles } from '../../shapes';
 import { toScreen, type ViewTransform } from '../../view';
 import { Paint } from '../PaintNode';
@@ -13,7 +13,7 @@ export function SelectionNode({ v }: { v: ViewTransform }) {
   const doc = useEditorState((s) => activeSection(s.doc));
   const hover = useTransient((t) => t.hoverHandle);
   const sel = new Set(selected);
-  const regions = editor.results.shapesOf(doc).filter((s) => sel.has(s.id)).map((s) => s.region);
+  const picked = editor.results.shapesOf(doc).filter((s) => sel.has(s.id));
   const single = selected.length === 1 ? doc.shapes.find((s) => s.id === selected[0]) : undefined;
   const handles = single ? shapeHandles(single) : [];
   return (
@@ -21,9 +21,10 @@ export function SelectionNode({ v }: { v: ViewTransform }) {
       paint={(ctx) => {
         ctx.strokeStyle = INK.selection;
         ctx.lineWidth = 2;
-        for (const r of regions) {
+        for (const r of picked) {
           ctx.beginPath();
-          traceRegion(ctx, r, v);
+          if (r.chains) traceChains(ctx, r.chains, v);
+          else traceRegion(ctx, r.region, v);
           ctx.stroke();
         }
         ctx.lineWidth = 1.25;

@@ -4,10 +4,10 @@
  * Konva node for all of it: the layer repaints as a whole anyway, and one node keeps the
  * reconciler's work per pointer move constant.
  */
-import type { Op, Region } from '../../../src';
+import type { LineChain, Op, Region } from '../../../src';
 import { useEditor, useEditorShallow, useEditorState, useResults } from '../../context';
 import { hatch, INK, opStyle } from '../../paint/ink';
-import { traceRegion } from '../../paint/trace';
+import { traceChains, traceRegion } from '../../paint/trace';
 import type { ViewTransform } from '../../view';
 import { Paint } from '../PaintNode';
 import { activeSection } from '../../store/section';
@@ -28,6 +28,18 @@ function paintShape(ctx: CanvasRenderingContext2D, region: Region, op: Op, v: Vi
   ctx.setLineDash([]);
 }
 
+/** Paint a line element: its stroke, with a dot at each end so an open chain reads as one. */
+function paintLine(ctx: CanvasRenderingContext2D, chains: readonly LineChain[], v: ViewTransform, error: boolean) {
+  ctx.beginPath();
+  traceChains(ctx, chains, v);
+  ctx.strokeStyle = error ? INK.error : INK.lineElement;
+  ctx.lineWidth = 2.5;
+  ctx.lineCap = 'round';
+  ctx.lineJoin = 'round';
+  ctx.stroke();
+  ctx.lineCap = 'butt';
+}
+
 export function ShapesLayer() {
   const editor = useEditor();
   const v = useEditorShallow((s) => ({ scale: s.scale, ox: s.ox, oy: s.oy }));
@@ -42,7 +54,7 @@ export function ShapesLayer() {
         traceRegion(ctx, region, v);
         ctx.fillStyle = INK.resultFill;
         ctx.fill('nonzero');
-        shapes.forEach((s, i) => paintShape(ctx, s.region, section.shapes[i]?.op ?? 'add', v, !!s.error));
+        shapes.forEach((s, i) => (s.chains ? paintLine(ctx, s.chains, v, !!s.error) : paintShape(ctx, s.region, section.shapes[i]?.op ?? 'add', v, !!s.error)));
         ctx.beginPath();
         traceRegion(ctx, region, v);
         ctx.strokeStyle = INK.resultLine;
