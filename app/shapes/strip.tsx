@@ -55,7 +55,7 @@ function ThinWall({ shape }: { shape: StripShape }) {
       <td className="num">{formatNumber(cmp.exact[key])}</td>
       <td className="num">{formatNumber(cmp.thinWall[key])}</td>
       <td className="num" data-thin-wall={key} data-value={String(cmp.percent[key])}>
-        {formatNumber(cmp.percent[key], 2)} %
+        {formatNumber(cmp.percent[key], 2, 100)} %
       </td>
     </tr>
   );
