@@ -1,0 +1,102 @@
+/**
+ * The element size wanted at a point of the boundary.
+ *
+ * Three limits, the smallest wins:
+ * - the density's largest element size `hMax`;
+ * - the local wall thickness divided by the number of elements wanted across a wall: the
+ *   thickness at a boundary point is its distance to the nearest other edge, leaving out the
+ *   edge itself and the edges that meet it at a vertex (those touch it, they are not across the
+ *   wall), except where two edges meet at an acute angle (a sharp wedge, which is thin near its
+ *   tip);
+ * - on an arc, the chord length whose sagitta is `sagittaRatio` of the chord (c ≤ 8·ratio·r), so
+ *   that the chords keep within a fixed fraction of the local element size of the exact arc.
+ * and never below `hMin`, which keeps a tangency or a sliver from asking for endless refinement.
+ *
+ * The nearest edge comes from a flatbush index of the edges' bounding boxes, then an exact
+ * distance to lines and arcs.
+ */
+import Flatbush from 'flatbush';
+import { regionBounds } from '../geometry/contour';
+import { edgeShape, type ExactBoundary } from './boundary-edges';
+import { distanceToEdge, edgePoint, edgeRadius, edgeTangentFrom, type EdgeShape } from './edge-geometry';
+
+export interface SizeRules {
+  hMax: number;
+  hMin: number;
+  /** Elements wanted across a wall. */
+  across: number;
+  /** Largest sagitta of a boundary chord, as a fraction of the chord. */
+  sagittaRatio: number;
+}
+
+/** Two edges meeting at less than this angle form a wedge that is thin near its tip. */
+const WEDGE_ANGLE = Math.PI / 3;
+
+export class BoundarySizer {
+  private readonly shapes: EdgeShape[];
+  private readonly index: Flatbush;
+  /** For each edge, the edges meeting it at a vertex at a wide angle (not across a wall). */
+  private readonly touching: Set<number>[];
+  private readonly arcLimit: Float64Array;
+  private readonly reach: number;
+
+  constructor(private readonly boundary: ExactBoundary, private readonly rules: SizeRules) {
+    const { xy, edges } = boundary;
+    this.shapes = edges.map((e) => edgeShape(xy, e));
+    this.index = new Flatbush(edges.length);
+    for (const g of this.shapes) {
+      const b = regionBounds([{ xy: Float64Array.of(g.ax, g.ay, g.bx, g.by), bulge: Float64Array.of(Math.tan(g.sweep / 4), 0) }])!;
+      this.index.add(b.xmin, b.ymin, b.xmax, b.ymax);
+    }
+    this.index.finish();
+    this.reach = rules.hMax * rules.across;
+    this.arcLimit = Float64Array.from(this.shapes, (g) => 8 * rules.sagittaRatio * edgeRadius(g));
+    this.touching = edges.map(() => new Set<number>());
+    const atVertex = new Map<number, { k: number; end: 'a' | 'b' }[]>();
+    edges.forEach((e, k) => {
+      for (const end of ['a', 'b'] as const) {
+        const v = e[end];
+        const list = atVertex.get(v);
+        if (list) list.push({ k, end });
+        else atVertex.set(v, [{ k, end }]);
+      }
+    });
+    for (const list of atVertex.values())
+      for (const p of list)
+        for (const q of list) {
+          if (p.k === q.k) continue;
+          const [ux, uy] = edgeTangentFrom(this.shapes[p.k], p.end);
+          const [vx, vy] = edgeTangentFrom(this.shapes[q.k], q.end);
+          const angle = Math.acos(Math.max(-1, Math.min(1, ux * vx + uy * vy)));
+          if (angle >= WEDGE_ANGLE) this.touching[p.k].add(q.k);
+        }
+  }
+
+  /** Wanted element size at parameter t of edge k. */
+  at(k: number, t: number): number {
+    const [px, py] = edgePoint(this.shapes[k], t);
+    const thick = this.thickness(k, px, py);
+    const h = Math.min(this.rules.hMax, thick / this.rules.across, this.arcLimit[k]);
+    return Math.max(h, this.rules.hMin);
+  }
+
+  /**
+   * Distance from a point of edge k to the nearest edge across the wall, or Infinity when there is
+   * none within `reach` (a wall thicker than hMax × across does not limit the size).
+   */
+  thickness(k: number, px: number, py: number): number {
+    const touching = this.touching[k];
+    const reach = this.reach;
+    let best = Infinity;
+    for (const f of this.index.search(px - reach, py - reach, px + reach, py + reach)) {
+      if (f === k || touching.has(f)) continue;
+      const d = distanceToEdge(this.shapes[f], px, py);
+      if (d < best) best = d;
+    }
+    return best;
+  }
+
+  get edgeCount(): number {
+    return this.boundary.edges.length;
+  }
+}
