@@ -26,6 +26,8 @@ export interface ExactEdge {
   left: number;
   /** Piece on the right of a→b, or −1. */
   right: number;
+  /** True for a cut along a mirror axis (meshing half a symmetric section): not a real wall. */
+  cut?: boolean;
 }
 
 export interface ExactBoundary {
@@ -48,7 +50,14 @@ export interface PieceInput {
   region: Region;
 }
 
-export function exactBoundary(pieces: readonly PieceInput[]): ExactBoundary {
+/** A given local frame (world = local + origin) and section size, instead of the pieces' own. */
+export interface Frame {
+  originX: number;
+  originY: number;
+  size: number;
+}
+
+export function exactBoundary(pieces: readonly PieceInput[], frame?: Frame): ExactBoundary {
   let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
   pieces.forEach((p, k) => {
     checkRegion(p.region, k);
@@ -60,8 +69,8 @@ export function exactBoundary(pieces: readonly PieceInput[]): ExactBoundary {
     ymax = Math.max(ymax, b.ymax);
   });
   if (!(xmax > xmin && ymax > ymin)) throw new TorsionError('the section is empty or has no area to twist');
-  const originX = (xmin + xmax) / 2, originY = (ymin + ymax) / 2;
-  const size = Math.max(xmax - xmin, ymax - ymin);
+  const originX = frame ? frame.originX : (xmin + xmax) / 2, originY = frame ? frame.originY : (ymin + ymax) / 2;
+  const size = frame ? frame.size : Math.max(xmax - xmin, ymax - ymin);
   const snap = SNAP_RATIO * size;
 
   const verts = new VertexSnapper(snap);

@@ -7,7 +7,9 @@
  *   thickness at a boundary point is its distance to the nearest other edge, leaving out the
  *   edge itself and the edges that meet it at a vertex (those touch it, they are not across the
  *   wall), except where two edges meet at an acute angle (a sharp wedge, which is thin near its
- *   tip);
+ *   tip). When half of a symmetric section is meshed, the cut along the mirror axis is not a
+ *   wall: the wall across it is the mirror image, twice as far, so distances to or from a cut
+ *   count double, and distances from one cut to another do not count;
  * - on an arc, the chord length whose sagitta is `sagittaRatio` of the chord (c ≤ 8·ratio·r), so
  *   that the chords keep within a fixed fraction of the local element size of the exact arc.
  * and never below `hMin`, which keeps a tangency or a sliver from asking for endless refinement.
@@ -87,10 +89,14 @@ export class BoundarySizer {
   thickness(k: number, px: number, py: number): number {
     const touching = this.touching[k];
     const reach = this.reach;
+    const edges = this.boundary.edges;
+    const fromCut = edges[k].cut === true;
     let best = Infinity;
     for (const f of this.index.search(px - reach, py - reach, px + reach, py + reach)) {
       if (f === k || touching.has(f)) continue;
-      const d = distanceToEdge(this.shapes[f], px, py);
+      const toCut = edges[f].cut === true;
+      if (fromCut && toCut) continue;
+      const d = distanceToEdge(this.shapes[f], px, py) * (fromCut || toCut ? 2 : 1);
       if (d < best) best = d;
     }
     return best;

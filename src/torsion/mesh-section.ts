@@ -10,9 +10,10 @@ import type { Region } from '../geometry/contour';
 import { exactBoundary, type ExactBoundary } from './boundary-edges';
 import { localPlace } from './cdt';
 import { TorsionError } from './errors';
-import { BoundarySizer } from './local-size';
+import { BoundarySizer, type SizeRules } from './local-size';
 import { Pslg } from './pslg';
-import { refineMesh, type LinearMesh } from './refine';
+import { refineMesh, type LinearMesh, type RefineRules } from './refine';
+import { cutToPositiveSide, flagCuts, mirrorAxes, mirrorMesh, toLocal, type Axis } from './symmetry';
 
 export type TorsionDensity = 'coarse' | 'normal' | 'fine';
 
@@ -41,7 +42,10 @@ const MAX_POINTS = 250_000;
 
 export interface SectionMesh {
   mesh: LinearMesh;
+  /** The whole section's exact boundary (its frame is the mesh's frame). */
   boundary: ExactBoundary;
+  /** Mirror axes the mesh was built with (the mesh is exactly symmetric about them). */
+  axes: Axis[];
   /** Area of each piece (exact, from the contours). */
   areas: number[];
 }
@@ -57,10 +61,49 @@ export function* meshSection(regions: readonly Region[], density: TorsionDensity
   const total = areas.reduce((s, a) => s + a, 0);
   const hMax = Math.sqrt(total) / rule.perRootArea;
   const hMin = MIN_SIZE_RATIO * boundary.size;
-  const sizer = new BoundarySizer(boundary, { hMax, hMin, across: rule.across, sagittaRatio: SAGITTA_RATIO });
-  const pslg = new Pslg(boundary, sizer);
+  const sizeRules = { hMax, hMin, across: rule.across, sagittaRatio: SAGITTA_RATIO };
+  const refineRules = { minAngleDeg: MIN_ANGLE_DEG, rate: GRADING_RATE, hMax, hMin, maxPoints: MAX_POINTS };
+  const axes = mirrorAxes(boundary);
+  if (axes.length > 0) {
+    const half = yield* meshMirrored(regions, boundary, axes, sizeRules, refineRules);
+    if (half) return { mesh: half, boundary, axes, areas };
+  }
+  const pslg = new Pslg(boundary, new BoundarySizer(boundary, sizeRules));
   yield 0.05;
-  const place = localPlace(boundary.originX, boundary.originY);
-  const mesh = yield* refineMesh(pslg, { minAngleDeg: MIN_ANGLE_DEG, rate: GRADING_RATE, hMax, hMin, maxPoints: MAX_POINTS }, place);
-  return { mesh, boundary, areas };
+  const mesh = yield* refineMesh(pslg, refineRules, localPlace(boundary.originX, boundary.originY));
+  return { mesh, boundary, axes: [], areas };
+}
+
+/**
+ * Mesh the part of a symmetric section on the positive side of its mirror axes, then mirror the
+ * mesh into the whole section (symmetry.ts). Returns null if the cut cannot be made, and the
+ * caller meshes the whole section instead.
+ */
+function* meshMirrored(
+  regions: readonly Region[],
+  whole: ExactBoundary,
+  axes: Axis[],
+  sizeRules: SizeRules,
+  refineRules: RefineRules,
+): Generator<number, LinearMesh | null> {
+  let part: ExactBoundary;
+  try {
+    const cut = cutToPositiveSide(toLocal(regions, whole.originX, whole.originY), axes, whole.size, whole.snap);
+    if (cut.some((r) => r.length === 0)) return null;
+    part = exactBoundary(
+      cut.map((region) => ({ region })),
+      { originX: 0, originY: 0, size: whole.size },
+    );
+  } catch {
+    return null;
+  }
+  part.originX = whole.originX;
+  part.originY = whole.originY;
+  flagCuts(part, axes);
+  const pslg = new Pslg(part, new BoundarySizer(part, sizeRules));
+  yield 0.05;
+  let mesh = yield* refineMesh(pslg, refineRules, localPlace(whole.originX, whole.originY));
+  let cut: Uint8Array = Uint8Array.from(part.edges, (e) => (e.cut ? 1 : 0));
+  for (const axis of axes) ({ mesh, cut } = mirrorMesh(mesh, axis, cut));
+  return mesh;
 }

@@ -24,6 +24,7 @@ import { runAsync, runSync, stage, type RunHooks, type Step } from './progress';
 import { elementCount, prolong, quadraticMesh, renumberNodes, renumberProlongation, splitUniformly, type QuadMesh } from './quad-mesh';
 import { elementPattern } from './sparse';
 import { unitTorqueStress } from './stress-map';
+import { nodeMirror, type Axis } from './symmetry';
 import { solveWarping, type WarpingSolution } from './warping';
 
 export interface TorsionPiece {
@@ -139,7 +140,7 @@ function orderedSplit(m: QuadMesh, parentCount: number, parentPart: Int32Array, 
 
 export function* torsionSteps(pieces: readonly TorsionPiece[], options: TorsionOptions = {}): Generator<Step, TorsionResult> {
   const { g, Gref, nu, density } = checkInput(pieces, options);
-  const { mesh: lin, boundary } = yield* stage(
+  const { mesh: lin, boundary, axes } = yield* stage(
     meshSection(
       pieces.map((p) => p.region),
       density,
@@ -149,7 +150,12 @@ export function* torsionSteps(pieces: readonly TorsionPiece[], options: TorsionO
     0.12,
   );
   const coarse = ordered(quadraticMesh(lin));
-  const solC = yield* stage(solveWarping(coarse.mesh, g, coarse.part, coarse.parts, { tol: SOLVER_TOL, start: null }), 'solve-coarse', 0.12, 0.3);
+  const solC = yield* stage(
+    solveWarping(coarse.mesh, g, coarse.part, coarse.parts, { tol: SOLVER_TOL, start: null, mirrors: mirrorsOf(coarse.mesh, axes) }),
+    'solve-coarse',
+    0.12,
+    0.3,
+  );
   const centC = centres(coarse.mesh, g, coarse.part, coarse.parts, solC, nu);
 
   const split = splitUniformly(coarse.mesh);
@@ -157,7 +163,12 @@ export function* torsionSteps(pieces: readonly TorsionPiece[], options: TorsionO
   const prolongation = renumberProlongation(split.prolongation, fine.order);
   const start = prolong(prolongation, coarse.mesh, solC.omega);
   yield { fraction: 0.34, stage: 'refine' };
-  const solF = yield* stage(solveWarping(fine.mesh, g, fine.part, fine.parts, { tol: SOLVER_TOL, start }), 'solve-fine', 0.34, 0.95);
+  const solF = yield* stage(
+    solveWarping(fine.mesh, g, fine.part, fine.parts, { tol: SOLVER_TOL, start, mirrors: mirrorsOf(fine.mesh, axes) }),
+    'solve-fine',
+    0.34,
+    0.95,
+  );
   const centF = centres(fine.mesh, g, fine.part, fine.parts, solF, nu);
 
   const ox = boundary.originX, oy = boundary.originY;
@@ -201,6 +212,12 @@ export function* torsionSteps(pieces: readonly TorsionPiece[], options: TorsionO
     solver: { coarseIterations: solC.solve.iterations, fineIterations: solF.solve.iterations, residual: solF.solve.residual },
     cautions: cautionsFor(fine.parts, corner > Math.PI + 1e-3, conv, lin.warnings, coarse.mesh.straightened + fine.mesh.straightened, pieces.length, solF),
   };
+}
+
+/** Node mirror maps of a mesh built symmetric about `axes` (none if a node has no partner). */
+function mirrorsOf(m: QuadMesh, axes: readonly Axis[]): Int32Array[] {
+  const maps = axes.map((a) => nodeMirror(m, a));
+  return maps.every((x) => x !== null) ? (maps as Int32Array[]) : [];
 }
 
 function sideRange(m: QuadMesh): { min: number; max: number } {

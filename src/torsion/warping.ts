@@ -213,6 +213,8 @@ export interface WarpingOptions {
   tol: number;
   /** Starting guess (e.g. the coarse solution carried over), or null. */
   start: Float64Array | null;
+  /** Mirror partner of each node, one map per mirror axis of an exactly symmetric mesh. */
+  mirrors: readonly Int32Array[];
 }
 
 export function* solveWarping(
@@ -242,6 +244,7 @@ export function* solveWarping(
   const M = new Multigrid(K, { P, coarse: K1 });
   yield 0.05;
   const report = yield* scaleProgress(conjugateGradients(K, f, omega, M, opts.tol, 20 * n + 100), 0.05, 0.97);
+  if (opts.mirrors.length) makeOdd(omega, opts.mirrors, held, part, parts);
   // J in the stationary form Ip − (2 fᵀω − ωᵀKω).
   const Kw = new Float64Array(n);
   multiply(K, omega, Kw);
@@ -254,6 +257,25 @@ export function* solveWarping(
   const J = Ip - (2 * fw - wKw);
   const w = warpingIntegrals(m, g, part, parts, section, omega);
   return { section, omega, J, ...w, solve: report, levels: M.sizes };
+}
+
+/**
+ * On a mirror-symmetric mesh the warping function about a point of the axis is odd under the
+ * mirror; the exact discrete solution is too, the iterative one only to the solver tolerance.
+ * Keeping its odd part, (ω − ω∘mirror)/2, removes that error (it is the orthogonal projection on
+ * a subspace that holds the solution) and makes symmetric results exact to round-off. Each part
+ * is then shifted back to zero at its held node, where the system holds it.
+ */
+function makeOdd(omega: Float64Array, mirrors: readonly Int32Array[], held: Uint8Array, part: Int32Array, parts: number): void {
+  const n = omega.length;
+  const tmp = new Float64Array(n);
+  for (const m of mirrors) {
+    for (let i = 0; i < n; i++) tmp[i] = (omega[i] - omega[m[i]]) / 2;
+    omega.set(tmp);
+  }
+  const ref = new Float64Array(parts);
+  for (let i = 0; i < n; i++) if (held[i]) ref[part[i]] = omega[i];
+  for (let i = 0; i < n; i++) omega[i] -= ref[part[i]];
 }
 
 function* scaleProgress<T>(gen: Generator<number, T>, from: number, to: number): Generator<number, T> {
