@@ -9,6 +9,11 @@
  * leaks through the convex hull, means overlapping pieces or a loop that runs the wrong way, and
  * is reported with its place.
  *
+ * Four frame points far outside the section are added to the points, so that no point of the
+ * section lies on the convex hull: points in a row along a straight outer edge would otherwise be
+ * hull points, where delaunator's and constrainautor's treatment of near-collinear hull points can
+ * fail. The frame's triangles lie outside every piece and are never labelled.
+ *
  * delaunator's triangles run clockwise in a y-up frame, so the triangle of the half-edge p→q lies
  * on the right of p→q; the output triangles are reordered to run counter-clockwise.
  */
@@ -42,7 +47,11 @@ export function localPlace(ox: number, oy: number): Place {
   return (x, y) => placeText(x + ox, y + oy);
 }
 
-export function buildCdt(coords: Float64Array, chords: ChordList, place: Place): Cdt {
+/** Number of frame points appended after the section's points (ids n … n + 3). */
+export const FRAME_POINTS = 4;
+
+export function buildCdt(points: Float64Array, chords: ChordList, place: Place): Cdt {
+  const coords = withFrame(points);
   const del = new Delaunator(coords);
   const con = new Constrainautor(del);
   const lost = con.untriangulatedPoints();
@@ -170,6 +179,23 @@ function labelFaces(coords: Float64Array, tri: Uint32Array, half: Int32Array, ch
     }
   }
   return label;
+}
+
+/** The points followed by the corners of a square three times the size of their bounding box. */
+function withFrame(points: Float64Array): Float64Array {
+  let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
+  for (let i = 0; i < points.length; i += 2) {
+    xmin = Math.min(xmin, points[i]);
+    xmax = Math.max(xmax, points[i]);
+    ymin = Math.min(ymin, points[i + 1]);
+    ymax = Math.max(ymax, points[i + 1]);
+  }
+  const cx = (xmin + xmax) / 2, cy = (ymin + ymax) / 2;
+  const r = 1.5 * Math.max(xmax - xmin, ymax - ymin, 1e-300);
+  const out = new Float64Array(points.length + 2 * FRAME_POINTS);
+  out.set(points);
+  out.set([cx - r, cy - r, cx + r, cy - r, cx + r, cy + r, cx - r, cy + r], points.length);
+  return out;
 }
 
 function overlapMessage(p: number, q: number, where: string): string {

@@ -19,7 +19,7 @@
  */
 import Flatbush from 'flatbush';
 import { regionBounds } from '../geometry/contour';
-import { edgeShape, type ExactBoundary } from './boundary-edges';
+import { edgeShape, type ExactBoundary, type ExactEdge } from './boundary-edges';
 import { distanceToEdge, edgePoint, edgeRadius, edgeTangentFrom, type EdgeShape } from './edge-geometry';
 
 export interface SizeRules {
@@ -32,7 +32,18 @@ export interface SizeRules {
 }
 
 /** Two edges meeting at less than this angle form a wedge that is thin near its tip. */
-const WEDGE_ANGLE = Math.PI / 3;
+export const WEDGE_ANGLE = Math.PI / 3;
+
+/**
+ * The angle of the wedge two edges form at a shared vertex, from the cosine of the angle between
+ * their tangents. Against a mirror cut the real wedge is twice as wide (the edge and its mirror
+ * image); two cuts form no wedge (π).
+ */
+export function wedgeAngle(e: ExactEdge, f: ExactEdge, cos: number): number {
+  if (e.cut && f.cut) return Math.PI;
+  const angle = Math.acos(Math.max(-1, Math.min(1, cos)));
+  return e.cut || f.cut ? Math.min(Math.PI, 2 * angle) : angle;
+}
 
 export class BoundarySizer {
   private readonly shapes: EdgeShape[];
@@ -69,8 +80,7 @@ export class BoundarySizer {
           if (p.k === q.k) continue;
           const [ux, uy] = edgeTangentFrom(this.shapes[p.k], p.end);
           const [vx, vy] = edgeTangentFrom(this.shapes[q.k], q.end);
-          const angle = Math.acos(Math.max(-1, Math.min(1, ux * vx + uy * vy)));
-          if (angle >= WEDGE_ANGLE) this.touching[p.k].add(q.k);
+          if (wedgeAngle(edges[p.k], edges[q.k], ux * vx + uy * vy) >= WEDGE_ANGLE) this.touching[p.k].add(q.k);
         }
   }
 

@@ -13,7 +13,7 @@
 import { edgeShape, type ExactBoundary } from './boundary-edges';
 import { edgeLength, edgePoint, edgeTangentFrom, type EdgeShape } from './edge-geometry';
 import { F64List, I32List } from './growable';
-import type { BoundarySizer } from './local-size';
+import { WEDGE_ANGLE, wedgeAngle, type BoundarySizer } from './local-size';
 
 /** A piece is halved while it is longer than this multiple of the wanted size. */
 export const SIZE_SLACK = 1.0;
@@ -184,7 +184,8 @@ export class Pslg {
         for (let j = i + 1; j < list.length; j++) {
           const [ux, uy] = edgeTangentFrom(this.shapes[list[i].k], list[i].end);
           const [wx, wy] = edgeTangentFrom(this.shapes[list[j].k], list[j].end);
-          if (ux * wx + uy * wy > Math.cos(Math.PI / 3)) {
+          const edges = this.boundary.edges;
+          if (wedgeAngle(edges[list[i].k], edges[list[j].k], ux * wx + uy * wy) < WEDGE_ANGLE) {
             this.apex[v] = 1;
             const e = list[i].k, f = list[j].k;
             this.acutePairs.add(e < f ? `${e},${f}` : `${f},${e}`);
