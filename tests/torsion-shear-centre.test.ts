@@ -90,7 +90,7 @@ describe('symmetry (exact, no source needed)', () => {
   it("an unsymmetric section's shear centre moves with the section, and Poisson's ratio moves it only a little", () => {
     // Translation invariance (exact), and the elastic shear centre against the centre of twist
     // (they coincide for ν = 0 by construction; for ν = 0.3 they differ by a small fraction).
-    const shape = { id: 'a', type: 'angle', at: [0, 0], legVertical: 80, legHorizontal: 50, thickness: 6, rootRadius: 6 } as const;
+    const shape: ProfileShape = { id: 'a', type: 'angle', at: [0, 0], legVertical: 80, legHorizontal: 50, thickness: 6, rootRadius: 6 };
     const a = computeRegionTorsion(profileRegion(shape));
     const b = computeRegionTorsion(profileRegion({ ...shape, at: [1234.5, -678.25] }));
     expect(Math.abs(b.shearCentre.x - 1234.5 - a.shearCentre.x)).toBeLessThan(1e-6 * 80);

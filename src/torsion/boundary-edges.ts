@@ -95,7 +95,8 @@ export function exactBoundary(pieces: readonly PieceInput[], frame?: Frame): Exa
   return { xy, edges, originX, originY, size, snap };
 }
 
-function checkRegion(region: Region, k: number): void {
+/** Refuse a region that is not a list of well-formed contours, naming the piece and contour. */
+export function checkRegion(region: Region, k: number): void {
   if (!Array.isArray(region)) throw new TorsionError(`pieces[${k}].region must be a list of contours`);
   region.forEach((c, i) => {
     const where = `pieces[${k}].region[${i}]`;

@@ -7,9 +7,10 @@
  *   thickness at a boundary point is its distance to the nearest other edge, leaving out the
  *   edge itself and the edges that meet it at a vertex (those touch it, they are not across the
  *   wall), except where two edges meet at an acute angle (a sharp wedge, which is thin near its
- *   tip). When half of a symmetric section is meshed, the cut along the mirror axis is not a
- *   wall: the wall across it is the mirror image, twice as far, so distances to or from a cut
- *   count double, and distances from one cut to another do not count;
+ *   tip, though no sharper than 10° is followed). When half of a symmetric section is meshed, the
+ *   cut along the mirror axis is not a wall: the wall across it is the mirror image, twice as
+ *   far, so distances to or from a cut count double, and distances from one cut to another do
+ *   not count;
  * - on an arc, the chord length whose sagitta is `sagittaRatio` of the chord (c ≤ 8·ratio·r), so
  *   that the chords keep within a fixed fraction of the local element size of the exact arc.
  * and never below `hMin`, which keeps a tangency or a sliver from asking for endless refinement.
@@ -33,6 +34,8 @@ export interface SizeRules {
 
 /** Two edges meeting at less than this angle form a wedge that is thin near its tip. */
 export const WEDGE_ANGLE = Math.PI / 3;
+/** Sharpest wedge the sizes follow (10°); see thickness(). */
+const SIN_WEDGE_FLOOR = Math.sin(Math.PI / 18);
 
 /**
  * The angle of the wedge two edges form at a shared vertex, from the cosine of the angle between
@@ -102,11 +105,21 @@ export class BoundarySizer {
     const edges = this.boundary.edges;
     const fromCut = edges[k].cut === true;
     let best = Infinity;
+    const e = edges[k];
     for (const f of this.index.search(px - reach, py - reach, px + reach, py + reach)) {
       if (f === k || touching.has(f)) continue;
       const toCut = edges[f].cut === true;
       if (fromCut && toCut) continue;
-      const d = distanceToEdge(this.shapes[f], px, py) * (fromCut || toCut ? 2 : 1);
+      let d = distanceToEdge(this.shapes[f], px, py) * (fromCut || toCut ? 2 : 1);
+      // Inside a sharp wedge (an edge meeting this one at an acute angle), take the wedge as no
+      // sharper than WEDGE_FLOOR: elements may then span the thin tip of a sliver or a cusp
+      // (their small angles there come from the input) instead of refining it without end.
+      const g = edges[f];
+      const v = g.a === e.a || g.b === e.a ? e.a : g.a === e.b || g.b === e.b ? e.b : -1;
+      if (v >= 0) {
+        const xy = this.boundary.xy;
+        d = Math.max(d, Math.hypot(px - xy[2 * v], py - xy[2 * v + 1]) * SIN_WEDGE_FLOOR);
+      }
       if (d < best) best = d;
     }
     return best;

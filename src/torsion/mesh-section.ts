@@ -7,7 +7,7 @@
  */
 import { regionMoments } from '../moments/kernel';
 import type { Region } from '../geometry/contour';
-import { exactBoundary, type ExactBoundary } from './boundary-edges';
+import { checkRegion, exactBoundary, type ExactBoundary } from './boundary-edges';
 import { localPlace } from './cdt';
 import { TorsionError } from './errors';
 import { BoundarySizer, type SizeRules } from './local-size';
@@ -38,7 +38,11 @@ export const SAGITTA_RATIO = 0.05;
 export const GRADING_RATE = 0.35;
 /** Smallest element size, relative to the section size (keeps tangencies and slivers finite). */
 const MIN_SIZE_RATIO = 1e-5;
-const MAX_POINTS = 250_000;
+/**
+ * Point budget of the straight-sided mesh: the finer quadratic mesh has about 16 nodes per point,
+ * so this caps it near 400 000 nodes (slivers and cusps are the usual reason to reach it).
+ */
+const MAX_POINTS = 25_000;
 
 export interface SectionMesh {
   mesh: LinearMesh;
@@ -51,6 +55,7 @@ export interface SectionMesh {
 }
 
 export function* meshSection(regions: readonly Region[], density: TorsionDensity): Generator<number, SectionMesh> {
+  regions.forEach(checkRegion);
   const areas = regions.map((r, k) => {
     const a = regionMoments(r).m00;
     if (!(a > 0)) throw new TorsionError(`pieces[${k}] has no area (an empty region, or loops that run the wrong way)`);

@@ -201,14 +201,18 @@ function insertCircumcentres(
       if (len > 2 * rules.hMin && !splits.has(i)) splits.set(i, pslg.splitParameter(i, rules.hMin));
     }
     if (encroached) continue;
-    // The cavity: triangles of this face whose circumcircle holds the new point.
+    // The cavity: triangles of this face whose circumcircle holds the new point. The point must
+    // lie in one of them; if it does not, it lies beyond a chord the encroachment test did not
+    // catch (near a tangency or below hMin) and is left out, or it would fall outside the section
+    // and come back every round.
     cavity.length = 0;
     stack.push(t);
     seen[t] = t;
-    let clash = false;
+    let clash = false, holds = false;
     while (stack.length) {
       const s = stack.pop()!;
       if (taken[s]) clash = true;
+      if (!holds && contains(coords, tri, s, px, py)) holds = true;
       cavity.push(s);
       for (let j = 0; j < 3; j++) {
         const e = 3 * s + j;
@@ -219,10 +223,20 @@ function insertCircumcentres(
         if ((px - ccx[u]) ** 2 + (py - ccy[u]) ** 2 < cr2[u]) stack.push(u);
       }
     }
-    if (clash) continue;
+    if (clash || !holds) continue;
     for (const s of cavity) taken[s] = 1;
     fresh.push(px, py);
   }
+}
+
+/** True when (px, py) lies in triangle t (counter-clockwise), its sides included. */
+function contains(coords: Float64Array, tri: Uint32Array, t: number, px: number, py: number): boolean {
+  for (let j = 0; j < 3; j++) {
+    const a = tri[3 * t + j], b = tri[3 * t + ((j + 1) % 3)];
+    const ax = coords[2 * a], ay = coords[2 * a + 1];
+    if ((coords[2 * b] - ax) * (py - ay) - (coords[2 * b + 1] - ay) * (px - ax) < 0) return false;
+  }
+  return true;
 }
 
 /** The section's triangles and the points they use, renumbered. */
