@@ -33,6 +33,8 @@ interface Level {
   A: Csr;
   /** 1/a_ii. */
   inv: Float64Array;
+  /** Slot of the diagonal in each row (columns are sorted: left of it is the lower triangle). */
+  diagAt: Int32Array;
   /** Prolongation to this level from the next coarser one (null on the coarsest). */
   P: Csr | null;
   R: Csr | null;
@@ -87,8 +89,7 @@ export class Multigrid {
       else for (let s = 0; s < 8; s++) gaussSeidel(L, s % 2 === 0);
       return;
     }
-    gaussSeidel(L, true);
-    residual(L);
+    forwardFromZeroWithResidual(L);
     const C = this.levels[k + 1];
     multiplyInto(L.R!, L.r, C.b);
     this.cycle(k + 1);
@@ -101,9 +102,16 @@ function level(A: Csr, P: Csr | null): Level {
   const n = A.n;
   // 1/a_ii per row (0 where the row has no positive diagonal: Gauss–Seidel leaves it alone).
   const inv = new Float64Array(n);
-  for (let i = 0; i < n; i++)
-    for (let k = A.rowPtr[i]; k < A.rowPtr[i + 1]; k++) if (A.col[k] === i && A.val[k] > 0) inv[i] = 1 / A.val[k];
-  return { A, inv, P, R: P ? transpose(P) : null, x: new Float64Array(n), b: new Float64Array(n), r: new Float64Array(n) };
+  const diagAt = new Int32Array(n);
+  for (let i = 0; i < n; i++) {
+    diagAt[i] = A.rowPtr[i];
+    for (let k = A.rowPtr[i]; k < A.rowPtr[i + 1]; k++)
+      if (A.col[k] === i) {
+        diagAt[i] = k;
+        if (A.val[k] > 0) inv[i] = 1 / A.val[k];
+      }
+  }
+  return { A, inv, diagAt, P, R: P ? transpose(P) : null, x: new Float64Array(n), b: new Float64Array(n), r: new Float64Array(n) };
 }
 
 /**
@@ -128,12 +136,27 @@ function gaussSeidel(L: Level, forward: boolean): void {
     }
 }
 
-function residual(L: Level): void {
+/**
+ * A forward Gauss–Seidel sweep from x = 0, and the residual it leaves, in one pass over the
+ * matrix: while row i is updated every x_j with j > i is still 0, so the sweep needs only the
+ * lower triangle, and afterwards rows' equations hold up to the terms of later columns:
+ * r_i = b_i − Σ_j a_ij x_j = −Σ_{j>i} a_ij x_j, the upper triangle.
+ */
+function forwardFromZeroWithResidual(L: Level): void {
   const { rowPtr, col, val } = L.A;
-  for (let i = 0; i < L.A.n; i++) {
-    let s = L.b[i];
-    for (let k = rowPtr[i]; k < rowPtr[i + 1]; k++) s -= val[k] * L.x[col[k]];
-    L.r[i] = s;
+  const { x, b, r, inv, diagAt } = L;
+  const n = L.A.n;
+  for (let i = 0; i < n; i++) {
+    let s = b[i];
+    const d = diagAt[i];
+    for (let k = rowPtr[i]; k < d; k++) s -= val[k] * x[col[k]];
+    x[i] = s * inv[i];
+    r[i] = inv[i] === 0 ? s : 0; // (a row without a positive diagonal is left unsolved)
+  }
+  for (let i = 0; i < n; i++) {
+    let s = r[i];
+    for (let k = diagAt[i] + 1; k < rowPtr[i + 1]; k++) s -= val[k] * x[col[k]];
+    r[i] = s;
   }
 }
 

@@ -106,3 +106,104 @@ export function shapeGradients(
   }
   return det;
 }
+
+/**
+ * One element's geometry at the quadrature points: point coordinates, integration weights
+ * (quadrature weight × det J / 2) and shape-function gradients. A straight-sided element (every
+ * mid-side node exactly at the middle of its side) has a constant Jacobian, taken once from its
+ * vertices; a curved one is evaluated point by point.
+ */
+export class ElementGeometry {
+  readonly x = new Float64Array(6);
+  readonly y = new Float64Array(6);
+  /** Weight of each quadrature point. */
+  readonly w = new Float64Array(NQ);
+  readonly px = new Float64Array(NQ);
+  readonly py = new Float64Array(NQ);
+  /** Gradients: gx[6q + a] = ∂N_a/∂x at point q. */
+  readonly gx = new Float64Array(6 * NQ);
+  readonly gy = new Float64Array(6 * NQ);
+  /** True when the element is straight-sided (constant Jacobian). */
+  straight = true;
+  /** Constant-Jacobian entries of a straight element (valid when `straight`). */
+  j11 = 0;
+  j12 = 0;
+  j21 = 0;
+  j22 = 0;
+  det = 0;
+  private readonly tx = new Float64Array(6);
+  private readonly ty = new Float64Array(6);
+
+  /** Load element e of a mesh, with coordinates taken relative to (ox, oy). */
+  load(mx: Float64Array, my: Float64Array, elem: Uint32Array, e: number, ox: number, oy: number): void {
+    const { x, y } = this;
+    for (let a = 0; a < 6; a++) {
+      const v = elem[6 * e + a];
+      x[a] = mx[v] - ox;
+      y[a] = my[v] - oy;
+    }
+    this.straight =
+      x[3] === (x[0] + x[1]) / 2 && y[3] === (y[0] + y[1]) / 2 && x[4] === (x[1] + x[2]) / 2 && y[4] === (y[1] + y[2]) / 2 && x[5] === (x[2] + x[0]) / 2 && y[5] === (y[2] + y[0]) / 2;
+    if (this.straight) this.loadStraight();
+    else this.loadCurved();
+  }
+
+  private loadStraight(): void {
+    const { x, y, w, px, py, gx, gy } = this;
+    const j11 = x[1] - x[0], j12 = y[1] - y[0], j21 = x[2] - x[0], j22 = y[2] - y[0];
+    const det = j11 * j22 - j12 * j21;
+    this.j11 = j11;
+    this.j12 = j12;
+    this.j21 = j21;
+    this.j22 = j22;
+    this.det = det;
+    const inv = 1 / det;
+    for (let q = 0; q < NQ; q++) {
+      const [l1, l2, l3] = QUAD_L[q];
+      w[q] = (QUAD_W[q] * det) / 2;
+      px[q] = l1 * x[0] + l2 * x[1] + l3 * x[2];
+      py[q] = l1 * y[0] + l2 * y[1] + l3 * y[2];
+      for (let a = 0; a < 6; a++) {
+        const u = QDXI[6 * q + a], v = QDETA[6 * q + a];
+        gx[6 * q + a] = (j22 * u - j12 * v) * inv;
+        gy[6 * q + a] = (-j21 * u + j11 * v) * inv;
+      }
+    }
+  }
+
+  private loadCurved(): void {
+    const { x, y, w, px, py, gx, gy, tx, ty } = this;
+    for (let q = 0; q < NQ; q++) {
+      const det = shapeGradients(x, y, QDXI, QDETA, 6 * q, tx, ty);
+      w[q] = (QUAD_W[q] * det) / 2;
+      let sx = 0, sy = 0;
+      for (let a = 0; a < 6; a++) {
+        sx += QN[6 * q + a] * x[a];
+        sy += QN[6 * q + a] * y[a];
+        gx[6 * q + a] = tx[a];
+        gy[6 * q + a] = ty[a];
+      }
+      px[q] = sx;
+      py[q] = sy;
+    }
+  }
+}
+
+/**
+ * Reference stiffness parts of the quadratic triangle: for a straight element with Jacobian J,
+ * ∫ ∇N_a·∇N_b dA = det J · (Q11·Suu + Q12·Suv + Q22·Svv), with Q = J⁻ᵀJ⁻¹ and
+ * Suu = ∫ ∂ξN_a ∂ξN_b, Suv = ∫ (∂ξN_a ∂ηN_b + ∂ηN_a ∂ξN_b), Svv = ∫ ∂ηN_a ∂ηN_b over the
+ * reference triangle (integrands of degree 2: exact with the quadrature rule).
+ */
+export const SUU = new Float64Array(36);
+export const SUV = new Float64Array(36);
+export const SVV = new Float64Array(36);
+for (let q = 0; q < NQ; q++)
+  for (let a = 0; a < 6; a++)
+    for (let b = 0; b < 6; b++) {
+      const wq = QUAD_W[q] / 2;
+      const ua = QDXI[6 * q + a], va = QDETA[6 * q + a], ub = QDXI[6 * q + b], vb = QDETA[6 * q + b];
+      SUU[6 * a + b] += wq * ua * ub;
+      SUV[6 * a + b] += wq * (ua * vb + va * ub);
+      SVV[6 * a + b] += wq * va * vb;
+    }

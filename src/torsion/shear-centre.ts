@@ -33,7 +33,7 @@
  * own axes); the results then treat the parts as held together in the plane and warping freely,
  * and the caller reports a caution.
  */
-import { NQ, QDETA, QDXI, QN, QUAD_W, shapeGradients } from './p2-element';
+import { ElementGeometry, NQ, QN } from './p2-element';
 import { elementCount, type QuadMesh } from './quad-mesh';
 import type { WarpingSolution } from './warping';
 
@@ -95,20 +95,16 @@ export function centres(m: QuadMesh, g: Float64Array, part: Int32Array, parts: n
 
 /** ∫ g φ² dA for a nodal field φ. */
 function weightedSquare(m: QuadMesh, g: Float64Array, phi: Float64Array): number {
-  const ex = new Float64Array(6), ey = new Float64Array(6), gx = new Float64Array(6), gy = new Float64Array(6);
+  const G = new ElementGeometry();
   let sum = 0;
   const ne = elementCount(m);
   for (let e = 0; e < ne; e++) {
-    for (let a = 0; a < 6; a++) {
-      ex[a] = m.x[m.elem[6 * e + a]];
-      ey[a] = m.y[m.elem[6 * e + a]];
-    }
+    G.load(m.x, m.y, m.elem, e, 0, 0);
     const ge = g[m.piece[e]];
     for (let q = 0; q < NQ; q++) {
-      const w = (ge * QUAD_W[q] * shapeGradients(ex, ey, QDXI, QDETA, 6 * q, gx, gy)) / 2;
       let v = 0;
       for (let a = 0; a < 6; a++) v += QN[6 * q + a] * phi[m.elem[6 * e + a]];
-      sum += w * v * v;
+      sum += ge * G.w[q] * v * v;
     }
   }
   return sum;

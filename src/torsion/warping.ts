@@ -20,7 +20,7 @@
  */
 import { Multigrid } from './multigrid';
 import { conjugateGradients, type SolveReport } from './pcg';
-import { NQ, QDETA, QDXI, QN, QUAD_W, shapeGradients } from './p2-element';
+import { ElementGeometry, NQ, QN, SUU, SUV, SVV } from './p2-element';
 import { elementCount, linearEmbedding, type QuadMesh } from './quad-mesh';
 import { elementPattern, multiply, slot, type CsrMatrix } from './sparse';
 
@@ -61,67 +61,49 @@ export interface WarpingSolution {
   levels: number[];
 }
 
-const ex = new Float64Array(6), ey = new Float64Array(6), gx = new Float64Array(6), gy = new Float64Array(6);
-
-function loadElement(m: QuadMesh, e: number, ox: number, oy: number): void {
-  for (let a = 0; a < 6; a++) {
-    const v = m.elem[6 * e + a];
-    ex[a] = m.x[v] - ox;
-    ey[a] = m.y[v] - oy;
-  }
-}
-
-/** Point of quadrature point q in the loaded element. */
-function quadPoint(q: number): [number, number] {
-  let x = 0, y = 0;
-  for (let a = 0; a < 6; a++) {
-    x += QN[6 * q + a] * ex[a];
-    y += QN[6 * q + a] * ey[a];
-  }
-  return [x, y];
-}
-
-/** The section's G-weighted area, centroid, second and third moments on the mesh. */
+/**
+ * The section's G-weighted area, centroid, second and third moments on the mesh, in one pass:
+ * moments about the mesh frame's origin (the bounding-box centre, close to the centroid), then
+ * moved to the centroid.
+ */
 export function meshSectionProperties(m: QuadMesh, g: Float64Array, part: Int32Array, parts: number): MeshSection {
   const ne = elementCount(m);
-  let A = 0, Sx = 0, Sy = 0;
+  const G = new ElementGeometry();
+  let A = 0, Sx = 0, Sy = 0, Sxx = 0, Syy = 0, Sxy = 0, Sxxx = 0, Sxxy = 0, Sxyy = 0, Syyy = 0;
   const pa = new Float64Array(parts), px = new Float64Array(parts), py = new Float64Array(parts);
   for (let e = 0; e < ne; e++) {
-    loadElement(m, e, 0, 0);
+    G.load(m.x, m.y, m.elem, e, 0, 0);
     const ge = g[m.piece[e]];
     const k = part[m.elem[6 * e]];
     for (let q = 0; q < NQ; q++) {
-      const w = (ge * QUAD_W[q] * shapeGradients(ex, ey, QDXI, QDETA, 6 * q, gx, gy)) / 2;
-      const [x, y] = quadPoint(q);
+      const w = ge * G.w[q], x = G.px[q], y = G.py[q];
       A += w;
       Sx += w * x;
       Sy += w * y;
+      Sxx += w * x * x;
+      Syy += w * y * y;
+      Sxy += w * x * y;
+      Sxxx += w * x * x * x;
+      Sxxy += w * x * x * y;
+      Sxyy += w * x * y * y;
+      Syyy += w * y * y * y;
       pa[k] += w;
       px[k] += w * x;
       py[k] += w * y;
     }
   }
   const cx = Sx / A, cy = Sy / A;
-  let Ixx = 0, Iyy = 0, Ixy = 0, X3 = 0, Y3 = 0;
-  for (let e = 0; e < ne; e++) {
-    loadElement(m, e, cx, cy);
-    const ge = g[m.piece[e]];
-    for (let q = 0; q < NQ; q++) {
-      const w = (ge * QUAD_W[q] * shapeGradients(ex, ey, QDXI, QDETA, 6 * q, gx, gy)) / 2;
-      const [x, y] = quadPoint(q);
-      const r2 = x * x + y * y;
-      Ixx += w * y * y;
-      Iyy += w * x * x;
-      Ixy += w * x * y;
-      X3 += w * x * r2;
-      Y3 += w * y * r2;
-    }
-  }
+  // With u = x − cx, v = y − cy: ∫u² = Sxx − A cx², ∫u³ = Sxxx − 3cx Sxx + 2A cx³,
+  // ∫u v² = Sxyy − 2cy Sxy − cx Syy + 2A cx cy², and the same with x and y exchanged.
+  const Iyy = Sxx - A * cx * cx, Ixx = Syy - A * cy * cy, Ixy = Sxy - A * cx * cy;
+  const u3 = Sxxx - 3 * cx * Sxx + 2 * A * cx ** 3, v3 = Syyy - 3 * cy * Syy + 2 * A * cy ** 3;
+  const uv2 = Sxyy - 2 * cy * Sxy - cx * Syy + 2 * A * cx * cy * cy;
+  const vu2 = Sxxy - 2 * cx * Sxy - cy * Sxx + 2 * A * cy * cx * cx;
   for (let k = 0; k < parts; k++) {
     px[k] -= cx * pa[k];
     py[k] -= cy * pa[k];
   }
-  return { area: A, cx, cy, Ixx, Iyy, Ixy, X3, Y3, partArea: pa, partX: px, partY: py };
+  return { area: A, cx, cy, Ixx, Iyy, Ixy, X3: u3 + uv2, Y3: v3 + vu2, partArea: pa, partX: px, partY: py };
 }
 
 /**
@@ -139,18 +121,29 @@ export function assembleWarping(m: QuadMesh, g: Float64Array, cx: number, cy: nu
   const val = new Float64Array(pattern.col.length), val1 = new Float64Array(pattern1.col.length);
   const f = new Float64Array(n);
   const ke = new Float64Array(36), fe = new Float64Array(6), kp = new Float64Array(18);
+  const G = new ElementGeometry();
   for (let e = 0; e < ne; e++) {
-    loadElement(m, e, cx, cy);
+    G.load(m.x, m.y, m.elem, e, cx, cy);
     const ge = g[m.piece[e]];
-    ke.fill(0);
     fe.fill(0);
     for (let q = 0; q < NQ; q++) {
-      const w = (ge * QUAD_W[q] * shapeGradients(ex, ey, QDXI, QDETA, 6 * q, gx, gy)) / 2;
-      const [x, y] = quadPoint(q);
-      for (let a = 0; a < 6; a++) {
-        fe[a] += w * (y * gx[a] - x * gy[a]);
-        const wa = w * gx[a], wb = w * gy[a];
-        for (let b = a; b < 6; b++) ke[6 * a + b] += wa * gx[b] + wb * gy[b];
+      const w = ge * G.w[q], x = G.px[q], y = G.py[q];
+      for (let a = 0; a < 6; a++) fe[a] += w * (y * G.gx[6 * q + a] - x * G.gy[6 * q + a]);
+    }
+    if (G.straight) {
+      // Closed form: det J (Q11 Suu + Q12 Suv + Q22 Svv), Q = J⁻ᵀJ⁻¹ (p2-element.ts).
+      const { j11, j12, j21, j22, det } = G;
+      const c = ge / det;
+      const q11 = c * (j21 * j21 + j22 * j22), q12 = -c * (j11 * j21 + j12 * j22), q22 = c * (j11 * j11 + j12 * j12);
+      for (let a = 0; a < 6; a++) for (let b = a; b < 6; b++) ke[6 * a + b] = q11 * SUU[6 * a + b] + q12 * SUV[6 * a + b] + q22 * SVV[6 * a + b];
+    } else {
+      ke.fill(0);
+      for (let q = 0; q < NQ; q++) {
+        const w = ge * G.w[q];
+        for (let a = 0; a < 6; a++) {
+          const wa = w * G.gx[6 * q + a], wb = w * G.gy[6 * q + a];
+          for (let b = a; b < 6; b++) ke[6 * a + b] += wa * G.gx[6 * q + b] + wb * G.gy[6 * q + b];
+        }
       }
     }
     for (let a = 0; a < 6; a++) for (let b = 0; b < a; b++) ke[6 * a + b] = ke[6 * b + a];
@@ -292,19 +285,19 @@ function warpingIntegrals(m: QuadMesh, g: Float64Array, part: Int32Array, parts:
   let Xw = 0, Yw = 0, Da = 0, Db = 0;
   const ne = elementCount(m);
   const we = new Float64Array(6);
+  const G = new ElementGeometry();
   for (let e = 0; e < ne; e++) {
-    loadElement(m, e, s.cx, s.cy);
+    G.load(m.x, m.y, m.elem, e, s.cx, s.cy);
     for (let a = 0; a < 6; a++) we[a] = omega[m.elem[6 * e + a]];
     const ge = g[m.piece[e]];
     const k = part[m.elem[6 * e]];
     for (let q = 0; q < NQ; q++) {
-      const w = (ge * QUAD_W[q] * shapeGradients(ex, ey, QDXI, QDETA, 6 * q, gx, gy)) / 2;
-      const [x, y] = quadPoint(q);
+      const w = ge * G.w[q], x = G.px[q], y = G.py[q];
       let om = 0, ox = 0, oy = 0;
       for (let a = 0; a < 6; a++) {
         om += QN[6 * q + a] * we[a];
-        ox += gx[a] * we[a];
-        oy += gy[a] * we[a];
+        ox += G.gx[6 * q + a] * we[a];
+        oy += G.gy[6 * q + a] * we[a];
       }
       partOmega[k] += w * om;
       Xw += w * x * om;
