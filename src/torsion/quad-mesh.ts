@@ -257,7 +257,7 @@ export function renumberNodes(m: QuadMesh, order: Int32Array): { mesh: QuadMesh;
   return { mesh: { ...m, x, y, elem }, newId };
 }
 
-/** A prolongation re-indexed after the fine mesh was renumbered (coarse ids as in `coarseNewId`). */
+/** A prolongation re-indexed after the fine mesh was renumbered (`fineOrder[k]` = old id of new node k). */
 export function renumberProlongation(p: Prolongation, fineOrder: Int32Array): Prolongation {
   const n = fineOrder.length;
   const parent = new Int32Array(n), same = new Int32Array(n), L = new Float64Array(3 * n);

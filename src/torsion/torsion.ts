@@ -147,29 +147,30 @@ export function* torsionSteps(pieces: readonly TorsionPiece[], options: TorsionO
     ),
     'mesh',
     0,
-    0.12,
+    0.2,
   );
   const coarse = ordered(quadraticMesh(lin));
   const solC = yield* stage(
     solveWarping(coarse.mesh, g, coarse.part, coarse.parts, { tol: SOLVER_TOL, start: null, mirrors: mirrorsOf(coarse.mesh, axes) }),
     'solve-coarse',
-    0.12,
-    0.3,
+    0.2,
+    0.45,
   );
   const centC = centres(coarse.mesh, g, coarse.part, coarse.parts, solC, nu);
 
+  yield { fraction: 0.45, stage: 'refine' };
   const split = splitUniformly(coarse.mesh);
   const fine = orderedSplit(split.mesh, coarse.mesh.x.length, coarse.part, coarse.parts);
   const prolongation = renumberProlongation(split.prolongation, fine.order);
   const start = prolong(prolongation, coarse.mesh, solC.omega);
-  yield { fraction: 0.34, stage: 'refine' };
   const solF = yield* stage(
     solveWarping(fine.mesh, g, fine.part, fine.parts, { tol: SOLVER_TOL, start, mirrors: mirrorsOf(fine.mesh, axes) }),
     'solve-fine',
-    0.34,
-    0.95,
+    0.47,
+    0.97,
   );
   const centF = centres(fine.mesh, g, fine.part, fine.parts, solF, nu);
+  yield { fraction: 0.97, stage: 'results' };
 
   const ox = boundary.originX, oy = boundary.originY;
   const stress = unitTorqueStress(fine.mesh, g, solF.omega, solF.J, solF.section.cx, solF.section.cy);
