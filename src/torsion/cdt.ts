@@ -48,7 +48,7 @@ export function localPlace(ox: number, oy: number): Place {
 }
 
 /** Number of frame points appended after the section's points (ids n … n + 3). */
-export const FRAME_POINTS = 4;
+const FRAME_POINTS = 4;
 
 export function buildCdt(points: Float64Array, chords: ChordList, place: Place): Cdt {
   const coords = withFrame(points);

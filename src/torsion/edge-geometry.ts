@@ -95,7 +95,7 @@ export function edgeParameter(g: EdgeShape, px: number, py: number): number {
   return (theta / alpha + 1) / 2;
 }
 
-export function distanceToSegment(ax: number, ay: number, bx: number, by: number, px: number, py: number): number {
+function distanceToSegment(ax: number, ay: number, bx: number, by: number, px: number, py: number): number {
   const dx = bx - ax, dy = by - ay;
   const L2 = dx * dx + dy * dy;
   let t = L2 > 0 ? ((px - ax) * dx + (py - ay) * dy) / L2 : 0;

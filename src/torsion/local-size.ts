@@ -124,8 +124,4 @@ export class BoundarySizer {
     }
     return best;
   }
-
-  get edgeCount(): number {
-    return this.boundary.edges.length;
-  }
 }

@@ -29,7 +29,7 @@ export const QUAD_W: readonly number[] = [W1, W1, W1, W2, W2, W2];
 export const NQ = 6;
 
 /** The six node positions as area coordinates (L1, L2, L3). */
-export const NODE_L: readonly (readonly [number, number, number])[] = [
+const NODE_L: readonly (readonly [number, number, number])[] = [
   [1, 0, 0],
   [0, 1, 0],
   [0, 0, 1],
@@ -49,7 +49,7 @@ export function shapeValues(L1: number, L2: number, L3: number, out: Float64Arra
 }
 
 /** Derivatives with respect to ξ (= L2) and η (= L3), into dxi[0..5] and deta[0..5]. */
-export function shapeDerivatives(L1: number, L2: number, L3: number, dxi: Float64Array, deta: Float64Array, offset = 0): void {
+function shapeDerivatives(L1: number, L2: number, L3: number, dxi: Float64Array, deta: Float64Array, offset = 0): void {
   dxi[offset] = -(4 * L1 - 1);
   deta[offset] = -(4 * L1 - 1);
   dxi[offset + 1] = 4 * L2 - 1;

@@ -16,9 +16,9 @@ import { F64List, I32List } from './growable';
 import { WEDGE_ANGLE, wedgeAngle, type BoundarySizer } from './local-size';
 
 /** A piece is halved while it is longer than this multiple of the wanted size. */
-export const SIZE_SLACK = 1.0;
+const SIZE_SLACK = 1.0;
 /** `onEdge` of an exact vertex. */
-export const VERTEX = -1;
+const VERTEX = -1;
 /** `onEdge` of an interior (Steiner) point. */
 export const INTERIOR = -2;
 

@@ -211,7 +211,7 @@ export function* torsionSteps(pieces: readonly TorsionPiece[], options: TorsionO
       at: { x: xy[2 * stress.maxNode], y: xy[2 * stress.maxNode + 1] },
     },
     solver: { coarseIterations: solC.solve.iterations, fineIterations: solF.solve.iterations, residual: solF.solve.residual },
-    cautions: cautionsFor(fine.parts, corner > Math.PI + 1e-3, conv, lin.warnings, coarse.mesh.straightened + fine.mesh.straightened, pieces.length, solF),
+    cautions: cautionsFor(fine.parts, corner > Math.PI + 1e-3, conv, lin.warnings, coarse.mesh.straightened + fine.mesh.straightened, new Set(pieces.map((p) => p.G)).size, solF),
   };
 }
 
@@ -234,7 +234,7 @@ function sideRange(m: QuadMesh): { min: number; max: number } {
   return { min, max };
 }
 
-function cautionsFor(parts: number, reentrant: boolean, conv: Convergence, meshWarnings: string[], straightened: number, pieces: number, sol: WarpingSolution): string[] {
+function cautionsFor(parts: number, reentrant: boolean, conv: Convergence, meshWarnings: string[], straightened: number, materials: number, sol: WarpingSolution): string[] {
   const out: string[] = [...meshWarnings];
   if (parts > 1)
     out.push(
@@ -245,8 +245,8 @@ function cautionsFor(parts: number, reentrant: boolean, conv: Convergence, meshW
       'The outline has sharp re-entrant corners: the shear stress there is theoretically unbounded, so the peak on the stress map depends on the mesh. Real corners have a radius; model it to read the corner stress.',
     );
   if (conv.estimatedError > 0.01) out.push(`J may still be ${(100 * conv.estimatedError).toPrecision(2)} % off (estimated from two meshes); use a finer density.`);
-  if (straightened > 0) out.push(`${straightened} element sides along arcs had to be left straight; small arcs are approximated by chords there.`);
-  if (pieces > 1) out.push("Pieces of different materials share one Poisson's ratio; the shear centre of a mixed section is approximate.");
+  if (straightened > 0) out.push(`${straightened} elements along arcs kept straight sides (a curved side would have turned them inside out); the arc is approximated by chords there.`);
+  if (materials > 1) out.push("Pieces of different materials share one Poisson's ratio here, so the shear centre of the mixed section is approximate.");
   if (!sol.solve.converged) out.push(`The equation solver stopped at a relative residual of ${sol.solve.residual.toExponential(1)}; results may be inaccurate.`);
   return out;
 }
