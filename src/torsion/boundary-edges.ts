@@ -184,35 +184,47 @@ function splitAtTouchingVertices(xy: Float64Array, edges: ExactEdge[], snap: num
   return out;
 }
 
-/** One edge per distinct curve between two vertices, with the pieces on both sides. */
+/**
+ * One edge per distinct curve between two vertices, with the pieces on both sides. Copies of an
+ * edge count like winding numbers, piece by piece: a piece's loops running along the same curve in
+ * opposite directions cancel (no boundary there, as the signed moments say), once leaves the piece
+ * on one side, and twice the same way is an overlap. Two pieces on the same side overlap too.
+ */
 function mergeCoincident(xy: Float64Array, edges: ExactEdge[], snap: number, ox: number, oy: number): ExactEdge[] {
-  const byPair = new Map<string, ExactEdge[]>();
-  const out: ExactEdge[] = [];
+  interface Curve {
+    edge: ExactEdge;
+    /** Net count per piece: +1 for each copy a→b, −1 for each copy b→a. */
+    net: Map<number, number>;
+  }
+  const byPair = new Map<string, Curve[]>();
+  const curves: Curve[] = [];
   for (const e of edges) {
     const key = e.a < e.b ? `${e.a},${e.b}` : `${e.b},${e.a}`;
     const L = Math.hypot(xy[2 * e.b] - xy[2 * e.a], xy[2 * e.b + 1] - xy[2 * e.a + 1]);
     // Two arcs between the same points coincide when their sagittas (≈ L·sweep/8) agree to the snap distance.
     const same = (f: ExactEdge, sign: number) => Math.abs(f.sweep - sign * e.sweep) * L <= 8 * snap;
     const list = byPair.get(key) ?? [];
-    const twin = list.find((f) => (f.a === e.a && same(f, 1)) || (f.a === e.b && same(f, -1)));
-    if (!twin) {
-      const copy = { ...e };
-      list.push(copy);
+    let curve = list.find((c) => (c.edge.a === e.a && same(c.edge, 1)) || (c.edge.a === e.b && same(c.edge, -1)));
+    if (!curve) {
+      curve = { edge: { a: e.a, b: e.b, sweep: e.sweep, left: -1, right: -1 }, net: new Map() };
+      list.push(curve);
       byPair.set(key, list);
-      out.push(copy);
-      continue;
+      curves.push(curve);
     }
-    const sameDirection = twin.a === e.a;
-    const side: 'left' | 'right' = sameDirection ? 'left' : 'right';
-    if (twin[side] !== -1) {
-      const mx = (xy[2 * e.a] + xy[2 * e.b]) / 2 + ox, my = (xy[2 * e.a + 1] + xy[2 * e.b + 1]) / 2 + oy;
-      throw new TorsionError(
-        twin[side] === e.left
-          ? `piece ${e.left} has the same edge twice near ${placeText(mx, my)}: a loop is repeated or overlaps itself`
-          : `pieces ${twin[side]} and ${e.left} overlap along the edge near ${placeText(mx, my)}; pieces must not overlap`,
-      );
+    const d = curve.edge.a === e.a ? 1 : -1;
+    curve.net.set(e.left, (curve.net.get(e.left) ?? 0) + d);
+  }
+  const out: ExactEdge[] = [];
+  for (const { edge, net } of curves) {
+    const where = () => placeText((xy[2 * edge.a] + xy[2 * edge.b]) / 2 + ox, (xy[2 * edge.a + 1] + xy[2 * edge.b + 1]) / 2 + oy);
+    for (const [piece, count] of net) {
+      if (count === 0) continue;
+      if (Math.abs(count) > 1) throw new TorsionError(`piece ${piece} has the same edge twice near ${where()}: a loop is repeated or overlaps itself`);
+      const side: 'left' | 'right' = count > 0 ? 'left' : 'right';
+      if (edge[side] !== -1) throw new TorsionError(`pieces ${edge[side]} and ${piece} overlap along the edge near ${where()}; pieces must not overlap`);
+      edge[side] = piece;
     }
-    twin[side] = e.left;
+    if (edge.left !== -1 || edge.right !== -1) out.push(edge);
   }
   return out;
 }
