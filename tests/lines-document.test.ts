@@ -51,6 +51,10 @@ function errors(value: unknown): string[] {
   return r.ok ? [] : r.errors.map(formatIssue);
 }
 
+function warnings(value: unknown): string[] {
+  return validateDocument(value).warnings.map(formatIssue);
+}
+
 describe('weldLoads in the document', () => {
   it('accepts a load on an existing group and keeps it through save and read', () => {
     const d = docWith({ weldLoads: [{ group: 'Bracket weld', at: [200, 50], Fx: 0, Fy: -10, M: 0, name: 'Service' }] });
@@ -59,12 +63,15 @@ describe('weldLoads in the document', () => {
     expect(r.ok && r.doc.weldLoads).toEqual([{ group: 'Bracket weld', at: [200, 50], Fx: 0, Fy: -10, M: 0, name: 'Service' }]);
   });
 
-  it('names a group that does not exist, with the groups the document has', () => {
-    expect(errors(docWith({ weldLoads: [{ group: 'Top weld', at: [0, 0], Fx: 1, Fy: 0 }] }))).toEqual([
-      'weldLoads[0].group: there is no line group "Top weld"; the document\'s line groups are "Bracket weld"',
-    ]);
+  it('names a group that does not exist, with the groups the document has (a warning: the file still opens)', () => {
+    const typo = docWith({ weldLoads: [{ group: 'Top weld', at: [0, 0], Fx: 1, Fy: 0 }] });
+    expect(errors(typo)).toEqual([]);
+    expect(warnings(typo)).toEqual(['weldLoads[0].group: there is no line group "Top weld"; the document\'s line groups are "Bracket weld" (the load is kept but not evaluated)']);
     const noLines = docWith({ weldLoads: [{ group: 'Lines', at: [0, 0], Fx: 1, Fy: 0 }] }, [{ type: 'circle', center: [0, 0], radius: 5 }]);
-    expect(errors(noLines)).toEqual(['weldLoads[0].group: there is no line group "Lines": the document has no line elements']);
+    expect(warnings(noLines)).toEqual(['weldLoads[0].group: there is no line group "Lines": the document has no line elements (the load is kept but not evaluated)']);
+    const ev = evaluateDocument((validateDocument(typo) as { doc: SectionDocument }).doc);
+    expect(ev.welds[0].result).toBeNull();
+    expect(ev.welds[0].message).toBe('The line group "Top weld" has no line elements in this section.');
   });
 
   it('takes the default group "Lines" and a group that only a proposal has', () => {

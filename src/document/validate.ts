@@ -72,7 +72,7 @@ export function validateDocument(value: unknown): DocResult {
   validateMaterials(doc, allShapes, errors);
   validateLimits(doc, errors);
   validateCheckerFields(doc, errors);
-  validateWeldLoads(doc, errors);
+  validateWeldLoads(doc, errors, warnings);
   if (doc.name !== undefined && typeof doc.name !== 'string') errors.push({ path: 'name', message: 'name must be text' });
   if (doc.title !== undefined) {
     if (!isObj(doc.title)) errors.push({ path: 'title', message: 'title must be an object of text fields' });

@@ -8,8 +8,10 @@
  * `forceUnit`, kN when absent) and an optional added moment M, counter-clockwise positive (force ×
  * `momentLength`, the document's length unit when absent), as the section loads are given.
  *
- * Validation names every problem with its path; a group no line element belongs to (in the
- * baseline or in any proposal) is refused with the groups the document has.
+ * Validation names every problem with its path. A group no line element belongs to (in the
+ * baseline or in any proposal) is a warning naming the groups the document has, not an error: the
+ * file still opens when the weld lines were deleted (the load is kept and says that its group has
+ * no elements), while a misspelt group in a file written by hand is reported by every reader.
  */
 import { fmtValue, isObj, type Issue } from '../shapes/check';
 import { DEFAULT_LINE_GROUP } from '../shapes/line';
@@ -56,8 +58,11 @@ export function documentLineGroups(doc: Record<string, unknown>): string[] {
   return out;
 }
 
-/** `weldLoads`: a list of {group, at, Fx, Fy, M?, name?}, each group one the document has. */
-export function validateWeldLoads(doc: Record<string, unknown>, out: Issue[]): void {
+/**
+ * `weldLoads`: a list of {group, at, Fx, Fy, M?, name?}. Errors go to `out`; a group that no line
+ * element of the document belongs to goes to `warnings`.
+ */
+export function validateWeldLoads(doc: Record<string, unknown>, out: Issue[], warnings: Issue[] = out): void {
   const list = doc.weldLoads;
   if (list === undefined) return;
   if (!Array.isArray(list)) {
@@ -71,11 +76,11 @@ export function validateWeldLoads(doc: Record<string, unknown>, out: Issue[]): v
     for (const key of Object.keys(w)) if (!FIELDS.includes(key)) out.push({ path: `${p}.${key}`, message: `unknown field; a weld load has ${FIELDS.join(', ')}` });
     if (typeof w.group !== 'string' || w.group.trim() === '') out.push({ path: `${p}.group`, message: 'name the line group the load acts on' });
     else if (!groups.includes(w.group.trim())) {
-      out.push({
+      warnings.push({
         path: `${p}.group`,
         message: groups.length
-          ? `there is no line group "${w.group}"; the document's line groups are ${groups.map((g) => `"${g}"`).join(', ')}`
-          : `there is no line group "${w.group}": the document has no line elements`,
+          ? `there is no line group "${w.group}"; the document's line groups are ${groups.map((g) => `"${g}"`).join(', ')} (the load is kept but not evaluated)`
+          : `there is no line group "${w.group}": the document has no line elements (the load is kept but not evaluated)`,
       });
     }
     const at = w.at;
