@@ -129,20 +129,19 @@ export function weldText(w: WeldResult, units: SectionDocument['units']): string
 function flagLoad(flags: Map<string, string | true>): Omit<WeldLoadCase, 'group'> | null {
   const given = ['at', 'fx', 'fy', 'm'].filter((k) => flags.has(k));
   if (given.length === 0) return null;
-  if (!flags.has('at')) throw new UsageError('a weld load needs --at X,Y (the point where the force acts) with --fx and --fy');
+  if (!flags.has('at')) throw new UsageError('a weld load needs --at X,Y (the point where the force acts) with --fx, --fy or --m');
+  if (!['fx', 'fy', 'm'].some((k) => flags.has(k))) throw new UsageError('a weld load needs a force or a moment: --fx, --fy (force unit) or --m (force × momentLength)');
   const at = parsePoint(flags.get('at'), 'at');
-  const num = (k: string, required: boolean) => {
+  // A component left out is 0.
+  const num = (k: string) => {
     const raw = flags.get(k);
-    if (raw === undefined) {
-      if (required) throw new UsageError(`a weld load needs --${k} (force, in the document's force unit; 0 if none)`);
-      return undefined;
-    }
+    if (raw === undefined) return undefined;
     const v = typeof raw === 'string' && raw.trim() !== '' ? Number(raw) : NaN;
     if (!Number.isFinite(v)) throw new UsageError(`--${k} needs a finite number, got "${raw === true ? '' : raw}"`);
     return v;
   };
-  const M = num('m', false);
-  return { at: [at.x, at.y], Fx: num('fx', true)!, Fy: num('fy', true)!, ...(M !== undefined ? { M } : {}) };
+  const M = num('m');
+  return { at: [at.x, at.y], Fx: num('fx') ?? 0, Fy: num('fy') ?? 0, ...(M !== undefined ? { M } : {}) };
 }
 
 export async function weldCommand(args: string[]): Promise<number> {
