@@ -41,7 +41,8 @@ export { regionMoments, polygonMoments, type RawMoments } from './moments/kernel
 export { momentsAbove } from './moments/cut';
 export * from './geometry/contour';
 export { polygonInsertAfter, polygonDeletePoint, pathSplitSegment, pathDeletePoint, pathMakeArc, pathMakeLine, type PointEdit } from './shapes/edit-points';
-export { chainPoint, chainSplitSegment, chainDeletePoint, chainMakeArc, chainMakeLine, chainReverse, chainRoundCorner, type ChainShape } from './shapes/edit-points';
+export { chainPoint, chainSplitSegment, chainDeletePoint, chainMakeArc, chainMakeLine, chainReverse, chainRoundCorner, chainRemoveSegment, type ChainShape } from './shapes/edit-points';
+export { linesAlongOutline } from './shapes/line-from-outline';
 export { contourToPath, regionToPaths, profileToOutline } from './shapes/from-region';
 export { newShapeId } from './shapes/ids';
 export { regionSegments, segmentIntersections, segmentMidpoint, segmentBox, type Segment } from './geometry/segments';

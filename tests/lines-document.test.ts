@@ -19,6 +19,10 @@ import {
   chainReverse,
   chainRoundCorner,
   chainSplitSegment,
+  chainRemoveSegment,
+  linesAlongOutline,
+  circleContour,
+  polygonContour,
   convertDocumentUnits,
   createEvaluator,
   evaluateDocument,
@@ -235,5 +239,37 @@ describe('point editing of open chains (line elements and strips)', () => {
     close(regionMoments(shapeToRegion(bent)).m00, t * Lc, 1e-12);
     expect(refused(chainRoundCorner(L_STRIP, 0, R, 'shapes[0]'))).toMatch(/^shapes\[0\]\.start: An end of an open line is not a corner/);
     expect(refused(chainRoundCorner(L_STRIP, 1, 500, 'shapes[0]'))).toMatch(/^shapes\[0\]\.segments\[0\]\.to: A radius of 500 does not fit/);
+  });
+
+  it('removes a segment: an end is dropped, an inner one splits the line in two, a weld all round is opened', () => {
+    const lengthOf = (ls: LineShape[]) => lineProperties(ls.map((l) => chainFromPath(l.start, l.segments))).length;
+    const r = chainRemoveSegment(C_GROUP, 1, 'shapes[0]');
+    if (!r.ok) throw new Error(r.message);
+    expect(r.shapes.map((x) => [x.start, x.segments.length])).toEqual([[[50, 100], 1], [[0, 0], 1]]);
+    close(lengthOf(r.shapes), 100, 1e-15);
+    const end = chainRemoveSegment(C_GROUP, 2);
+    expect(end.ok && end.shapes[0].segments).toEqual([{ to: [0, 100] }, { to: [0, 0] }]);
+    const ring: LineShape = { id: 'r', type: 'line', start: [0, 0], segments: [{ to: [40, 0] }, { to: [40, 30] }, { to: [0, 30] }, { to: [0, 0] }] };
+    const open = chainRemoveSegment(ring, 1);
+    if (!open.ok) throw new Error(open.message);
+    expect(open.shapes).toHaveLength(1);
+    expect(open.shapes[0].start).toEqual([40, 30]);
+    expect(open.shapes[0].segments.map((g) => g.to)).toEqual([[0, 30], [0, 0], [40, 0]]);
+    expect(refused(chainRemoveSegment({ ...C_GROUP, segments: [{ to: [0, 100] }] }, 0, 'shapes[0]'))).toMatch(/only segment cannot be removed/);
+  });
+
+  it('lines along an outline: a weld all round a rectangle and a ring (Blodgett Table 5, from memory)', () => {
+    const b = 40, d = 30;
+    const [rect] = linesAlongOutline([polygonContour([[0, 0], [b, 0], [b, d], [0, d]])], 'All round');
+    expect(rect.group).toBe('All round');
+    const p = lineProperties([chainFromPath(rect.start, rect.segments)]);
+    close(p.length, 2 * (b + d), 1e-15);
+    close(p.J, (b + d) ** 3 / 6, 1e-13); // Blodgett Table 5, box: Jw = (b + d)³/6
+    const r0 = 12;
+    const [ring] = linesAlongOutline([circleContour(5, 7, r0)]);
+    expect(ring.group).toBeUndefined();
+    const q = lineProperties([chainFromPath(ring.start, ring.segments)]);
+    close(q.length, 2 * Math.PI * r0, 1e-14);
+    close(q.J, 2 * Math.PI * r0 ** 3, 1e-13); // Blodgett Table 5, circle: Jw = πd³/4 = 2πr³
   });
 });

@@ -20,6 +20,8 @@ import {
   type PointEdit,
   type StripShape,
 } from '../../src';
+import { useEditor } from '../context';
+import { removeChainSegment } from '../ops/welds';
 import { NumberField } from './NumberField';
 import { PointFields, ToolButton } from './PointFields';
 import type { ShapeEdit } from './shape-edit';
@@ -49,7 +51,9 @@ function roundAll<S extends OpenChain>(s: S, radius: number, at: string): PointE
 }
 
 export function ChainFields<S extends OpenChain>({ shape, e, defaultRadius, radiusLabel }: { shape: S; e: ShapeEdit<S>; defaultRadius: number; radiusLabel: string }) {
+  const editor = useEditor();
   const [radius, setRadius] = useState(defaultRadius);
+  const [cutError, setCutError] = useState<{ row: string; message: string } | null>(null);
   const n = shape.segments.length;
   const closedChain = endsOnStart(shape);
   const setSegment = (i: number, f: (g: PathSegment) => PathSegment) => e.set((s) => ({ ...s, segments: s.segments.map((o, k) => (k === i ? f(o) : o)) }));
@@ -57,50 +61,7 @@ export function ChainFields<S extends OpenChain>({ shape, e, defaultRadius, radi
   const del = (k: number, row: string) => n > 1 && <ToolButton testid={`point-delete-${k}`} title="Delete point" label="×" onClick={() => e.edit(row, (s, at) => chainDeletePoint(s, k, at))} />;
   const round = (k: number, row: string) => <ToolButton testid={`point-round-${k}`} title={`Round this corner (radius ${radius})`} label="Round" onClick={() => e.edit(row, (s, at) => chainRoundCorner(s, k, radius, at))} />;
   return (
-    <div className="vertex-list chain-fields">
-      <PointFields
-        label="Start"
-        p={shape.start}
-        field="start"
-        units={e.units}
-        onPoint={setStart}
-        error={e.errorOn('start')}
-        tools={
-          <>
-            {closedChain && round(0, 'start')}
-            {del(0, 'start')}
-          </>
-        }
-      />
-      {shape.segments.map((g, i) => {
-        const row = `segments[${i}].to`;
-        const corner = i < n - 1;
-        return (
-          <div key={i} className="segment">
-            {g.via && <PointFields label={`Arc ${i + 1} through`} p={g.via} field={`segments[${i}].via`} units={e.units} onPoint={(q) => setSegment(i, (o) => ({ ...o, via: q }))} />}
-            <PointFields
-              label={`${g.via ? 'Arc' : 'Line'} ${i + 1} to`}
-              p={g.to}
-              field={row}
-              units={e.units}
-              onPoint={(q) => setSegment(i, (o) => ({ ...o, to: q }))}
-              error={e.errorOn(row)}
-              tools={
-                <>
-                  <ToolButton testid={`segment-split-${i}`} title="Insert a point in this segment" label="+" onClick={() => e.edit(row, (s, at) => chainSplitSegment(s, i, at))} />
-                  {g.via ? (
-                    <ToolButton testid={`segment-line-${i}`} title="Make this segment a line" label="Line" onClick={() => e.edit(row, (s, at) => chainMakeLine(s, i, at))} />
-                  ) : (
-                    <ToolButton testid={`segment-arc-${i}`} title="Make this segment an arc" label="Arc" onClick={() => e.edit(row, (s, at) => chainMakeArc(s, i, at))} />
-                  )}
-                  {corner && round(i + 1, row)}
-                  {del(i + 1, row)}
-                </>
-              }
-            />
-          </div>
-        );
-      })}
+    <>
       <div className="chain-tools">
         <NumberField label={radiusLabel} value={radius} field="corner-radius" suffix={e.units} onCommit={(v) => (v > 0 ? (setRadius(v), null) : 'The radius must be greater than 0.')} />
         <div className="chain-buttons">
@@ -117,7 +78,63 @@ export function ChainFields<S extends OpenChain>({ shape, e, defaultRadius, radi
           </span>
         )}
       </div>
-    </div>
+      <div className="vertex-list chain-fields">
+        <PointFields
+          label="Start"
+          p={shape.start}
+          field="start"
+          units={e.units}
+          onPoint={setStart}
+          error={e.errorOn('start')}
+          tools={
+            <>
+              {closedChain && round(0, 'start')}
+              {del(0, 'start')}
+            </>
+          }
+        />
+        {shape.segments.map((g, i) => {
+          const row = `segments[${i}].to`;
+          const corner = i < n - 1;
+          return (
+            <div key={i} className="segment">
+              {g.via && <PointFields label={`Arc ${i + 1} through`} p={g.via} field={`segments[${i}].via`} units={e.units} onPoint={(q) => setSegment(i, (o) => ({ ...o, via: q }))} />}
+              <PointFields
+                label={`${g.via ? 'Arc' : 'Line'} ${i + 1} to`}
+                p={g.to}
+                field={row}
+                units={e.units}
+                onPoint={(q) => setSegment(i, (o) => ({ ...o, to: q }))}
+                error={e.errorOn(row) ?? (cutError?.row === row ? cutError.message : null)}
+                tools={
+                  <>
+                    <ToolButton testid={`segment-split-${i}`} title="Insert a point in this segment" label="+" onClick={() => e.edit(row, (s, at) => chainSplitSegment(s, i, at))} />
+                    {g.via ? (
+                      <ToolButton testid={`segment-line-${i}`} title="Make this segment a line" label="Line" onClick={() => e.edit(row, (s, at) => chainMakeLine(s, i, at))} />
+                    ) : (
+                      <ToolButton testid={`segment-arc-${i}`} title="Make this segment an arc" label="Arc" onClick={() => e.edit(row, (s, at) => chainMakeArc(s, i, at))} />
+                    )}
+                    {corner && round(i + 1, row)}
+                    {n > 1 && (
+                      <ToolButton
+                        testid={`segment-remove-${i}`}
+                        title="Remove this segment: the chain is shortened, opened, or split in two there"
+                        label="Cut"
+                        onClick={() => {
+                          const err = removeChainSegment(editor.store, shape.id, i);
+                          setCutError(err ? { row, message: err } : null);
+                        }}
+                      />
+                    )}
+                    {del(i + 1, row)}
+                  </>
+                }
+              />
+            </div>
+          );
+        })}
+      </div>
+    </>
   );
 }
 

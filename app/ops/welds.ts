@@ -3,7 +3,7 @@
  * group, change or remove a load, and rename a line element's group (a load that named the old
  * group follows it when no other element keeps that name).
  */
-import { DEFAULT_LINE_GROUP, documentLineGroups, groupBoundsAbout, unionBounds, type Bounds, type SectionDocument, type Shape, type ShapeResult, type WeldLoadCase } from '../../src';
+import { allShapeIds, chainRemoveSegment, DEFAULT_LINE_GROUP, documentLineGroups, groupBoundsAbout, linesAlongOutline, newShapeId, unionBounds, type Bounds, type SectionDocument, type Shape, type ShapeResult, type WeldLoadCase } from '../../src';
 import type { CommandContext } from '../commands/registry';
 import { commit } from '../store/history';
 import { activeShapes, withActiveShapes } from '../store/section';
@@ -75,4 +75,55 @@ export function linesAndLoadsBounds(shapes: readonly ShapeResult[], doc: Section
   for (const s of shapes) if (s.chains) b = unionBounds(b, groupBoundsAbout(s.chains, 0, 0));
   for (const w of doc.weldLoads ?? []) b = unionBounds(b, { xmin: w.at[0], xmax: w.at[0], ymin: w.at[1], ymax: w.at[1] });
   return b;
+}
+
+/**
+ * Remove segment i of the line element or strip `id` (src/shapes/edit-points.ts): the chain is
+ * shortened, opened, or split in two, the second part a new shape right after the first.
+ * Returns a refusal or null.
+ */
+export function removeChainSegment(store: Store, id: string, i: number): string | null {
+  const doc = store.getState().doc;
+  const shapes = activeShapes(doc);
+  const idx = shapes.findIndex((s) => s.id === id);
+  const s = shapes[idx];
+  if (!s || (s.type !== 'line' && s.type !== 'strip')) return 'The shape no longer exists.';
+  const r = chainRemoveSegment(s, i, `shapes[${idx}]`);
+  if (!r.ok) return r.message;
+  const [first, ...rest] = r.shapes;
+  const used = allShapeIds(doc);
+  const more = rest.map((p) => {
+    const nid = newShapeId(used);
+    used.add(nid);
+    return { ...p, id: nid };
+  });
+  commit(store, withActiveShapes(doc, [...shapes.slice(0, idx), first, ...more, ...shapes.slice(idx + 1)]), [first.id, ...more.map((m) => m.id)]);
+  return null;
+}
+
+/**
+ * Line elements along the outlines of the selected area shapes (each its own outline), or of the
+ * whole section when none is selected: a weld all round, to be trimmed to the welded faces. They
+ * join the group of the selected line element, else of the last one drawn.
+ */
+export function addLinesAlongOutline(ctx: CommandContext): void {
+  const s = ctx.store.getState();
+  const doc = s.doc;
+  const shapes = activeShapes(doc);
+  const own = ctx.shapesOf(doc);
+  const picked = shapes.map((sh, i) => ({ sh, r: own[i] })).filter((x) => s.selected.includes(x.sh.id) && !x.r?.chains && x.r && !x.r.error && x.r.region.length > 0);
+  const region = picked.length ? picked.flatMap((x) => x.r.region) : ctx.evaluate(doc).region;
+  if (region.length === 0) {
+    ctx.store.setState({ notice: { kind: 'info', title: 'No outline to follow.', lines: ['Select an area shape (or draw one) first: the line elements follow its outline.'] } });
+    return;
+  }
+  const lineOf = (x: Shape | undefined) => (x?.type === 'line' ? x.group : undefined);
+  const group = lineOf(shapes.find((x) => x.type === 'line' && s.selected.includes(x.id))) ?? lineOf([...shapes].reverse().find((x) => x.type === 'line'));
+  const used = allShapeIds(doc);
+  const added = linesAlongOutline(region, group).map((l) => {
+    const id = newShapeId(used);
+    used.add(id);
+    return { ...l, id } as Shape;
+  });
+  commit(ctx.store, withActiveShapes(doc, [...shapes, ...added]), added.map((a) => a.id));
 }

@@ -10,7 +10,8 @@ import { DEFAULT_LINE_GROUP, documentLineGroups, unitFactor, type LineShape, typ
 import { useEditor, useEditorState } from '../context';
 import { ChainFields, chainHandles } from '../fields/ChainFields';
 import { useShapeEdit } from '../fields/shape-edit';
-import { setLineGroup } from '../ops/welds';
+import { addLinesAlongOutline, setLineGroup } from '../ops/welds';
+import type { Command } from '../commands/registry';
 import { activeShapes } from '../store/section';
 import { ARC_MODE_COMMAND, ChainTool } from '../tools/chain';
 import { clean, type NewShape, type ToolEnv } from '../tools/types';
@@ -19,7 +20,7 @@ import type { ShapeEditor } from './kind';
 
 class LineTool extends ChainTool {
   readonly id = 'line';
-  protected readonly noun = 'Line';
+  protected readonly noun = 'Line element';
   protected readonly closed = false;
   protected build(env: ToolEnv, start: Point, segments: PathSegment[]): NewShape {
     // A new line joins the group of the selected line, else of the last line drawn, so a weld
@@ -79,6 +80,15 @@ function LineFields({ shape }: { shape: LineShape }) {
   );
 }
 
+/** Line elements along the selected shapes' outlines (or the section's): a weld all round, to trim. */
+const ALONG_OUTLINE_COMMAND: Command = {
+  name: 'line.alongOutline',
+  label: 'Along outline',
+  group: 'tool',
+  hint: 'Line elements all round the selected shapes (or the whole section); remove the segments that are not welded',
+  perform: addLinesAlongOutline,
+};
+
 export const lineEditor: ShapeEditor<LineShape> = {
   types: ['line'],
   handles: (s) => chainHandles(s.start, s.segments),
@@ -90,7 +100,7 @@ export const lineEditor: ShapeEditor<LineShape> = {
   },
   Fields: LineFields,
   tools: [
-    { id: 'line', label: 'Line element', key: 'w', hint: 'A weld line or other line element: it encloses no area', inDrawGroup: true, subCommands: [ARC_MODE_COMMAND.name], create: () => new LineTool() },
+    { id: 'line', label: 'Line element', key: 'w', hint: 'A weld line or other line element: it encloses no area', inDrawGroup: true, subCommands: [ARC_MODE_COMMAND.name, ALONG_OUTLINE_COMMAND.name], create: () => new LineTool() },
     {
       id: 'weldPoint',
       label: 'Place weld load',
@@ -100,4 +110,5 @@ export const lineEditor: ShapeEditor<LineShape> = {
       create: () => new WeldPointTool(),
     },
   ],
+  commands: [ALONG_OUTLINE_COMMAND],
 };

@@ -238,6 +238,31 @@ export function chainRoundCorner<S extends ChainShape>(s: S, k: number, radius: 
   return checked({ ...s, start: r.path.start, segments: r.path.segments }, at);
 }
 
+/**
+ * Remove segment i of an open chain (a line element or a strip). An end segment is dropped; an
+ * inner one splits the chain in two, returned in order (the second keeps the first's id: the
+ * caller gives it a new one); a chain that ends on its start (a weld all round) is opened there
+ * and runs from the removed segment's end round to its start.
+ */
+export function chainRemoveSegment<S extends LineShape | StripShape>(s: S, i: number, at = 'shape'): { ok: true; shapes: S[] } | { ok: false; message: string } {
+  const n = s.segments.length;
+  if (!inRange(i, n)) return refuse(`${at}: there is no segment ${i + 1} (the ${noun(s)} has ${n})`);
+  if (n === 1) return refuse(`${at}.segments[0]: the only segment cannot be removed: delete the ${noun(s)} instead`);
+  const end = s.segments[n - 1].to;
+  let parts: S[];
+  if (end[0] === s.start[0] && end[1] === s.start[1]) parts = [{ ...s, start: s.segments[i].to, segments: [...s.segments.slice(i + 1), ...s.segments.slice(0, i)] }];
+  else if (i === 0) parts = [{ ...s, start: s.segments[0].to, segments: s.segments.slice(1) }];
+  else if (i === n - 1) parts = [{ ...s, segments: s.segments.slice(0, n - 1) }];
+  else parts = [{ ...s, segments: s.segments.slice(0, i) }, { ...s, start: s.segments[i].to, segments: s.segments.slice(i + 1) }];
+  const out: S[] = [];
+  for (const p of parts) {
+    const r = checked(p, at);
+    if (!r.ok) return r;
+    out.push(r.shape);
+  }
+  return { ok: true, shapes: out };
+}
+
 // The path names, kept for the path editor and its tests.
 export const pathSplitSegment: (s: PathShape, i: number, at?: string) => PointEdit<PathShape> = chainSplitSegment;
 export const pathDeletePoint: (s: PathShape, k: number, at?: string) => PointEdit<PathShape> = chainDeletePoint;
