@@ -75,7 +75,7 @@ function LineFields({ shape }: { shape: LineShape }) {
   return (
     <>
       <GroupField shape={shape} />
-      <ChainFields key={shape.id} shape={shape} e={e} defaultRadius={clean(10 * unitFactor('mm', units))} radiusLabel="Corner radius" />
+      <ChainFields key={`${shape.id}:${units}`} shape={shape} e={e} defaultRadius={clean(10 * unitFactor('mm', units))} radiusLabel="Corner radius" />
     </>
   );
 }

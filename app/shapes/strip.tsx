@@ -175,7 +175,7 @@ function StripFields({ shape }: { shape: StripShape }) {
       </label>
       <ThinWall shape={shape} />
       <p className="hint">A bend's centreline radius is its inside radius plus half the thickness.</p>
-      <ChainFields key={shape.id} shape={shape} e={e} defaultRadius={clean(1.5 * shape.thickness)} radiusLabel="Bend radius (centreline)" />
+      <ChainFields key={`${shape.id}:${e.units}`} shape={shape} e={e} defaultRadius={clean(1.5 * shape.thickness)} radiusLabel="Bend radius (centreline)" />
     </>
   );
 }

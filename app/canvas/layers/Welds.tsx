@@ -66,7 +66,12 @@ function paintLoad(ctx: CanvasRenderingContext2D, w: WeldResult, v: ViewTransfor
   ctx.arc(x, y, 3.5, 0, 2 * Math.PI);
   ctx.fill();
   const name = w.load.name ? ` ${w.load.name}` : '';
-  label(ctx, `F${w.index + 1}${name}`, x + 8, y - 8, WELD_INK.load);
+  const text = `F${w.index + 1}${name}`;
+  // Right of the point, or left of it when the canvas ends first (its width in CSS pixels).
+  ctx.font = '11px ui-sans-serif, system-ui, sans-serif';
+  const tw = ctx.measureText(text).width;
+  const right = ctx.canvas.width / (ctx.getTransform().a || 1);
+  label(ctx, text, x + 8 + tw + 6 > right ? x - 8 - tw : x + 8, y - 8, WELD_INK.load);
 }
 
 function paintCritical(ctx: CanvasRenderingContext2D, w: WeldResult, v: ViewTransform) {
