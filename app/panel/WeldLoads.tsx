@@ -48,8 +48,8 @@ function Result({ w, units }: { w: WeldResult | undefined; units: string }) {
       {r.alsoCritical.map((p, k) => (
         <At key={k} k={`${i}.also.${k}`} p={p} units={units} label="and the same at" />
       ))}
-      <Value k={`${i}.fx`} v={r.critical.fx} unit={w.units.perLength} label="its fx" />
-      <Value k={`${i}.fy`} v={r.critical.fy} unit={w.units.perLength} label="its fy" />
+      <Value k={`${i}.fx`} v={r.critical.fx} unit={w.units.perLength} label="fx at that point" />
+      <Value k={`${i}.fy`} v={r.critical.fy} unit={w.units.perLength} label="fy at that point" />
       <Value k={`${i}.M`} v={w.moment!} unit={w.units.moment} label="Moment about the centroid (+ CCW)" />
       <Value k={`${i}.direct`} v={Math.hypot(r.direct.fx, r.direct.fy)} unit={w.units.perLength} label="Direct part F/L" />
       {r.uniform && <p className="hint">The force passes through the centroid: every point carries F/L.</p>}
