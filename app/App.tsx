@@ -5,6 +5,7 @@ import { installKeyboard } from './keyboard';
 import { loadDocumentText } from './ops/document';
 import { Canvas } from './canvas/Canvas';
 import { CutPanel } from './panel/CutPanel';
+import { LineResults } from './panel/LineResults';
 import { Caution, ResultsPanel } from './panel/ResultsPanel';
 import { SelectionPanel } from './panel/SelectionPanel';
 import { ShapeList } from './panel/ShapeList';
@@ -49,6 +50,7 @@ export function App({ editor }: { editor: EditorHandle }) {
           </div>
           <div className="panel-scroll panel-results">
             <ResultsPanel />
+            <LineResults />
             <CutPanel />
           </div>
           <Caution />

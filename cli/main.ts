@@ -1,6 +1,6 @@
 /**
  * Kern's command line: `kern props FILE`, `kern cut FILE --y VALUE`, `kern report FILE ...`,
- * `kern compare BASE PROPOSED`, `kern netsection FILE --from X,Y --to X,Y`.
+ * `kern compare BASE PROPOSED`, `kern netsection FILE --from X,Y --to X,Y`, `kern weld FILE`.
  * Run with `npm run -s cli -- <command> ...`. Exit codes: 0 ok, 2 bad input or usage, 1 internal.
  */
 import { readFileSync } from 'node:fs';
@@ -40,8 +40,16 @@ const USAGE = `Usage:
                                            and after, limits with a within/beyond verdict, cautions
   kern netsection FILE --from X,Y --to X,Y [--json]
                                            gross and net length along a line, each hole or gap
+  kern weld FILE [--group NAME] [--at X,Y --fx FX --fy FY [--m M]] [--json]
+                                           elastic weld-group forces (weld as a line): the
+                                           document's weld loads, or one load given here (force
+                                           in the document's force unit, kN if unset; M + CCW in
+                                           force x momentLength); the largest force per length
 Options: --units U  (mm, cm, m, in, ft) for a DXF file that does not state its units
-         --variant NAME  (props, cut, inertia) a proposal of the document instead of its baseline`;
+         --variant NAME  (props, cut, inertia, weld) a proposal of the document instead of its baseline
+Line elements: props gives each line group (length, centroid, Ix, Iy, Ixy, J per unit
+thickness; JSON "lines" and "line_groups"); a document of line elements only has its area
+properties absent ("area_properties": "absent") and exits 0.`;
 
 export class UsageError extends Error {}
 
@@ -105,8 +113,13 @@ function err(s: string): void {
   process.stderr.write(s.endsWith('\n') ? s : s + '\n');
 }
 
-/** Read, validate and evaluate a file: its baseline, or the proposal named by --variant. */
-async function evaluateFile(file: string | undefined, flags: Parsed['flags']) {
+/**
+ * Read, validate and evaluate a file: its baseline, or the proposal named by --variant. With
+ * `linesOnly`, a section of line elements only (no area) is not an error: its props are null.
+ */
+async function evaluateFile(file: string | undefined, flags: Parsed['flags']): Promise<{ doc: SectionDocument; ev: Evaluation; props: SectionProperties; warnings: string[] } | null>;
+async function evaluateFile(file: string | undefined, flags: Parsed['flags'], linesOnly: true): Promise<{ doc: SectionDocument; ev: Evaluation; props: SectionProperties | null; warnings: string[] } | null>;
+async function evaluateFile(file: string | undefined, flags: Parsed['flags'], linesOnly = false) {
   if (!file) throw new UsageError('missing FILE');
   const units = flags.get('units');
   const variant = flags.get('variant');
@@ -128,7 +141,7 @@ async function evaluateFile(file: string | undefined, flags: Parsed['flags']) {
     }
   }
   const ev = evaluateDocument(doc);
-  if (!ev.props) {
+  if (!ev.props && !(linesOnly && ev.lines.length > 0)) {
     err(`${file}: ${ev.message ?? 'the section has no area'}`);
     for (const w of ev.warnings) err(`  warning: ${formatIssue(w)}`);
     return null;
@@ -142,18 +155,24 @@ export async function main(argv: string[]): Promise<number> {
   try {
     if (cmd === 'props') {
       const a = parseArgs(rest, ['units', 'variant']);
-      const r = await evaluateFile(a.positional[0], a.flags);
+      const r = await evaluateFile(a.positional[0], a.flags, true);
       if (!r) return 2;
+      const lines = await import('./lines');
+      const props = r.props;
       if (a.flags.has('json')) {
-        out(JSON.stringify(propsJson(r.doc, r.ev, r.props, r.warnings), null, 2));
+        const area = props ? propsJson(r.doc, r.ev, props, r.warnings) : { units: r.doc.units, area_properties: 'absent', message: r.ev.message, warnings: [...r.warnings, ...r.ev.warnings.map(formatIssue)] };
+        out(JSON.stringify({ ...area, ...lines.linesJson(r.ev) }, null, 2));
         return 0;
       }
-      const rows: [string, string, string][] = PROPERTY_CATALOG.map((info) => {
-        const f = formatProperty(info, r.props, r.doc.units);
-        return [info.label, f.text, f.unit];
-      });
       out(`${r.doc.name ?? a.positional[0]} (${r.doc.units})`);
-      out(table(rows));
+      if (props) {
+        const rows: [string, string, string][] = PROPERTY_CATALOG.map((info) => {
+          const f = formatProperty(info, props, r.doc.units);
+          return [info.label, f.text, f.unit];
+        });
+        out(table(rows));
+      } else out(`Area properties: absent. ${r.ev.message ?? ''}`.trim());
+      if (r.ev.lines.length) out(lines.linesTable(r.ev, r.doc.units));
       for (const w of [...r.warnings, ...r.ev.warnings.map(formatIssue)]) out(`warning: ${w}`);
       out(CAUTION_TEXT);
       return 0;
@@ -205,6 +224,7 @@ export async function main(argv: string[]): Promise<number> {
     }
     if (cmd === 'compare') return await (await import('./compare')).compareCommand(rest);
     if (cmd === 'netsection') return await (await import('./netsection')).netsectionCommand(rest);
+    if (cmd === 'weld') return await (await import('./lines')).weldCommand(rest);
     if (cmd === undefined || cmd === 'help' || cmd === '--help' || cmd === '-h') {
       out(USAGE);
       return cmd === undefined ? 2 : 0;

@@ -118,7 +118,8 @@ export async function reportCommand(args: string[]): Promise<number> {
   const evaluation = evaluateDocument(loaded.doc);
   for (const w of evaluation.warnings) err(`warning: ${formatIssue(w)}`);
   // An empty or degenerate section still gets its report: a page that says so, with no figure.
-  if (!evaluation.props) err(`warning: ${file}: ${(evaluation.message ?? 'the section has no area').replace(/\.$/, '')}; the report says so and has no figure`);
+  if (!evaluation.props && evaluation.lines.length > 0) err(`note: ${file}: line elements only; the report gives the line groups, and says that the area properties are absent`);
+  else if (!evaluation.props) err(`warning: ${file}: ${(evaluation.message ?? 'the section has no area').replace(/\.$/, '')}; the report says so and has no figure`);
   const html = renderReportHtml({ doc: loaded.doc, evaluation, cut, generated: new Date().toISOString().replace(/\.\d+Z$/, 'Z') });
   try {
     if (out) writeFileSync(out, html);

@@ -13,7 +13,8 @@
  * Two more results come with the section when the document has them: line elements, which stay
  * out of the booleans and form line groups (src/lines/), and materials, where the same layers are
  * composed per material by document order (src/materials/) for the centre of gravity and the
- * transformed section. Both reuse their work across calls in the same way.
+ * transformed section. Both reuse their work across calls in the same way. The document's weld
+ * loads are then evaluated on the line groups (src/weld-results.ts).
  */
 import { booleanRegions, resolveOutline } from './boolean';
 import type { Region } from './geometry/contour';
@@ -27,7 +28,11 @@ import { kindOf } from './shapes/registry';
 import { mayCrossItself, shapeContours } from './shapes/ops';
 import type { Issue } from './document/validate';
 import type { Op, SectionDocument, Shape } from './document/types';
+import { createWeldStage, type WeldResult } from './weld-results';
 import { SectionError, sectionProperties, type SectionProperties } from './properties/section';
+
+/** The message of a section that holds line elements only: its area results are absent, not in error. */
+export const LINES_ONLY_MESSAGE = 'Line elements only: there is no area, so the area properties are absent. The line groups have their own properties.';
 
 export interface ShapeResult {
   id: string;
@@ -41,6 +46,8 @@ export interface ShapeResult {
 export interface LineGroupResult {
   group: string;
   ids: string[];
+  /** The group's exact chains, in the order of its elements. */
+  chains: LineChain[];
   props: LineProperties | null;
   message: string | null;
 }
@@ -62,6 +69,8 @@ export interface Evaluation {
   lines: LineGroupResult[];
   /** Present when the document has materials. */
   materials: MaterialsResult | null;
+  /** The document's weld loads on its line groups (src/weld-results.ts); empty without them. */
+  welds: WeldResult[];
 }
 
 interface CachedShape {
@@ -153,10 +162,10 @@ function createLineStage() {
       if (prev && prev.chains.length === g.chains.length && prev.chains.every((c, k) => c === g.chains[k]) && prev.result.ids.join() === g.ids.join()) result = prev.result;
       else {
         try {
-          result = { group, ids: g.ids, props: lineProperties(g.chains), message: null };
+          result = { group, ids: g.ids, chains: g.chains, props: lineProperties(g.chains), message: null };
         } catch (e) {
           if (!(e instanceof LineError)) throw e;
-          result = { group, ids: g.ids, props: null, message: e.message };
+          result = { group, ids: g.ids, chains: g.chains, props: null, message: e.message };
         }
       }
       next.set(group, { chains: g.chains, result });
@@ -197,9 +206,10 @@ export function createEvaluator(): Evaluator {
   let shapesDoc: SectionDocument | null = null;
   let shapesList: ShapeResult[] = [];
   let lastRegion: Region | null = null;
-  let lastProps: { region: Region; areaShapes: boolean; props: SectionProperties | null; message: string | null } | null = null;
+  let lastProps: { region: Region; areaShapes: boolean; empty: boolean; props: SectionProperties | null; message: string | null } | null = null;
   const lineStage = createLineStage();
   const materialStage = createMaterialStage();
+  const weldStage = createWeldStage();
 
   function evalRun(k: number, before: Region, run: Run): Region {
     const prev = runCache[k];
@@ -274,12 +284,12 @@ export function createEvaluator(): Evaluator {
         region = evalRun(k, region, run);
       });
       runCache.length = runs.length;
-      if (region !== lastRegion || !lastProps || lastProps.areaShapes !== areaShapes > 0) {
+      if (region !== lastRegion || !lastProps || lastProps.areaShapes !== areaShapes > 0 || lastProps.empty !== (doc.shapes.length === 0)) {
         lastRegion = region;
         let props: SectionProperties | null = null;
         let message: string | null = null;
         if (doc.shapes.length === 0) message = 'The section is empty: add a shape to see its properties.';
-        else if (areaShapes === 0) message = 'There are line elements only: the section has no area, so there are no area properties.';
+        else if (areaShapes === 0) message = LINES_ONLY_MESSAGE;
         else {
           try {
             props = sectionProperties(region);
@@ -288,16 +298,18 @@ export function createEvaluator(): Evaluator {
             message = e.message;
           }
         }
-        lastProps = { region, areaShapes: areaShapes > 0, props, message };
+        lastProps = { region, areaShapes: areaShapes > 0, empty: doc.shapes.length === 0, props, message };
       }
+      const lines = lineStage(elements);
       return {
         region,
         shapes: shapes(doc),
         props: lastProps.props,
         message: lastProps.message,
         warnings,
-        lines: lineStage(elements),
+        lines,
         materials: lastProps.props ? materialStage(doc, layers, region) : null,
+        welds: weldStage(doc, lines),
       };
     },
   };

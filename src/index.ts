@@ -18,6 +18,9 @@ export { profileToPaths, ProfileError, type ProfilePaths } from './shapes/profil
 export { validateProfile, PROFILE_DEFAULTS, PROFILE_FIELDS, type ProfileField, type ProfileIssue } from './shapes/profile/fields';
 export type { ProfileType, ProfileDimensions } from './shapes/profile/types';
 export { createEvaluator, evaluateDocument, type Evaluation, type Evaluator, type ShapeResult, type LineGroupResult, type MaterialsResult } from './evaluate';
+export { LINES_ONLY_MESSAGE } from './evaluate';
+export { weldResult, weldUnits, createWeldStage, type WeldResult, type WeldUnits, type WeldGroupInput } from './weld-results';
+export { validateWeldLoads, documentLineGroups } from './document/weld-loads';
 export {
   sectionProperties,
   cutSection,
@@ -38,6 +41,8 @@ export { regionMoments, polygonMoments, type RawMoments } from './moments/kernel
 export { momentsAbove } from './moments/cut';
 export * from './geometry/contour';
 export { polygonInsertAfter, polygonDeletePoint, pathSplitSegment, pathDeletePoint, pathMakeArc, pathMakeLine, type PointEdit } from './shapes/edit-points';
+export { chainPoint, chainSplitSegment, chainDeletePoint, chainMakeArc, chainMakeLine, chainReverse, chainRoundCorner, chainRemoveSegment, type ChainShape } from './shapes/edit-points';
+export { linesAlongOutline } from './shapes/line-from-outline';
 export { contourToPath, regionToPaths, profileToOutline } from './shapes/from-region';
 export { newShapeId } from './shapes/ids';
 export { regionSegments, segmentIntersections, segmentMidpoint, segmentBox, type Segment } from './geometry/segments';

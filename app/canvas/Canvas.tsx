@@ -14,6 +14,7 @@ import { InteractionLayer } from './layers/Interaction';
 import { OverlayLayer } from './layers/Overlays';
 import { ProblemLayer } from './layers/Problems';
 import { ShapesLayer } from './layers/Shapes';
+import { WeldLayer } from './layers/Welds';
 
 function isField(t: EventTarget | null): boolean {
   return t instanceof HTMLInputElement || t instanceof HTMLTextAreaElement || t instanceof HTMLSelectElement;
@@ -107,6 +108,7 @@ export function Canvas() {
         <Layer listening={false}>
           <ShapesLayer />
           <OverlayLayer />
+          <WeldLayer />
           <ProblemLayer />
           <InteractionLayer />
         </Layer>

@@ -3,10 +3,15 @@ import type { SectionProperties } from '../../src';
 import type { CommandContext } from '../commands/registry';
 import type { EditorState, Overlays } from '../store/store';
 import { evaluationBounds, fitBounds } from '../view';
+import { unionBounds } from '../../src';
+import { activeSection } from '../store/section';
+import { linesAndLoadsBounds } from './welds';
 
 export function fitView(ctx: CommandContext): void {
   const s = ctx.store.getState();
-  const b = evaluationBounds({ shapes: ctx.shapesOf(s.doc) });
+  const shapes = ctx.shapesOf(s.doc);
+  // Line elements and weld loads have no area: their extent is added to the outlines'.
+  const b = unionBounds(evaluationBounds({ shapes }), linesAndLoadsBounds(shapes, activeSection(s.doc)));
   if (!b) return;
   ctx.store.setState(fitBounds(b, s.width, s.height));
 }

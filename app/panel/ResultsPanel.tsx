@@ -68,7 +68,8 @@ export function ResultsPanel() {
         <UnitSwitch />
       </div>
       {ev.message && (
-        <p className="result-message" data-testid="result-message">
+        // Line elements only: the area results are absent, which is not an error.
+        <p className={`result-message${!ev.props && ev.lines.length ? ' absent' : ''}`} data-testid="result-message" data-absent={!ev.props && ev.lines.length ? 'area' : undefined}>
           {ev.message}
         </p>
       )}

@@ -19,7 +19,7 @@ self.onmessage = (e: MessageEvent<WorkerRequest>) => {
   let res: WorkerResponse;
   try {
     const ev = evaluator.evaluate(doc);
-    res = { seq: req.seq, ok: true, region: ev.region, props: ev.props, message: ev.message, warnings: ev.warnings, lines: ev.lines, materials: ev.materials, ms: performance.now() - t };
+    res = { seq: req.seq, ok: true, region: ev.region, props: ev.props, message: ev.message, warnings: ev.warnings, lines: ev.lines, materials: ev.materials, welds: ev.welds, ms: performance.now() - t };
   } catch (err) {
     res = { seq: req.seq, ok: false, error: err instanceof Error ? err.message : String(err), ms: performance.now() - t };
   }

@@ -133,7 +133,7 @@ export function createLiveResults(store: EditorStore, opts: { schedule?: Schedul
       // Only the answer to the request in flight counts (the start-up answer has none).
       if (!job || res.seq !== job.seq) return;
       let evaluation: Evaluation;
-      if (res.ok) evaluation = { region: res.region, props: res.props, message: res.message, warnings: res.warnings, lines: res.lines, materials: res.materials, shapes: shapesOf(job.doc) };
+      if (res.ok) evaluation = { region: res.region, props: res.props, message: res.message, warnings: res.warnings, lines: res.lines, materials: res.materials, welds: res.welds, shapes: shapesOf(job.doc) };
       else evaluation = evaluateSync(job.doc); // the worker failed: fall back on the main thread
       results.setState({ doc: job.doc, evaluation, lastMs: res.ms, count: results.getState().count + 1 });
       inFlight = null;

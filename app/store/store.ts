@@ -7,7 +7,7 @@
  * by document identity (app/store/evaluation.ts).
  */
 import { createStore, type StoreApi } from 'zustand/vanilla';
-import type { ProfileType, SectionDocument } from '../../src';
+import type { ProfileType, SectionDocument, StripCornerKind, Units } from '../../src';
 
 export interface DocumentSlice {
   /** The document on screen: during a gesture this is the preview. */
@@ -44,6 +44,10 @@ export interface ToolSlice {
   snap: SnapSettings;
   /** Arc mode of the chain tools (path, line, strip): the next two points are (through, end) of a three-point arc. */
   pathArc: boolean;
+  /** The weld load whose point the weld-point tool places (index into `weldLoads`). */
+  weldTarget: number | null;
+  /** The next strip's thickness (in `units`; null: the last strip's, else 5 mm) and corners. */
+  stripDefaults: { thickness: number | null; units: Units; corners: StripCornerKind };
 }
 
 export interface Overlays {
@@ -95,6 +99,8 @@ export function createEditorStore(doc: SectionDocument): EditorStore {
     profileType: 'i-beam',
     snap: { grid: true, vertex: true, midpoint: true, centre: true, intersection: true, ortho: false },
     pathArc: false,
+    weldTarget: null,
+    stripDefaults: { thickness: null, units: doc.units, corners: 'mitre' },
     // view slice
     scale: 2,
     ox: 400,

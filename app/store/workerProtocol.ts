@@ -1,5 +1,5 @@
 /** Messages between the editor and the evaluation worker. */
-import type { Issue, LineGroupResult, MaterialsResult, Region, SectionDocument, SectionProperties, Shape } from '../../src';
+import type { Issue, LineGroupResult, MaterialsResult, Region, SectionDocument, SectionProperties, Shape, WeldResult } from '../../src';
 
 export interface WorkerRequest {
   seq: number;
@@ -19,6 +19,7 @@ export type WorkerResponse =
       warnings: Issue[];
       lines: LineGroupResult[];
       materials: MaterialsResult | null;
+      welds: WeldResult[];
       ms: number;
     }
   | { seq: number; ok: false; error: string; ms: number };

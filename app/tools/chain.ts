@@ -40,11 +40,11 @@ export abstract class ChainTool extends DrawingTool {
   }
   prompt(env: ToolEnv) {
     if (!this.start) return `${this.noun}: start point (${HINT.firstPoint})`;
-    if (this.via) return `${this.noun} arc: end point`;
+    if (this.via) return `${this.noun}, arc segment: end point`;
     const finish = this.closed ? 'Enter or the start point closes' : 'Enter finishes';
     return this.arcMode(env)
-      ? `${this.noun} arc: a point the arc passes through (A switches to lines)`
-      : `${this.noun} line: next point (${HINT.nextPoint}; an arc by ${HINT.arc}); A switches to arcs; ${finish}`;
+      ? `${this.noun}, arc segment: a point the arc passes through (A switches to lines)`
+      : `${this.noun}, line segment: next point (${HINT.nextPoint}; an arc by ${HINT.arc}); A switches to arcs; ${finish}`;
   }
   last() {
     if (this.via) return this.via;

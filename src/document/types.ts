@@ -76,6 +76,10 @@ import type { Material } from '../materials/material';
 import type { Loads } from '../materials/stress';
 
 export { STRESS_UNITS, FORCE_UNITS, type StressUnit, type ForceUnit } from '../materials/units';
+
+/** A force on a line group (a weld group) for the elastic weld-group method (src/document/weld-loads.ts). */
+export type { WeldLoad as WeldLoadCase } from './weld-loads';
+import type { WeldLoad as WeldLoadCase } from './weld-loads';
 import type { ForceUnit, StressUnit } from '../materials/units';
 
 export interface SectionDocument {
@@ -104,6 +108,8 @@ export interface SectionDocument {
   /** Length unit of the moments Mx and My (force × this); the document's unit when absent. */
   momentLength?: Units;
   loads?: Loads;
+  /** Forces on line groups (weld groups): force in `forceUnit`, moment in force × `momentLength`. */
+  weldLoads?: WeldLoadCase[];
   /** The checker's fields. */
   revisions?: Revision[];
   notes?: string;

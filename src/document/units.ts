@@ -23,5 +23,10 @@ export function convertDocumentUnits(doc: SectionDocument, units: Units): Sectio
     const { Mx, My } = doc.loads;
     out.loads = { ...doc.loads, ...(Mx !== undefined ? { Mx: Mx * k } : {}), ...(My !== undefined ? { My: My * k } : {}) };
   }
+  // Weld loads: the point where the force acts is a length; the moment follows as the loads' do.
+  if (doc.weldLoads) {
+    const mk = doc.momentLength === undefined ? k : 1;
+    out.weldLoads = doc.weldLoads.map((w) => ({ ...w, at: [w.at[0] * k, w.at[1] * k], ...(w.M !== undefined ? { M: w.M * mk } : {}) }));
+  }
   return out;
 }

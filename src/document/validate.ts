@@ -7,6 +7,7 @@ import { newShapeId } from '../shapes/ids';
 import { validateShape } from '../shapes/validate';
 import { validateCheckerFields, validateLimits, validateMaterials } from './fields';
 import { validateVariants } from './variants';
+import { validateWeldLoads } from './weld-loads';
 import { migrate, KNOWN_VERSIONS } from './migrate';
 import { CURRENT_VERSION, FORMAT, UNITS, type SectionDocument } from './types';
 
@@ -71,6 +72,7 @@ export function validateDocument(value: unknown): DocResult {
   validateMaterials(doc, allShapes, errors);
   validateLimits(doc, errors);
   validateCheckerFields(doc, errors);
+  validateWeldLoads(doc, errors, warnings);
   if (doc.name !== undefined && typeof doc.name !== 'string') errors.push({ path: 'name', message: 'name must be text' });
   if (doc.title !== undefined) {
     if (!isObj(doc.title)) errors.push({ path: 'title', message: 'title must be an object of text fields' });

@@ -36,3 +36,4 @@ export { stripOutline, type StripCorners } from './strip-outline';
 export { chainSegments, chainPolyline } from './chain-geometry';
 export { thinWallComparison, type ThinWallComparison, type AreaValues } from './thin-wall';
 export { WELD_GROUP_CAUTION, LINE_GROUP_CAUTION, THIN_WALL_CAUTION } from './cautions';
+export { LINE_PROPERTY_CATALOG, formatLineProperty, linePropertiesJson, type LinePropertyInfo, type LineJson } from './line-catalog';

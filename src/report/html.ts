@@ -26,6 +26,7 @@ import { checkerFields, renderCheckerBlock } from './checker';
 import { escapeHtml } from './escape';
 import { renderSectionFigure } from './figure';
 import { renderQbDiagram } from './qb-chart';
+import { renderLineReport } from './lines';
 import { frameNotes, listingSummary, paramsText, renderScheduleTables, shapeSchedule } from './schedule';
 
 export interface ReportInput {
@@ -261,7 +262,9 @@ export function renderReportHtml(input: ReportInput): string {
     const why =
       doc.shapes.length === 0
         ? 'The section is empty: the document has no shapes, so there is nothing to draw and there are no properties.'
-        : `The section has no area, so there is nothing to draw and there are no properties. ${evaluation.message ?? ''}`.trim();
+        : evaluation.lines.length > 0 && doc.shapes.every((s) => s.type === 'line')
+          ? 'The document holds line elements only: there is no area, so the area properties are absent (this is not an error). The line groups, with their own figure and table, follow.'
+          : `The section has no area, so there is nothing to draw and there are no properties. ${evaluation.message ?? ''}`.trim();
     sectionBlock = `<section class="block empty-section" data-empty="true"><h2>Section</h2><p class="empty-message">${escapeHtml(why)}</p></section>`;
   }
 
@@ -271,6 +274,8 @@ export function renderReportHtml(input: ReportInput): string {
   if (notes.length > 0) body.push(`<section class="block"><h2>Notes from the evaluation</h2><ul class="small">${notes.join('')}</ul></section>`);
   if (props) body.push(propertyTable(input));
   if (props && cut) body.push(renderQbDiagram(evaluation.region, props, units, cut));
+  const lines = renderLineReport(input);
+  if (lines) body.push(lines);
   body.push(
     `<section class="block method"><h2>Method</h2><div class="method-cols"><p class="small">${escapeHtml(METHOD_NOTE)}</p><p class="small">${escapeHtml(CONVENTIONS)}</p><p class="small" data-note="numbers">${escapeHtml(NUMBER_NOTE)}</p><p class="small">${escapeHtml(QB_NOTE)}</p></div></section>`,
     `<p class="caution">${escapeHtml(CAUTION_TEXT)}</p>`,

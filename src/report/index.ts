@@ -18,3 +18,4 @@ export { shapeSchedule, renderScheduleTables, type ShapeSchedule, type ScheduleT
 export { checkerFields, renderCheckerBlock, type CheckerFields, type RevisionEntry } from './checker';
 export { chooseScale, STANDARD_SCALES, type DrawingScale } from './scale';
 export { escapeHtml } from './escape';
+export { renderLineReport, renderLineFigure, chainPathData, type LineReportInput } from './lines';

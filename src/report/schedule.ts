@@ -43,7 +43,8 @@ export function shapeSchedule(shape: Shape, index: number, size: number): ShapeS
   const name = shapeDisplayName(shape, index);
   const own = kind.schedule(shape, scheduleFormat(size));
   const table = own.table ? { ...own.table, title: `${name}: ${own.table.title}` } : null;
-  return { index, name, kind: kind.label, operation: OP_TEXT[shape.op ?? 'add'], ...own, table };
+  // A line element takes no operation: it stays out of the area booleans.
+  return { index, name, kind: kind.label, operation: kind.line ? 'none (line)' : OP_TEXT[shape.op ?? 'add'], ...own, table };
 }
 
 // ---------------------------------------------------------------------------------------------

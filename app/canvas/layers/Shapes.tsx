@@ -54,13 +54,15 @@ export function ShapesLayer() {
         traceRegion(ctx, region, v);
         ctx.fillStyle = INK.resultFill;
         ctx.fill('nonzero');
-        shapes.forEach((s, i) => (s.chains ? paintLine(ctx, s.chains, v, !!s.error) : paintShape(ctx, s.region, section.shapes[i]?.op ?? 'add', v, !!s.error)));
+        shapes.forEach((s, i) => !s.chains && paintShape(ctx, s.region, section.shapes[i]?.op ?? 'add', v, !!s.error));
         ctx.beginPath();
         traceRegion(ctx, region, v);
         ctx.strokeStyle = INK.resultLine;
         ctx.lineWidth = 1.6;
         ctx.lineJoin = 'round';
         ctx.stroke();
+        // Line elements last: a weld along an edge of the section stays visible on that edge.
+        shapes.forEach((s) => s.chains && paintLine(ctx, s.chains, v, !!s.error));
       }}
     />
   );
