@@ -40,6 +40,7 @@ const USAGE = `Usage:
                                            and after, limits with a within/beyond verdict, cautions
   kern netsection FILE --from X,Y --to X,Y [--json]
                                            gross and net length along a line, each hole or gap
+  kern schema [--version 1|2]              JSON Schema of the section document, for editors
 Options: --units U  (mm, cm, m, in, ft) for a DXF file that does not state its units
          --variant NAME  (props, cut, inertia) a proposal of the document instead of its baseline`;
 
@@ -205,6 +206,7 @@ export async function main(argv: string[]): Promise<number> {
     }
     if (cmd === 'compare') return await (await import('./compare')).compareCommand(rest);
     if (cmd === 'netsection') return await (await import('./netsection')).netsectionCommand(rest);
+    if (cmd === 'schema') return (await import('./schema')).schemaCommand(rest);
     if (cmd === undefined || cmd === 'help' || cmd === '--help' || cmd === '-h') {
       out(USAGE);
       return cmd === undefined ? 2 : 0;
