@@ -89,6 +89,20 @@ export class SchemaValidator {
     return s;
   }
 
+  /** Index of the alternative whose `const` property the value matches, or -1. */
+  private discriminated(alternatives: Schema[], v: unknown): number {
+    if (!isObject(v)) return -1;
+    const props = alternatives.map((a) => {
+      const s = typeof a === 'object' && typeof a.$ref === 'string' ? this.resolve(a.$ref) : a;
+      return typeof s === 'object' && isObject(s.properties) ? (s.properties as Record<string, unknown>) : {};
+    });
+    for (const key of Object.keys(v)) {
+      const hit = props.findIndex((p) => isObject(p[key]) && 'const' in (p[key] as object) && jsonEqual((p[key] as { const: unknown }).const, v[key]));
+      if (hit >= 0 && props.every((p) => isObject(p[key]) && 'const' in (p[key] as object))) return hit;
+    }
+    return -1;
+  }
+
   validate(instance: unknown): SchemaError[] {
     return this.check(this.root, instance, '');
   }
@@ -141,8 +155,10 @@ export class SchemaValidator {
       const results = (s.oneOf as Schema[]).map((sub) => this.check(sub, v, path));
       const passing = results.filter((r) => r.length === 0).length;
       if (passing === 0) {
-        // Report the alternative that came closest (fewest errors), as editors do.
-        const best = results.reduce((a, b) => (b.length < a.length ? b : a));
+        // Report the alternative the value names by a discriminating const (a shape's "type"),
+        // else the one that came closest (fewest errors), as editors do. Messages only.
+        const named = this.discriminated(s.oneOf as Schema[], v);
+        const best = named >= 0 ? results[named] : results.reduce((a, b) => (b.length < a.length ? b : a));
         fail(`matches none of the ${results.length} allowed forms (oneOf); closest: ${best.map((e) => `${e.path || '/'} ${e.message}`).join('; ')}`);
       } else if (passing > 1) fail(`matches ${passing} of the allowed forms (oneOf), exactly one is allowed`);
     }
