@@ -25,6 +25,7 @@ import { clean, type NewShape, type ToolEnv } from '../tools/types';
 import { CommandButton } from '../fields/CommandButton';
 import type { ShapeEditor } from './kind';
 import { HINT } from '../input-syntax';
+import { revealShapes } from '../reveal';
 
 function rectFrom(a: Point, b: Point): NewShape {
   return { type: 'rectangle', at: [Math.min(a[0], b[0]), Math.min(a[1], b[1])], width: clean(Math.abs(b[0] - a[0])), height: clean(Math.abs(b[1] - a[1])) };
@@ -88,7 +89,8 @@ class ProfileTool extends DrawingTool {
   }
   protected accept(env: ToolEnv, p: Point): string | null {
     const s = env.store.getState();
-    env.addShape(defaultProfile(s.profileType, s.doc.units, p));
+    // A profile placed near the edge, or at a typed point out of view, is brought into view.
+    if (env.addShape(defaultProfile(s.profileType, s.doc.units, p))) revealShapes({ store: env.store, shapesOf: env.results.shapesOf }, env.store.getState().selected);
     return null;
   }
   protected preview(env: ToolEnv, p: Point) {
