@@ -1,0 +1,43 @@
+/**
+ * Opening an example from the shelf: fetch its file from beside the app (public/examples/, served
+ * with it; no network beyond the app's own origin), then open it like a file the user picked, so
+ * it replaces the section in one undo step and the view fits it.
+ */
+import type { Command, CommandContext } from '../commands/registry';
+import { loadDocumentText } from '../ops/document';
+import { notify } from '../ops/notice';
+import { EXAMPLE_SHELF, exampleUrl } from './shelf';
+
+/** Reads an example's text (the browser's fetch; tests may pass another reader). */
+export type ExampleReader = (file: string) => Promise<string>;
+
+const fetchExample: ExampleReader = async (file) => {
+  const r = await fetch(exampleUrl(file, document.baseURI));
+  if (!r.ok) throw new Error(`the server answered ${r.status} ${r.statusText}`.trim());
+  return r.text();
+};
+
+export async function openExample(ctx: CommandContext, file: string, read: ExampleReader = fetchExample): Promise<boolean> {
+  const entry = EXAMPLE_SHELF.find((e) => e.file === file);
+  if (!entry) {
+    notify(ctx, 'error', `There is no example "${file}".`, [`The shelf holds ${EXAMPLE_SHELF.map((e) => e.file).join(', ')}.`]);
+    return false;
+  }
+  let text: string;
+  try {
+    text = await read(file);
+  } catch (e) {
+    notify(ctx, 'error', `The example “${entry.title}” could not be loaded.`, [String((e as Error).message ?? e), 'Your current section is unchanged.']);
+    return false;
+  }
+  return loadDocumentText(ctx, file, text);
+}
+
+/** `file.example` with the example's file name: open it from the shelf. */
+export const OPEN_EXAMPLE_COMMAND: Command = {
+  name: 'file.example',
+  label: 'Open an example',
+  group: 'file',
+  hint: 'Open one of the example sections (replaces the section; Undo brings it back)',
+  perform: (c, arg) => void openExample(c, String(arg)),
+};
