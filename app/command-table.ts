@@ -91,7 +91,7 @@ function registerEdits(r: CommandRegistry): void {
   r.register({ name: 'order.last', label: 'Last in order', group: 'order', keys: ['shift+]', 'shift+}'], enabled: hasSelection, perform: (c) => reorderSelection(c, 'front') });
   r.register({ name: 'order.first', label: 'First in order', group: 'order', keys: ['shift+[', 'shift+{'], enabled: hasSelection, perform: (c) => reorderSelection(c, 'back') });
   for (const op of OPS) r.register({ name: `op.${op}`, label: OP_LABEL[op], group: 'op', keys: [OP_KEY[op]], enabled: hasSelection, perform: (c) => setSelectionOp(c, op) });
-  r.register({ name: 'shape.toOutline', label: 'Convert to outline', group: 'shape', enabled: (c) => selectedShapes(c.store.getState()).some(isProfile), perform: convertSelectionToOutline });
+  r.register({ name: 'shape.toOutline', label: 'Turn into a path', group: 'shape', hint: 'Replace the selected profile by a path of its exact lines and arcs, to edit point by point', enabled: (c) => selectedShapes(c.store.getState()).some(isProfile), perform: convertSelectionToOutline });
   r.register({ name: 'shape.merge', label: 'Merge into one outline', group: 'shape', keys: ['mod+m'], enabled: hasSelection, perform: mergeSelection });
   r.register({
     name: 'shape.roundCorner',

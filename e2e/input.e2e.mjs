@@ -8,7 +8,7 @@
 import assert from 'node:assert/strict';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { clickWorld, close, doc, docShapes, focusCanvas, open, pagePoint, prop, settle, typeInput } from './helpers.mjs';
+import { clickWorld, close, doc, docShapes, focusCanvas, open, prop, settle } from './helpers.mjs';
 
 const PI = Math.PI;
 const HERE = path.dirname(fileURLToPath(import.meta.url));

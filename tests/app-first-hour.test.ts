@@ -153,6 +153,8 @@ describe('Open… and the examples', () => {
       expect(await openExample(e.ctx, file, read)).toBe(true);
       expect(e.store.getState().past.length).toBe(k + 1);
     }
+    // The schema link of the shelf's files (relative to public/examples/) is not carried into the app's copy.
+    expect('$schema' in e.store.getState().doc).toBe(false);
     expect(await openExample(e.ctx, 'nope.json', read)).toBe(false);
     expect(e.store.getState().notice?.title).toMatch(/no example "nope.json"/);
   });

@@ -30,7 +30,23 @@ export async function openExample(ctx: CommandContext, file: string, read: Examp
     notify(ctx, 'error', `The example “${entry.title}” could not be loaded.`, [String((e as Error).message ?? e), 'Your current section is unchanged.']);
     return false;
   }
-  return loadDocumentText(ctx, file, text);
+  return loadDocumentText(ctx, file, withoutSchemaLink(text));
+}
+
+/**
+ * The examples name their schema by a path relative to public/examples/ (for editors); a copy
+ * saved from the app lands elsewhere, where that path would point nowhere, so it is left out.
+ */
+function withoutSchemaLink(text: string): string {
+  try {
+    const v = JSON.parse(text) as unknown;
+    if (typeof v !== 'object' || v === null || Array.isArray(v) || !('$schema' in v)) return text;
+    const { $schema: _link, ...rest } = v as Record<string, unknown>;
+    void _link;
+    return JSON.stringify(rest);
+  } catch {
+    return text; // the document reader reports what is wrong with it
+  }
 }
 
 /** `file.example` with the example's file name: open it from the shelf. */

@@ -3,7 +3,7 @@
  * the corner from the list or by clicking its handle on the canvas, type the radius, Round. The
  * corner becomes an exact tangent arc in one undo step (app/ops/round-corner.ts).
  */
-import { useEffect, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { formatNumber, type Shape } from '../../src';
 import { useEditor, useEditorState, useTransient } from '../context';
 import { evaluateExpression } from '../expr';
@@ -18,9 +18,13 @@ export function RoundCorner({ shape }: { shape: Shape }) {
   const [corner, setCorner] = useState<number>(corners[0]?.index ?? 0);
   const [radius, setRadius] = useState('');
   const [err, setErr] = useState<string | null>(null);
-  // A click on a corner's handle picks it here.
+  const box = useRef<HTMLDivElement>(null);
+  // A click on a corner's handle picks it here, and brings this box into view (below a long point list).
   useEffect(() => {
-    if (picked && picked.id === shape.id) setCorner(picked.index);
+    if (picked && picked.id === shape.id) {
+      setCorner(picked.index);
+      box.current?.scrollIntoView?.({ block: 'nearest' });
+    }
   }, [picked, shape.id]);
   if (corners.length === 0) return null;
   const current = corners.some((c) => c.index === corner) ? corner : corners[0].index;
@@ -37,7 +41,7 @@ export function RoundCorner({ shape }: { shape: Shape }) {
   };
   const xy = (p: readonly number[]) => `(${formatNumber(p[0], 6)}, ${formatNumber(p[1], 6)})`;
   return (
-    <div className="round-corner" data-testid="round-corner">
+    <div className="round-corner" data-testid="round-corner" ref={box}>
       <div className="round-corner-head">Round a corner</div>
       <div className="round-corner-row">
         <select aria-label="Corner to round" data-field="corner" value={current} onChange={(e) => choose(Number(e.target.value))}>
