@@ -89,6 +89,47 @@ export const tests = [
     },
   },
   {
+    name: 'input: every prompt, the entry box, the keys sheet and the refusals use Kern’s own notation only',
+    async run(t) {
+      const { page } = await open(t, { seed: doc([{ id: 'a', type: 'rectangle', at: [0, 0], width: 40, height: 20 }]) });
+      const seen = [];
+      const read = async () => seen.push(await page.textContent('[data-testid="prompt"]'));
+      seen.push(await page.getAttribute('[data-testid="typed-input"]', 'placeholder'), await page.getAttribute('[data-testid="typed-input"]', 'title'));
+      for (const k of ['p', 'c', 'l', 'r', 't', 'w', 'i']) {
+        await focusCanvas(page);
+        await page.keyboard.press(k);
+        await read();
+        if (k === 'i') continue;
+        await key(page, '0, 0');
+        await read();
+        if (k === 'l' || k === 't' || k === 'w') {
+          await key(page, 'd 10, 0');
+          await page.keyboard.press('a');
+          await read();
+          await page.keyboard.press('a');
+        }
+        await page.keyboard.press('Escape');
+        await page.keyboard.press('Escape');
+      }
+      // Old-style entries get the same numbers back in the present notation.
+      await page.keyboard.press('p');
+      await key(page, '0, 0');
+      for (const [old, hint] of [['@20,0', /“d 20, 0” \(Δ 20, 0\)/], ['50<30', /“50 a 30” \(50 ∠ 30\)/]]) {
+        await page.fill('[data-testid="typed-input"]', old);
+        await page.press('[data-testid="typed-input"]', 'Enter');
+        const msg = await inputError(page);
+        assert.match(msg, hint);
+        seen.push(msg.replace(old, ''));
+      }
+      await page.keyboard.press('Escape');
+      await page.click('[data-testid="keys-help"]');
+      seen.push(await page.textContent('.keys-card'));
+      const all = seen.join('\n');
+      assert.doesNotMatch(all, /@|<|length<angle/, 'no other program’s entry syntax');
+      for (const form of ['x, y', 'd dx, dy', 'L a θ', 'dia D', 'R arc φ']) assert.ok(all.includes(form), `${form} is shown`);
+    },
+  },
+  {
     name: 'input: decimal commas are refused with the rule shown; a diameter where a radius is asked; the diameter in the panel',
     async run(t) {
       const { page } = await open(t);
