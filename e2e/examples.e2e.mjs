@@ -35,16 +35,19 @@ export const tests = [
     async run(t) {
       const { page, errors } = await open(t, { seed: doc([{ id: 'mine', type: 'rectangle', at: [0, 0], width: 10, height: 10 }]) });
       await page.click('[data-testid="examples-menu"]');
-      const listed = await page.$$eval('[data-example]', (els) => els.map((e) => e.dataset.example));
-      assert.deepEqual(listed.filter((f) => f !== 'demo').sort(), Object.keys(AREAS).sort(), 'the menu lists the shelf');
+      const listed = (await page.$$eval('[data-example]', (els) => els.map((e) => e.dataset.example))).filter((f) => f !== 'demo');
+      for (const f of Object.keys(AREAS)) assert.ok(listed.includes(f), `the menu lists ${f}`);
       await page.keyboard.press('Escape');
-      for (const [file, area] of Object.entries(AREAS)) {
+      // Every example on the shelf opens; those whose area has a closed form here are checked against it.
+      for (const file of listed) {
+        const area = AREAS[file];
         const before = await page.evaluate(() => window.__kern.editor.store.getState().past.length);
         await page.click('[data-testid="examples-menu"]');
         await page.click(`[data-example="${file}"]`);
         await page.waitForFunction((n) => window.__kern.editor.store.getState().past.length === n + 1, before);
         await settle(page);
-        close(await prop(page, 'area'), area, `${file}: area`);
+        if (area !== undefined) close(await prop(page, 'area'), area, `${file}: area`);
+        else assert.ok((await prop(page, 'area')) > 0, `${file}: an area is shown`);
         // The view shows the whole section.
         const inView = await page.evaluate(() => {
           const s = window.__kern.editor.store.getState();
@@ -57,7 +60,7 @@ export const tests = [
         assert.equal(await page.$('[data-testid="notice"]'), null, `${file}: opened without a notice`);
       }
       // Undo goes back through every example to the user's own section.
-      for (let k = 0; k < Object.keys(AREAS).length; k++) await page.click('[data-command="undo"]');
+      for (let k = 0; k < listed.length; k++) await page.click('[data-command="undo"]');
       await settle(page);
       close(await prop(page, 'area'), 100, 'the section before the examples');
       assert.deepEqual(errors, []);

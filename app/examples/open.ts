@@ -1,23 +1,16 @@
 /**
- * Opening an example from the shelf: fetch its file from beside the app (public/examples/, served
- * with it; no network beyond the app's own origin), then open it like a file the user picked, so
- * it replaces the section in one undo step and the view fits it.
+ * Opening an example from the shelf: read its file (bundled with the app, no network), then open
+ * it like a file the user picked, so it replaces the section in one undo step and the view fits it.
  */
 import type { Command, CommandContext } from '../commands/registry';
 import { loadDocumentText } from '../ops/document';
 import { notify } from '../ops/notice';
-import { EXAMPLE_SHELF, exampleUrl } from './shelf';
+import { EXAMPLE_SHELF, exampleText } from './shelf';
 
-/** Reads an example's text (the browser's fetch; tests may pass another reader). */
+/** Reads an example's text (the shelf's own reader; tests may pass another). */
 export type ExampleReader = (file: string) => Promise<string>;
 
-const fetchExample: ExampleReader = async (file) => {
-  const r = await fetch(exampleUrl(file, document.baseURI));
-  if (!r.ok) throw new Error(`the server answered ${r.status} ${r.statusText}`.trim());
-  return r.text();
-};
-
-export async function openExample(ctx: CommandContext, file: string, read: ExampleReader = fetchExample): Promise<boolean> {
+export async function openExample(ctx: CommandContext, file: string, read: ExampleReader = exampleText): Promise<boolean> {
   const entry = EXAMPLE_SHELF.find((e) => e.file === file);
   if (!entry) {
     notify(ctx, 'error', `There is no example "${file}".`, [`The shelf holds ${EXAMPLE_SHELF.map((e) => e.file).join(', ')}.`]);
