@@ -1,7 +1,8 @@
 /**
  * Keep what was just placed in sight: when a shape lands partly or wholly outside the canvas (a
  * profile placed near the edge, a typed placement far from the view, a catalogue size larger than
- * the view), the view pans to centre it, and zooms out only when it does not fit.
+ * the view), the view pans to centre it, and zooms out only when it does not fit. The first shape
+ * of an empty section that would show as a speck is fitted to the view.
  */
 import { regionsBounds, type Bounds } from '../src';
 import type { CommandContext } from './commands/registry';
@@ -27,9 +28,17 @@ export function inView(ctx: Pick<CommandContext, 'store'>, b: Bounds): boolean {
 
 export function revealShapes(ctx: Pick<CommandContext, 'store' | 'shapesOf'>, ids: readonly string[]): void {
   const b = boundsOfShapes(ctx, ids);
-  if (!b || inView(ctx, b)) return;
+  if (!b) return;
   const s = ctx.store.getState();
   const w = (b.xmax - b.xmin) * s.scale, h = (b.ymax - b.ymin) * s.scale;
+  // The first shape of an empty section, shown as a speck (a beam in inches on a view left at a
+  // millimetre zoom): fit the view to it.
+  const alone = activeSection(s.doc).shapes.every((x) => ids.includes(x.id));
+  if (alone && Math.max(w, h) < Math.min(s.width, s.height) / 6) {
+    ctx.store.setState(fitBounds(b, s.width, s.height));
+    return;
+  }
+  if (inView(ctx, b)) return;
   if (w <= s.width - 2 * MARGIN_PX && h <= s.height - 2 * MARGIN_PX) {
     const cx = (b.xmin + b.xmax) / 2, cy = (b.ymin + b.ymax) / 2;
     ctx.store.setState({ ox: s.width / 2 - cx * s.scale, oy: s.height / 2 + cy * s.scale });

@@ -118,6 +118,17 @@ describe('rolled sections', () => {
     expect(Math.abs(area(e) - (2 * 0.15 * 0.0107 + (0.3 - 0.0214) * 0.0071 + (4 - PI) * 0.015 ** 2))).toBeLessThan(1e-12);
   });
 
+  it('the first shape of an empty section, a speck at the current zoom, is fitted to the view', () => {
+    const e = editorWith([], 'in');
+    e.store.setState({ scale: 2 }); // 2 px per inch: a W14 would be 28 px tall
+    placeCatalogueSize(e.ctx, { series: 'W', designation: 'W14×30' });
+    const st = e.store.getState();
+    expect(st.scale * 13.8).toBeGreaterThan(st.height / 2);
+    // A second one keeps the zoom (only brought into view if it were off-screen).
+    placeCatalogueSize(e.ctx, { series: 'W', designation: 'W8×10' });
+    expect(e.store.getState().scale).toBe(st.scale);
+  });
+
   it('a size larger than the view zooms out to show it; an unknown size is refused with the sizes there are', () => {
     const e = editorWith();
     e.store.setState({ scale: 50 });

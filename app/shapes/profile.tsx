@@ -65,11 +65,15 @@ class RectangleTool extends DrawingTool {
   }
 }
 
-/** Profile dimensions for a new shape: the defaults (mm) converted to the document's units. */
+/**
+ * Profile dimensions for a new shape: the defaults (mm) converted to the document's units, to three
+ * significant figures in other units (7.87 in, not 7.87401574803 in: a starting size, not a
+ * catalogue one).
+ */
 export function defaultProfile(type: ProfileType, units: Units, at: Point): NewShape {
   const k = unitFactor('mm', units);
   const dims: Record<string, number> = {};
-  for (const [key, v] of Object.entries(PROFILE_DEFAULTS[type])) dims[key] = clean((v as number) * k);
+  for (const [key, v] of Object.entries(PROFILE_DEFAULTS[type])) dims[key] = units === 'mm' ? clean(v as number) : Number(((v as number) * k).toPrecision(3));
   return { type, at, ...dims } as unknown as NewShape;
 }
 
