@@ -80,7 +80,7 @@ export function defaultProfile(type: ProfileType, units: Units, at: Point): NewS
 class ProfileTool extends DrawingTool {
   readonly id = 'profile';
   prompt(env: ToolEnv) {
-    return `Profile (${env.store.getState().profileType}): click or type the placement point (${HINT.firstPoint})`;
+    return `${SHAPE_KIND_LABEL[env.store.getState().profileType]}: click or type the placement point (${HINT.firstPoint})`;
   }
   last() {
     return null;
