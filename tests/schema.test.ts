@@ -10,7 +10,7 @@ import { spawnSync } from 'node:child_process';
 import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { DEMO_DOCUMENT, parseDocument, serialiseDocumentText, validateDocument } from '../src';
+import { DEMO_DOCUMENT, parseDocument, serialiseDocumentText, SHAPE_TYPES, validateDocument } from '../src';
 import { SCHEMA_FILE, sectionDocumentSchema, sectionDocumentSchemaText } from '../src/document/schema';
 import { SchemaValidator } from './json-schema-lite';
 
@@ -48,7 +48,8 @@ describe('the published schemas', () => {
 
   it('describe every shape kind: version 2 all of them, version 1 those it had', () => {
     const kinds = (v: 1 | 2) => Object.keys(sectionDocumentSchema(v).$defs as object).filter((k) => k.startsWith('shape-')).map((k) => k.slice(6)).sort();
-    expect(kinds(2)).toEqual(['angle', 'bent-plate', 'channel', 'circle', 'i-beam', 'line', 'path', 'polygon', 'rect-tube', 'rectangle', 'round-tube', 'strip', 'tee'].sort());
+    // Every kind the engine registers (a new kind fails here until src/document/schema.ts describes it).
+    expect(kinds(2)).toEqual([...SHAPE_TYPES].sort());
     expect(kinds(1)).toEqual(kinds(2).filter((k) => k !== 'line' && k !== 'strip'));
   });
 });
