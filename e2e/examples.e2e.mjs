@@ -25,8 +25,8 @@ const AREAS = {
   'perforated-cover-plate.json': 2 * 300 * 10 + 4 * 110 * 12,
   // Tube 80 × 50 × 3 with outside radius 4 (inside 1), four bosses R 4.5 less the segment inside the wall (c = 3.5), less bores r 2.1.
   'aluminium-extrusion.json': 80 * 50 - 4 * spandrel(4) - (74 * 44 - 4 * spandrel(1)) + 4 * (PI * 4.5 ** 2 - segment(4.5, 3.5) - PI * 2.1 ** 2),
-  // IPE 300 (the baseline): 2·b·tf + (h − 2tf)·tw + 4 root spandrels r 15.
-  'cope-proposal.json': 2 * 150 * 10.7 + (300 - 2 * 10.7) * 7.1 + 4 * spandrel(15),
+  // The proposal opens active: IPE 300 coped to 260 deep, a tee of the bottom flange, two root spandrels r 15 and the web.
+  'cope-proposal.json': 150 * 10.7 + (260 - 10.7) * 7.1 + 2 * spandrel(15),
 };
 
 export const tests = [

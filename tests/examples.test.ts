@@ -174,7 +174,8 @@ describe('cope proposal', () => {
     expect(Math.abs(p.Iy / 603.8e4 - 1)).toBeLessThan(0.01);
   });
 
-  it('the proposal leaves a tee 260 deep: bottom flange, its root radii and the web', () => {
+  it('the document opens on the proposal, which leaves a tee 260 deep: bottom flange, its root radii and the web', () => {
+    expect(d.activeVariant).toBe('Top cope 40 deep');
     const cut = sectionOf(d, 'Top cope 40 deep');
     const { p } = expectHand(cut, sum([1, bottom], [1, rect(xw, tf, tw, 260 - tf)]));
     expect(p.bounds.ymax).toBe(260);
