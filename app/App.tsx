@@ -2,7 +2,7 @@
 import { useEffect, useRef } from 'react';
 import { EditorContext, type EditorHandle } from './context';
 import { installKeyboard } from './keyboard';
-import { loadDocumentText } from './ops/document';
+import { openFileText } from './exchange/open';
 import { Canvas } from './canvas/Canvas';
 import { CutPanel } from './panel/CutPanel';
 import { LineResults } from './panel/LineResults';
@@ -15,6 +15,8 @@ import { ReportOverlay } from './ui/ReportOverlay';
 import { ExchangeDialogs } from './exchange/ExchangeDialogs';
 import { TitleBlockDialog } from './ui/TitleBlock';
 import { downloadBlob } from './exchange/exports';
+import { FirstRunGuide } from './ui/FirstRunGuide';
+import { QuestionDialog } from './ui/QuestionDialog';
 
 export function App({ editor }: { editor: EditorHandle }) {
   const fileInput = useRef<HTMLInputElement>(null);
@@ -40,6 +42,7 @@ export function App({ editor }: { editor: EditorHandle }) {
         <main className="stage">
           <Canvas />
           <Notice />
+          <FirstRunGuide />
         </main>
         <aside className="panel" aria-label="Selection and results">
           {/* Two scroll areas: editing above, results below, so the numbers stay in view
@@ -59,17 +62,18 @@ export function App({ editor }: { editor: EditorHandle }) {
         <ReportOverlay />
         <ExchangeDialogs />
         <TitleBlockDialog />
+        <QuestionDialog />
         <input
           ref={fileInput}
           type="file"
-          accept=".json,application/json"
+          accept=".json,application/json,.dxf"
           data-testid="file-input"
           style={{ display: 'none' }}
           onChange={async (e) => {
             const f = e.target.files?.[0];
             e.target.value = '';
             if (!f) return;
-            loadDocumentText(editor.ctx, f.name, await f.text());
+            openFileText(editor.ctx, f.name, await f.text());
           }}
         />
       </div>

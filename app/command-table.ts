@@ -8,7 +8,13 @@ import { isProfile, OPS } from '../src';
 import { readDxf } from './exchange/dxf';
 import { canExport, exportDxfFile, exportJsonFile, exportPngFile, exportSvgFile } from './exchange/exports';
 import { exchangeStore } from './exchange/state';
-import { loadDemo, loadDocumentText, newDocument, saveDocument, setUnits } from './ops/document';
+import { loadDemo, saveDocument, setUnits } from './ops/document';
+import { openFileText } from './exchange/open';
+import { OPEN_EXAMPLE_COMMAND } from './examples/open';
+import { placeCatalogueCommand } from './ops/catalogue';
+import { startNewSection } from './ops/new-section';
+import { notify } from './ops/notice';
+import { roundCorner } from './ops/round-corner';
 import { convertSelectionToOutline, mergeSelection } from './ops/outline';
 import {
   deleteSelection,
@@ -76,16 +82,29 @@ function registerEdits(r: CommandRegistry): void {
   }
   r.register({ name: 'edit.move', label: 'Move by', group: 'edit', enabled: hasSelection, perform: (c, arg) => moveSelection(c, ...(arg as [number, number])) });
   r.register({ name: 'edit.rotate', label: 'Rotate', group: 'edit', hint: 'Rotate the selection by a typed angle (degrees, CCW) about its centre', enabled: hasSelection, perform: (c, arg) => rotateSelection(c, Number(arg)) });
-  r.register({ name: 'edit.mirrorX', label: 'Mirror left–right', group: 'edit', keys: ['shift+h'], enabled: hasSelection, perform: (c) => mirrorSelection(c, 'vertical') });
-  r.register({ name: 'edit.mirrorY', label: 'Mirror top–bottom', group: 'edit', keys: ['shift+v'], enabled: hasSelection, perform: (c) => mirrorSelection(c, 'horizontal') });
+  // Shift+X turns x into −x (left–right), Shift+Y turns y into −y (top–bottom).
+  r.register({ name: 'edit.mirrorX', label: 'Mirror left–right', group: 'edit', keys: ['shift+x'], enabled: hasSelection, perform: (c) => mirrorSelection(c, 'vertical') });
+  r.register({ name: 'edit.mirrorY', label: 'Mirror top–bottom', group: 'edit', keys: ['shift+y'], enabled: hasSelection, perform: (c) => mirrorSelection(c, 'horizontal') });
   // Shapes apply in list order, so the order changes the result.
   r.register({ name: 'order.forward', label: 'Later in order', group: 'order', keys: [']'], enabled: hasSelection, perform: (c) => reorderSelection(c, 'forward') });
   r.register({ name: 'order.backward', label: 'Earlier in order', group: 'order', keys: ['['], enabled: hasSelection, perform: (c) => reorderSelection(c, 'backward') });
   r.register({ name: 'order.last', label: 'Last in order', group: 'order', keys: ['shift+]', 'shift+}'], enabled: hasSelection, perform: (c) => reorderSelection(c, 'front') });
   r.register({ name: 'order.first', label: 'First in order', group: 'order', keys: ['shift+[', 'shift+{'], enabled: hasSelection, perform: (c) => reorderSelection(c, 'back') });
   for (const op of OPS) r.register({ name: `op.${op}`, label: OP_LABEL[op], group: 'op', keys: [OP_KEY[op]], enabled: hasSelection, perform: (c) => setSelectionOp(c, op) });
-  r.register({ name: 'shape.toOutline', label: 'Convert to outline', group: 'shape', enabled: (c) => selectedShapes(c.store.getState()).some(isProfile), perform: convertSelectionToOutline });
+  r.register({ name: 'shape.toOutline', label: 'Turn into a path', group: 'shape', hint: 'Replace the selected profile by a path of its exact lines and arcs, to edit point by point', enabled: (c) => selectedShapes(c.store.getState()).some(isProfile), perform: convertSelectionToOutline });
   r.register({ name: 'shape.merge', label: 'Merge into one outline', group: 'shape', keys: ['mod+m'], enabled: hasSelection, perform: mergeSelection });
+  r.register({
+    name: 'shape.roundCorner',
+    label: 'Round a corner',
+    group: 'shape',
+    hint: 'Round a corner of the selected polygon or path with a radius: {corner, radius}',
+    enabled: (c) => c.store.getState().selected.length === 1,
+    perform: (c, arg) => {
+      const err = roundCorner(c, arg);
+      if (err) notify(c, 'error', 'The corner was not rounded.', [err]);
+    },
+  });
+  r.register({ name: 'catalogue.place', label: 'Place a rolled section', group: 'shape', hint: 'Place a catalogue size {series, designation} at the middle of the view', perform: placeCatalogueCommand });
 }
 
 function registerView(r: CommandRegistry): void {
@@ -130,12 +149,13 @@ function registerFiles(r: CommandRegistry): void {
     keys: ['mod+o'],
     perform: async (c) => {
       const f = await c.io?.pickFile();
-      if (f) loadDocumentText(c, f.name, f.text);
+      if (f) openFileText(c, f.name, f.text);
     },
   });
   r.register({ name: 'file.save', label: 'Save', group: 'file', keys: ['mod+s'], perform: saveDocument });
   r.register({ name: 'file.demo', label: 'Load demo section', group: 'file', perform: loadDemo });
-  r.register({ name: 'file.new', label: 'New section', group: 'file', perform: newDocument });
+  r.register({ name: 'file.new', label: 'New section', group: 'file', hint: 'Start an empty section (asks first when the section has shapes)', perform: startNewSection });
+  r.register(OPEN_EXAMPLE_COMMAND);
   r.register({ name: 'report.open', label: 'Report', group: 'file', keys: ['mod+p'], perform: (c) => c.openReport?.() });
   r.register({
     name: 'file.importDxf',

@@ -55,6 +55,12 @@ export const ENTRY_START = /^[0-9.+\-(ΔØø⌀∆dD]$/;
 /** The coordinate box's placeholder: the three point forms as typed on a plain keyboard. */
 export const PLACEHOLDER = 'x, y · d dx, dy · L a θ';
 
+/** The coordinate box's tooltip: every form in words, and the decimal rule. */
+export const ENTRY_TITLE =
+  'A point: x, y. From the last point: d dx, dy (Δ) or L a θ (L ∠ θ, θ in degrees CCW from +x). ' +
+  'Where a radius is asked: a number, or dia D (Ø D). While drawing a path: R arc φ (R ⌒ φ). ' +
+  'Decimals take a point (7.5); a comma only separates x and y. Enter takes the entry, Escape clears it.';
+
 /** Short hints for the prompts, one per kind of step. */
 export const HINT = {
   /** The first point of a shape. */
@@ -64,7 +70,7 @@ export const HINT = {
   /** The second corner of a rectangle. */
   corner: 'x, y · d width, height',
   /** A circle's size: a radius, a diameter or a point on the circle. */
-  radius: 'radius · Ø D (dia D) · or a point',
+  radius: 'radius · dia D (Ø D) · or a point; decimals with a point: 7.5',
   /** Moving a selection. */
   move: 'd dx, dy · L a θ',
   /** A path arc by radius and sweep, continuing the last segment. */

@@ -5,6 +5,7 @@ import { registry } from './command-table';
 import { fitView } from './ops/view';
 import { createEditor } from './editor';
 import { installAutosave, restoreDocument } from './persist';
+import { startGuide } from './ui/guide-state';
 import './styles.css';
 
 function storage(): Storage | null {
@@ -20,6 +21,8 @@ const restored = restoreDocument(store);
 // `?worker=0` evaluates on the main thread (for comparison and for browsers without module workers).
 const params = new URLSearchParams(window.location.search);
 const editor = createEditor(restored.doc, { worker: params.get('worker') !== '0' });
+// The first-steps guide opens by itself only on a first start: nothing autosaved yet.
+startGuide(editor.store, store, !restored.restored && restored.problems.length === 0);
 if (store) installAutosave(editor.store, store);
 if (restored.problems.length) {
   editor.store.setState({

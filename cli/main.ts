@@ -45,6 +45,7 @@ const USAGE = `Usage:
                                            document's weld loads, or one load given here (force
                                            in the document's force unit, kN if unset; M + CCW in
                                            force x momentLength); the largest force per length
+  kern schema [--version 1|2]              JSON Schema of the section document, for editors
 Options: --units U  (mm, cm, m, in, ft) for a DXF file that does not state its units
          --variant NAME  (props, cut, inertia, weld) a proposal of the document instead of its baseline
 Line elements: props gives each line group (length, centroid, Ix, Iy, Ixy, J per unit
@@ -225,6 +226,7 @@ export async function main(argv: string[]): Promise<number> {
     if (cmd === 'compare') return await (await import('./compare')).compareCommand(rest);
     if (cmd === 'netsection') return await (await import('./netsection')).netsectionCommand(rest);
     if (cmd === 'weld') return await (await import('./lines')).weldCommand(rest);
+    if (cmd === 'schema') return (await import('./schema')).schemaCommand(rest);
     if (cmd === undefined || cmd === 'help' || cmd === '--help' || cmd === '-h') {
       out(USAGE);
       return cmd === undefined ? 2 : 0;

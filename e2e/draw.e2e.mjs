@@ -210,7 +210,7 @@ export const tests = [
         rectangle: (s) => s.width * s.height - (4 - PI) * (s.cornerRadius ?? 0) ** 2,
       };
       for (const [type, area] of Object.entries(cases)) {
-        await page.evaluate(() => window.__kern.editor.run('file.new'));
+        await page.evaluate(() => window.__kern.editor.run('file.new', 'discard')); // without the question
         await page.selectOption('[data-testid="profile-type"]', type);
         await clickWorld(page, 0, 0);
         const s = (await docShapes(page))[0];

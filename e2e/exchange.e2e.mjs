@@ -240,6 +240,7 @@ export const tests = [
       assert.match(dxf.toString('utf8'), /\n42\n/, 'arcs leave as bulges');
       await page.click('[data-testid="export-dialog"] button:has-text("Close")');
       await page.click('[data-command="file.new"]');
+      await page.click('[data-question="new-section"] [data-answer="yes"]'); // the demo has shapes: New asks first
       await settle(page);
       assert.equal((await docShapes(page)).length, 0);
       await importThroughChooser(page, { name: 'roundtrip.dxf', mimeType: 'application/dxf', buffer: dxf });

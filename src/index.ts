@@ -9,6 +9,8 @@ export { SHAPE_KIND_LABEL } from './document/labels';
 export { SHAPE_KINDS, SHAPE_TYPES, kindOf, isShapeType } from './shapes/registry';
 export type { ShapeKind } from './shapes/kind';
 export type { PointMap } from './shapes/base';
+export { shapeCorners, roundShapeCorner } from './shapes/ops';
+export type { Corner } from './shapes/corners';
 export { shapeToRegion, shapeContours, mayCrossItself, translateShape, rotateShape, mirrorShape, scaleShape, shapeKindLabel, shapeDisplayName } from './shapes/ops';
 export { pathContour } from './shapes/path';
 export { PROFILE_TYPES, isProfile, isProfileType } from './shapes/profile';

@@ -231,6 +231,25 @@ describe('fillet refusals', () => {
 });
 
 describe('fillet on arbitrary input', () => {
+  it('refuses a corner that nearly turns straight back instead of placing the arc beyond it (regression: 1 + cos θ cancelled to a negative tangent length)', () => {
+    // Two lines meeting at 180° − 2.6e-8 rad: the tangent length r·tan(θ/2) is about 7.7e11 × r,
+    // far longer than either side, so no radius of 1e4 fits.
+    const r = filletCorner({ start: [0, -2], segments: [{ to: [2.5951456941567153e-8, 0] }, { to: [0, -3] }, { to: [0, -2] }] }, 1, 1e4);
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.message).toMatch(/does not fit/);
+  });
+
+  it('stays exact next to a nearly flat arc (regression: intersecting the offset circles cancelled)', () => {
+    // An arc of radius about 1e8 (three nearly collinear points) meets an arc of radius 2 at
+    // (2.8e-8, 1); a fillet of 4.4e-8 there must be tangent to both: its tangent points lie at
+    // the fillet radius from its centre, to round-off of the section's size.
+    const path = { start: [0, -2] as Point, segments: [{ to: [2.806561810161594e-8, 1] as Point, via: [0, -1] as Point }, { to: [-1, -3] as Point, via: [1, -1] as Point }, { to: [0, -2] as Point }] };
+    const r = 4.39835116050165e-8;
+    const res = filletCorner(path, 1, r);
+    if (!res.ok) throw new Error(res.message);
+    for (const t of [res.tangentIn, res.tangentOut]) expect(Math.abs(Math.hypot(t[0] - res.centre[0], t[1] - res.centre[1]) - r)).toBeLessThan(1e-9 * 5);
+  });
+
   it('never throws or yields a non-finite point: a valid path or a message (fuzz)', () => {
     const coord = fc.oneof(fc.integer({ min: -5, max: 5 }), fc.double({ min: -1e6, max: 1e6, noNaN: true }));
     const seg = fc.record({ to: fc.tuple(coord, coord), arc: fc.boolean(), via: fc.tuple(coord, coord) });
@@ -246,8 +265,12 @@ describe('fillet on arbitrary input', () => {
         const all = [res.path.start, ...res.path.segments.flatMap((g) => (g.via ? [g.to, g.via] : [g.to]))];
         for (const q of all) expect(Number.isFinite(q[0]) && Number.isFinite(q[1])).toBe(true);
         expect(Number.isFinite(res.sweep)).toBe(true);
-        // The fillet's tangent points lie at the radius from its centre.
-        for (const t of [res.tangentIn, res.tangentOut]) expect(Math.abs(Math.hypot(t[0] - res.centre[0], t[1] - res.centre[1]) - r)).toBeLessThan(1e-6 * Math.max(1, r, Math.hypot(...res.centre)));
+        // The fillet's tangent points lie at the radius from its centre, to round-off of the size of
+        // the two segments that meet at the corner (an arc of radius 1e6 meeting a fillet of 1e-4
+        // fixes its tangent point only to about 1e6 × 1e-16 / sin(the angle it is cut at)).
+        const pts = [start as Point, ...segments.flatMap((g) => (g.via ? [g.to, g.via] : [g.to]))];
+        const size = Math.max(1, r, Math.hypot(...res.centre), ...pts.map((q) => Math.hypot(q[0], q[1])));
+        for (const t of [res.tangentIn, res.tangentOut]) expect(Math.abs(Math.hypot(t[0] - res.centre[0], t[1] - res.centre[1]) - r)).toBeLessThan(1e-9 * size);
       }),
       { numRuns: 2000 },
     );

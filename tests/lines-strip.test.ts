@@ -21,7 +21,7 @@ import { booleanRegions, resolveOutline } from '../src/boolean';
 import { shapeContours } from '../src';
 import { arcFromChord, contourFrom, pushArc, reverseContour, type Contour, type Region } from '../src/geometry/contour';
 import { chainFrom, chainFromPath, chainSegment, LineError, segmentCount, type LineChain } from '../src/lines/chain';
-import { alongFace, facesMeet } from '../src/lines/offset-carrier';
+import { alongFace, facesMeet } from '../src/geometry/offset-faces';
 import { stripOutline, type StripCorners } from '../src/lines/strip-outline';
 import { thinWallComparison } from '../src/lines/thin-wall';
 import { regionMoments, regionMomentsAbout } from '../src/moments/kernel';
@@ -329,7 +329,7 @@ describe('strips against an independent construction (fast-check)', () => {
   });
 });
 
-describe('joint geometry (offset-carrier.ts): exact identities', () => {
+describe('joint geometry (src/geometry/offset-faces.ts): exact identities', () => {
   // A face at offset d of a piece through the joint V = 0 with left normal n and curvature k is
   // the circle about C = n/k of radius |1/k − d| (or the line w·n = d): elementary geometry.
   const sideArb = fc.record({

@@ -12,6 +12,7 @@ import { useApply } from '../fields/shape-edit';
 import { ShapeFields } from '../shapes';
 import { activeSection } from '../store/section';
 import { HINT } from '../input-syntax';
+import { RoundCorner } from './RoundCorner';
 
 const OP_LABEL: Record<Op, string> = { add: 'Add', subtract: 'Subtract', intersect: 'Intersect' };
 
@@ -107,6 +108,7 @@ export function SelectionPanel() {
           <ShapeFields shape={one} />
         </div>
       )}
+      {one && <RoundCorner key={`round-${one.id}`} shape={one} />}
       <RotateBox />
       <div className="actions">
         {['edit.mirrorX', 'edit.mirrorY', 'edit.duplicate', 'edit.delete', 'order.backward', 'order.forward'].map((n) => (

@@ -1,6 +1,7 @@
 /**
  * Circle editing: a tool that takes the centre, then a radius (typed) or a point on the rim
- * (click, or press-drag-release); a centre handle moves it and a rim handle sets the radius.
+ * (click, or press-drag-release); a centre handle moves it and a rim handle sets the radius. The
+ * panel shows the radius and the diameter, and either may be typed.
  */
 import type { CircleShape, Point } from '../../src';
 import { NumberField } from '../fields/NumberField';
@@ -66,6 +67,8 @@ function CircleFields({ shape }: { shape: CircleShape }) {
     <>
       <PointFields label="Centre" p={shape.center} field="center" units={e.units} onPoint={(p) => e.set((s) => ({ ...s, center: p }))} />
       <NumberField label="Radius" value={shape.radius} field="radius" suffix={e.units} onCommit={(v) => e.set((s) => ({ ...s, radius: v }))} />
+      {/* Drawings give holes by diameter (Ø): the same circle, either way. */}
+      <NumberField label="Diameter Ø" value={2 * shape.radius} field="diameter" suffix={e.units} onCommit={(v) => e.set((s) => ({ ...s, radius: v / 2 }))} />
     </>
   );
 }

@@ -25,6 +25,7 @@ import { clean, type NewShape, type ToolEnv } from '../tools/types';
 import { CommandButton } from '../fields/CommandButton';
 import type { ShapeEditor } from './kind';
 import { HINT } from '../input-syntax';
+import { revealShapes } from '../reveal';
 
 function rectFrom(a: Point, b: Point): NewShape {
   return { type: 'rectangle', at: [Math.min(a[0], b[0]), Math.min(a[1], b[1])], width: clean(Math.abs(b[0] - a[0])), height: clean(Math.abs(b[1] - a[1])) };
@@ -64,18 +65,22 @@ class RectangleTool extends DrawingTool {
   }
 }
 
-/** Profile dimensions for a new shape: the defaults (mm) converted to the document's units. */
+/**
+ * Profile dimensions for a new shape: the defaults (mm) converted to the document's units, to three
+ * significant figures in other units (7.87 in, not 7.87401574803 in: a starting size, not a
+ * catalogue one).
+ */
 export function defaultProfile(type: ProfileType, units: Units, at: Point): NewShape {
   const k = unitFactor('mm', units);
   const dims: Record<string, number> = {};
-  for (const [key, v] of Object.entries(PROFILE_DEFAULTS[type])) dims[key] = clean((v as number) * k);
+  for (const [key, v] of Object.entries(PROFILE_DEFAULTS[type])) dims[key] = units === 'mm' ? clean(v as number) : Number(((v as number) * k).toPrecision(3));
   return { type, at, ...dims } as unknown as NewShape;
 }
 
 class ProfileTool extends DrawingTool {
   readonly id = 'profile';
   prompt(env: ToolEnv) {
-    return `Profile (${env.store.getState().profileType}): click or type the placement point (${HINT.firstPoint})`;
+    return `${SHAPE_KIND_LABEL[env.store.getState().profileType]}: click or type the placement point (${HINT.firstPoint})`;
   }
   last() {
     return null;
@@ -88,7 +93,8 @@ class ProfileTool extends DrawingTool {
   }
   protected accept(env: ToolEnv, p: Point): string | null {
     const s = env.store.getState();
-    env.addShape(defaultProfile(s.profileType, s.doc.units, p));
+    // A profile placed near the edge, or at a typed point out of view, is brought into view.
+    if (env.addShape(defaultProfile(s.profileType, s.doc.units, p))) revealShapes({ store: env.store, shapesOf: env.results.shapesOf }, env.store.getState().selected);
     return null;
   }
   protected preview(env: ToolEnv, p: Point) {

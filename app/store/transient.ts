@@ -31,10 +31,12 @@ export interface Transient {
   inputError: string | null;
   /** Handle under the pointer (index into the selected shape's handles), for the hover style. */
   hoverHandle: number | null;
+  /** The corner picked for rounding (a click on a vertex handle): shape id and vertex index. */
+  corner: { id: string; index: number } | null;
 }
 
 export type TransientStore = StoreApi<Transient>;
 
 export function createTransientStore(): TransientStore {
-  return createStore<Transient>()(() => ({ pointer: null, snap: null, draft: null, prompt: '', inputError: null, hoverHandle: null }));
+  return createStore<Transient>()(() => ({ pointer: null, snap: null, draft: null, prompt: '', inputError: null, hoverHandle: null, corner: null }));
 }

@@ -5,7 +5,10 @@ import { useEditor, useEditorState, useTransient } from '../context';
 import { CommandButton } from '../fields/CommandButton';
 import { SHAPE_EDITORS, TOOL_SPECS } from '../shapes';
 import { KeysHelp } from './KeysHelp';
-import { PLACEHOLDER } from '../input-syntax';
+import { CataloguePicker } from './CataloguePicker';
+import { ExamplesMenu } from '../examples/ExamplesMenu';
+import { ENTRY_TITLE, PLACEHOLDER } from '../input-syntax';
+import { entryKeyDown } from './entry-keys';
 
 export function TopBar() {
   const name = useEditorState((s) => s.doc.name);
@@ -26,7 +29,7 @@ export function TopBar() {
         <CommandButton name="file.new">New</CommandButton>
         <CommandButton name="file.open">Open…</CommandButton>
         <CommandButton name="file.save">Save</CommandButton>
-        <CommandButton name="file.demo">Demo</CommandButton>
+        <ExamplesMenu />
       </div>
       <div className="group">
         <CommandButton name="file.importDxf">Import DXF…</CommandButton>
@@ -61,6 +64,7 @@ export function ToolRail() {
         ))}
       </div>
       {SHAPE_EDITORS.map((e, i) => e.RailControl && <e.RailControl key={i} />)}
+      <CataloguePicker />
       <div className="rail-group">
         <h3>Snap</h3>
         <CommandButton name="snap.grid" />
@@ -104,24 +108,8 @@ export function StatusBar() {
         placeholder={PLACEHOLDER}
         spellCheck={false}
         autoComplete="off"
-        onKeyDown={(e) => {
-          e.stopPropagation();
-          const el = e.currentTarget;
-          if (e.key === 'Enter') {
-            if (el.value.trim() === '') {
-              editor.tool().key(editor.env, 'enter');
-              editor.transient.setState({ prompt: editor.tool().prompt(editor.env) });
-              return;
-            }
-            const error = editor.type(el.value);
-            if (!error) el.value = '';
-          } else if (e.key === 'Escape') {
-            el.value = '';
-            editor.tool().key(editor.env, 'escape');
-            editor.transient.setState({ inputError: null, prompt: editor.tool().prompt(editor.env) });
-            el.blur();
-          }
-        }}
+        title={ENTRY_TITLE}
+        onKeyDown={(e) => entryKeyDown(editor, e)}
       />
       {err && (
         <div className="input-error" role="alert" data-testid="input-error">

@@ -4,6 +4,7 @@ import { createPortal } from 'react-dom';
 import { useEditor } from '../context';
 import { keyHint } from '../fields/CommandButton';
 import { HELP_LINES } from '../input-syntax';
+import { showGuide } from './guide-state';
 
 const GROUP_LABEL: Record<string, string> = {
   tool: 'Tools',
@@ -19,7 +20,8 @@ const GROUP_LABEL: Record<string, string> = {
 
 export function KeysHelp() {
   const [open, setOpen] = useState(false);
-  const withKeys = useEditor().commands.all().filter((c) => c.keys?.length);
+  const editor = useEditor();
+  const withKeys = editor.commands.all().filter((c) => c.keys?.length);
   const groups = [...new Set(withKeys.map((c) => c.group))];
   return (
     <>
@@ -33,6 +35,16 @@ export function KeysHelp() {
             <div className="overlay-head">
               <h2>Keyboard commands</h2>
               <div className="spacer" />
+              <button
+                className="btn"
+                data-testid="show-guide"
+                onClick={() => {
+                  setOpen(false);
+                  showGuide(editor.store);
+                }}
+              >
+                First steps
+              </button>
               <button className="btn" onClick={() => setOpen(false)}>
                 Close
               </button>

@@ -26,6 +26,7 @@
  * Written by hand: no geometry library in the allowed set builds tangent arcs exactly.
  */
 import { arcFromChord, sweepThrough, type Vec2 } from './contour';
+import { facesMeet, type JointSide } from './offset-faces';
 
 export type FilletPoint = [number, number];
 
@@ -224,12 +225,14 @@ interface Corner {
 
 /** The fillet centre and tangent points for a corner between two lines, in closed form. */
 function fitLines(c: Corner & { pin: { kind: 'line' }; pout: { kind: 'line' } }, r: number, label: number): Candidate | string {
-  const { pin, pout, V, d1, d2, cross, dot, side } = c;
-  // Tangent length r·tan(θ/2) = r·|sinθ|/(1 + cosθ), measured back and on from the corner.
-  const t = (r * Math.abs(cross)) / (1 + dot);
+  const { pin, pout, V, d1, d2, cross, side } = c;
+  // Tangent length r·tan(θ/2) = r·|sinθ|/(1 + cosθ), measured back and on from the corner. For a
+  // corner that nearly turns straight back 1 + cosθ cancels; |d1 + d2|²/2 is the same value
+  // without the cancellation (and never negative), so t grows large and is refused below.
+  const t = (r * Math.abs(cross)) / (0.5 * ((d1[0] + d2[0]) ** 2 + (d1[1] + d2[1]) ** 2));
   if (t > pin.length * (1 + 1e-12) || t > pout.length * (1 + 1e-12)) {
     const room = Math.min(pin.length, pout.length);
-    const rMax = (room * (1 + dot)) / Math.abs(cross);
+    const rMax = (room * 0.5 * ((d1[0] + d2[0]) ** 2 + (d1[1] + d2[1]) ** 2)) / Math.abs(cross);
     return `A radius of ${fmt(r)} does not fit at corner ${label}: it needs ${fmt(t)} along each side, but the shorter side is ${fmt(room)} long (largest radius: ${fmt(rMax)}).`;
   }
   const tin: FilletPoint = [V[0] - d1[0] * t, V[1] - d1[1] * t];
@@ -238,14 +241,26 @@ function fitLines(c: Corner & { pin: { kind: 'line' }; pout: { kind: 'line' } },
   return { f, tin, tout, fin: 1 - t / pin.length, fout: t / pout.length };
 }
 
+/** A piece at the corner as the offset equation takes it: direction of travel, left normal, signed curvature. */
+function jointSide(p: Piece, atEnd: boolean): JointSide {
+  const [tx, ty] = direction(p, atEnd);
+  return { tx, ty, nx: -ty, ny: tx, k: p.kind === 'line' ? 0 : (p.sweep > 0 ? 1 : -1) / p.r };
+}
+
 /** The fillet centre and tangent points when an arc takes part: offsets intersected. */
 function fitCurves(c: Corner, r: number, label: number): Candidate | string {
   const { pin, pout, V, side } = c;
   const oin = offsetOf(pin, side, r, V), oout = offsetOf(pout, side, r, V);
   if (typeof oin === 'string') return `Cannot round corner ${label}: ${oin}.`;
   if (typeof oout === 'string') return `Cannot round corner ${label}: ${oout}.`;
+  // The centre nearest the corner, from the offsets' equation about the corner itself: it
+  // stays exact when an arc is nearly flat (its centre far away), where intersecting the
+  // offset circles would cancel (src/geometry/offset-faces.ts). The full intersection is the
+  // fallback when that root does not fit.
+  const w = facesMeet(jointSide(pin, true), jointSide(pout, false), side * r);
+  const near: Vec2[] = w ? [[V[0] + w[0], V[1] + w[1]]] : [];
   let best: Candidate | null = null, bestCost = Infinity;
-  for (const f of intersect(oin, oout)) {
+  for (const f of [...near, ...intersect(oin, oout)]) {
     const tin = tangentPoint(pin, f), tout = tangentPoint(pout, f);
     const fin = fractionAlong(pin, tin, 1e-9);
     const fout = fractionAlong(pout, tout, 1e-9);

@@ -6,7 +6,7 @@
  *    of radius r ∓ t/2 with the same sweep. Their ends are the piece's ends moved along its normal
  *    there, so no arc centre is formed.
  * 2. Joints: where two pieces meet at an angle, the faces on the inside of the turn are cut where
- *    they cross (facesMeet in offset-carrier.ts: line–line, line–arc and arc–arc, exactly). On the
+ *    they cross (facesMeet in src/geometry/offset-faces.ts: line–line, line–arc and arc–arc, exactly). On the
  *    outside, 'mitre' extends both faces along their own line or circle until they meet; 'round'
  *    joins them with an arc of radius t/2 about the joint. Tangent joints need nothing.
  * 3. Outline: an open centreline gives one loop, CCW: the right faces forward, a square end, the
@@ -22,7 +22,7 @@
 import { pushArc, reverseContour, type Contour, type Region } from '../geometry/contour';
 import { regionMomentsAbout } from '../moments/kernel';
 import { chainSegment, LineError, segmentCount, type LineChain } from './chain';
-import { alongFace, facesMeet, type JointSide } from './offset-carrier';
+import { alongFace, facesMeet, type JointSide } from '../geometry/offset-faces';
 import { findContact, type OutlinePiece } from './strip-overlap';
 
 export type StripCorners = 'mitre' | 'round';

@@ -9,6 +9,7 @@ import type { Contour } from '../geometry/contour';
 import type { LineChain } from '../lines/chain';
 import type { PointMap, ShapeBase } from './base';
 import type { Issue } from './check';
+import type { Corner } from './corners';
 import type { KindSchedule, ScheduleFormat } from './schedule';
 
 export interface ShapeKind<S extends ShapeBase & { type: string }> {
@@ -37,6 +38,12 @@ export interface ShapeKind<S extends ShapeBase & { type: string }> {
   mirrored?(s: S, axis: 'vertical' | 'horizontal'): S;
   /** The same shape with every length (points, radii, dimensions) multiplied by k (a unit change). */
   scaled(s: S, k: number): S;
+  /**
+   * Kinds whose corners can be rounded: the corners, and the shape with corner `index` replaced
+   * by the exact tangent arc of `radius` (possibly of another kind: a polygon becomes a path), or
+   * the reason it cannot be done. Id, name, operation and material are kept.
+   */
+  corners?: { list(s: S): Corner[]; round(s: S, index: number, radius: number): (ShapeBase & { type: string }) | string };
   /** Everything needed to rebuild the shape by hand (the report's schedule), as data. */
   schedule(s: S, f: ScheduleFormat): KindSchedule;
 }

@@ -7,6 +7,7 @@ import { resolveOutline } from '../boolean';
 import type { Contour, Region } from '../geometry/contour';
 import type { Shape } from './shape';
 import type { PointMap } from './base';
+import type { Corner } from './corners';
 import { kindOf } from './registry';
 
 /** Raw exact contours of one shape: outer loops and, for hollow profiles, holes (reversed). */
@@ -51,6 +52,18 @@ export function mirrorShape<S extends Shape>(s: S, axis: 'vertical' | 'horizonta
 /** Every length multiplied by k (a change of units). */
 export function scaleShape<S extends Shape>(s: S, k: number): S {
   return k === 1 ? s : kindOf(s).scaled(s, k);
+}
+
+/** The corners of a shape that can be rounded (none for kinds without corners). */
+export function shapeCorners(s: Shape): Corner[] {
+  return kindOf(s).corners?.list(s) ?? [];
+}
+
+/** The shape with one corner rounded by an exact tangent arc, or the reason it cannot be done. */
+export function roundShapeCorner(s: Shape, index: number, radius: number): Shape | string {
+  const c = kindOf(s).corners;
+  if (!c) return `a ${kindOf(s).label.toLowerCase()} has no corners to round here; a profile sets its radii in its own fields`;
+  return c.round(s, index, radius) as Shape | string;
 }
 
 /** The kind's plain name: 'Polygon', 'I-beam', ... */

@@ -4,6 +4,8 @@ import { checkPoint, dist, type Issue } from './check';
 import { scalePoint, type ShapeKind } from './kind';
 import { pointsExtent, vertexTable } from './schedule';
 import { dropZeroLengthLines } from './loops';
+import { roundedChain } from './corners';
+import { filletPolygonCorner } from '../geometry/fillet';
 
 export interface PolygonShape extends ShapeBase {
   type: 'polygon';
@@ -50,5 +52,17 @@ export const polygonKind: ShapeKind<PolygonShape> = {
   // A reflection reverses the winding; keep it counter-clockwise as drawn.
   mirrored: (s) => ({ ...s, points: s.points.slice().reverse() }),
   scaled: (s, k) => ({ ...s, points: s.points.map(scalePoint(k)) }),
+  corners: {
+    list: (s) => s.points.map((p, index) => ({ index, label: `Vertex ${index + 1}`, p })),
+    // The outline gains an arc, so the polygon becomes a path (everything else kept).
+    round: (s, index, radius) => {
+      if (!(index >= 0 && index < s.points.length)) return `there is no corner ${index + 1} to round`;
+      const r = roundedChain(filletPolygonCorner(s.points, index, radius));
+      if (!r.ok) return r.message;
+      const { points: _points, ...rest } = s;
+      void _points;
+      return { ...rest, type: 'path', start: r.start, segments: r.segments };
+    },
+  },
   schedule: (s, f) => ({ params: [['Corners', String(s.points.length)]], table: vertexTable(s.points, f, 'vertices'), extent: pointsExtent(s.points) }),
 };

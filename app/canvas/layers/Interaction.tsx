@@ -1,5 +1,6 @@
-/** What follows the pointer: the selection and its handles, the tool's draft, the snap target. */
+/** What follows the pointer: the selection and its handles, a corner picked for rounding, the tool's draft, the snap target. */
 import { useEditorShallow, useTransient } from '../../context';
+import { CornerNode } from './Corner';
 import { DraftNode } from './Draft';
 import { SelectionNode } from './Selection';
 import { SnapNode } from './Snap';
@@ -11,6 +12,7 @@ export function InteractionLayer() {
   return (
     <>
       <SelectionNode v={v} />
+      <CornerNode v={v} />
       {draft && <DraftNode draft={draft} v={v} />}
       {snap && <SnapNode snap={snap} v={v} />}
     </>
