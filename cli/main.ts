@@ -1,6 +1,6 @@
 /**
  * Kern's command line: `kern props FILE`, `kern cut FILE --y VALUE`, `kern report FILE ...`,
- * `kern compare BASE PROPOSED`, `kern netsection FILE --from X,Y --to X,Y`.
+ * `kern compare BASE PROPOSED`, `kern netsection FILE --from X,Y --to X,Y`, `kern stress FILE --Mx ...`.
  * Run with `npm run -s cli -- <command> ...`. Exit codes: 0 ok, 2 bad input or usage, 1 internal.
  */
 import { readFileSync } from 'node:fs';
@@ -15,6 +15,7 @@ import {
   oneSidedWidths,
   parseDocument,
   propertiesJson,
+  sectionExtrasJson,
   sectionOf,
   VariantError,
   PROPERTY_CATALOG,
@@ -40,6 +41,12 @@ const USAGE = `Usage:
                                            and after, limits with a within/beyond verdict, cautions
   kern netsection FILE --from X,Y --to X,Y [--json]
                                            gross and net length along a line, each hole or gap
+  kern stress FILE [--N F] [--Mx M] [--My M] [--at X,Y]... [--V F --cut y=VALUE|x=VALUE] [--json]
+                                           normal stresses under N, Mx, My (loads not given come
+                                           from the document), largest tension and compression,
+                                           neutral axis, σ at points, τ = VQ/(Ib) at a cut; units
+                                           as the document states or --force U --stress U
+                                           --moment-length U
 Options: --units U  (mm, cm, m, in, ft) for a DXF file that does not state its units
          --variant NAME  (props, cut, inertia) a proposal of the document instead of its baseline`;
 
@@ -89,7 +96,7 @@ export async function loadFile(path: string, units?: string): Promise<Loaded> {
 
 /** `props --json`: the units, every catalogue property (full precision) and the warnings. */
 function propsJson(doc: SectionDocument, ev: Evaluation, p: SectionProperties, warnings: string[]) {
-  return { units: doc.units, ...propertiesJson(p), warnings: [...warnings, ...ev.warnings.map(formatIssue)] };
+  return { units: doc.units, ...propertiesJson(p), ...sectionExtrasJson(doc, ev), warnings: [...warnings, ...ev.warnings.map(formatIssue)] };
 }
 
 function table(rows: [string, string, string][]): string {
@@ -154,6 +161,7 @@ export async function main(argv: string[]): Promise<number> {
       });
       out(`${r.doc.name ?? a.positional[0]} (${r.doc.units})`);
       out(table(rows));
+      for (const line of (await import('./materials-props')).materialsPropsText(r.doc, r.ev)) out(line);
       for (const w of [...r.warnings, ...r.ev.warnings.map(formatIssue)]) out(`warning: ${w}`);
       out(CAUTION_TEXT);
       return 0;
@@ -205,6 +213,7 @@ export async function main(argv: string[]): Promise<number> {
     }
     if (cmd === 'compare') return await (await import('./compare')).compareCommand(rest);
     if (cmd === 'netsection') return await (await import('./netsection')).netsectionCommand(rest);
+    if (cmd === 'stress') return await (await import('./stress')).stressCommand(rest);
     if (cmd === undefined || cmd === 'help' || cmd === '--help' || cmd === '-h') {
       out(USAGE);
       return cmd === undefined ? 2 : 0;

@@ -51,3 +51,4 @@ export type { Caution, CautionKind, CautionSeverity, CutoutFindings, InputShape,
 export { netSection, describeGap, NetSectionError, NET_SECTION_PURPOSE, NET_SECTION_CAUTION, type NetSection, type NetGap, type GapKind } from './netsection';
 export * from './lines';
 export * from './materials';
+export * from './analysis';
