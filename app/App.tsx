@@ -14,6 +14,10 @@ import { ReportOverlay } from './ui/ReportOverlay';
 import { ExchangeDialogs } from './exchange/ExchangeDialogs';
 import { TitleBlockDialog } from './ui/TitleBlock';
 import { downloadBlob } from './exchange/exports';
+import { LoadsPanel } from './panel/LoadsPanel';
+import { MaterialResults } from './panel/MaterialResults';
+import { MaterialLegend } from './ui/MaterialLegend';
+import { MaterialsDialog } from './ui/MaterialsDialog';
 
 export function App({ editor }: { editor: EditorHandle }) {
   const fileInput = useRef<HTMLInputElement>(null);
@@ -38,6 +42,7 @@ export function App({ editor }: { editor: EditorHandle }) {
         <ToolRail />
         <main className="stage">
           <Canvas />
+          <MaterialLegend />
           <Notice />
         </main>
         <aside className="panel" aria-label="Selection and results">
@@ -49,6 +54,8 @@ export function App({ editor }: { editor: EditorHandle }) {
           </div>
           <div className="panel-scroll panel-results">
             <ResultsPanel />
+            <MaterialResults />
+            <LoadsPanel />
             <CutPanel />
           </div>
           <Caution />
@@ -57,6 +64,7 @@ export function App({ editor }: { editor: EditorHandle }) {
         <ReportOverlay />
         <ExchangeDialogs />
         <TitleBlockDialog />
+        <MaterialsDialog />
         <input
           ref={fileInput}
           type="file"

@@ -14,6 +14,10 @@ import { InteractionLayer } from './layers/Interaction';
 import { OverlayLayer } from './layers/Overlays';
 import { ProblemLayer } from './layers/Problems';
 import { ShapesLayer } from './layers/Shapes';
+import { MaterialsLayer } from './layers/Materials';
+import { StressMapLayer, StressMarksLayer } from './layers/Stress';
+import { KernLayer } from './layers/Kern';
+import { GravityLayer } from './layers/Gravity';
 
 function isField(t: EventTarget | null): boolean {
   return t instanceof HTMLInputElement || t instanceof HTMLTextAreaElement || t instanceof HTMLSelectElement;
@@ -106,7 +110,12 @@ export function Canvas() {
             compositing copies each changed canvas every frame. */}
         <Layer listening={false}>
           <ShapesLayer />
+          <MaterialsLayer />
+          <StressMapLayer />
           <OverlayLayer />
+          <KernLayer />
+          <GravityLayer />
+          <StressMarksLayer />
           <ProblemLayer />
           <InteractionLayer />
         </Layer>

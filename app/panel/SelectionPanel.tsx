@@ -12,6 +12,7 @@ import { useApply } from '../fields/shape-edit';
 import { ShapeFields } from '../shapes';
 import { activeSection } from '../store/section';
 import { HINT } from '../input-syntax';
+import { MaterialSelect } from '../fields/MaterialSelect';
 
 const OP_LABEL: Record<Op, string> = { add: 'Add', subtract: 'Subtract', intersect: 'Intersect' };
 
@@ -82,6 +83,7 @@ export function SelectionPanel() {
           ))}
         </div>
       )}
+      <MaterialSelect shapes={shapes} />
       {one && (
         <div className="fields" key={one.id}>
           <label className="field">
