@@ -12,6 +12,8 @@
  */
 import {
   analyseLoadCase,
+  axisAngle,
+  tensionSide,
   documentLoadUnits,
   formatIssue,
   formatNumber,
@@ -122,7 +124,7 @@ function printText(doc: SectionDocument, file: string, lc: LoadCase, points: Ret
     for (const e of lc.extremes.byMaterial) out(`  ${materialName(doc, e.material)}: largest ${s(e.max.value)} at ${at(e.max, size)}, smallest ${s(e.min.value)} at ${at(e.min, size)}`);
   }
   const na = lc.axis;
-  out(na ? `Neutral axis          through ${at(na.point, size)} ${L}, along (${formatNumber(na.direction.x)}, ${formatNumber(na.direction.y)}); tension on its left` : 'Neutral axis          none (no bending: the stress is the same everywhere in each material)');
+  out(na ? `Neutral axis          through ${at(na.point, size)} ${L}, at ${formatNumber(axisAngle(na.direction), 4, 90)}° from x; the fibres ${tensionSide(lc)} it are in tension` : 'Neutral axis          none (no bending: the stress is the same everywhere in each material)');
   for (const p of points) {
     if (!p.inside) out(`At ${at(p, size)}: outside the section`);
     else out(`At ${at(p, size)}: ${p.stresses.map((q) => `σ = ${s(q.value)}${doc.materials?.length ? ` (${materialName(doc, q.material)})` : ''}`).join(', ')}`);

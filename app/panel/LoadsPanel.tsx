@@ -5,7 +5,7 @@
  * at the cut line; the sign convention and the cautions. A section without materials is taken as
  * one material, so stresses work on any section.
  */
-import { FORCE_UNITS, formatNumber, formatQuantity, SIGN_CONVENTION, STRESS_CAUTION, sectionSize, stressAt, STRESS_UNITS, UNITS, type ForceUnit, type LoadCase, type StressPoint, type StressUnit, type Units } from '../../src';
+import { axisAngle, tensionSide, FORCE_UNITS, formatNumber, formatQuantity, SIGN_CONVENTION, STRESS_CAUTION, sectionSize, stressAt, STRESS_UNITS, UNITS, type ForceUnit, type LoadCase, type StressPoint, type StressUnit, type Units } from '../../src';
 import { useEditor, useEditorState, useResults } from '../context';
 import { CommitInput } from '../fields/CommitInput';
 import { useLoadCase, useStressSection } from '../materials/derived';
@@ -106,10 +106,7 @@ function Extremes({ lc, size, units }: { lc: LoadCase; size: number; units: Unit
 function NeutralAxisRow({ lc, size, units }: { lc: LoadCase; size: number; units: Units }) {
   const na = lc.axis;
   if (!na) return <p className="mat-note" data-prop="stress.neutral_axis" data-value="NaN">Neutral axis: none (no bending: the stress is the same all over each material).</p>;
-  // Angle of the axis from +x, in (−90°, 90°].
-  let deg = (Math.atan2(na.direction.y, na.direction.x) * 180) / Math.PI;
-  if (deg <= -90) deg += 180;
-  if (deg > 90) deg -= 180;
+  const deg = axisAngle(na.direction);
   return (
     <ValueRow
       prop="stress.neutral_axis"
@@ -118,7 +115,7 @@ function NeutralAxisRow({ lc, size, units }: { lc: LoadCase; size: number; units
       value={deg}
       text={formatNumber(deg, 4, 90)}
       unit="°"
-      place={`through (${formatQuantity(na.point.x, 1, size)}, ${formatQuantity(na.point.y, 1, size)}) ${units}`}
+      place={`through (${formatQuantity(na.point.x, 1, size)}, ${formatQuantity(na.point.y, 1, size)}) ${units}; tension ${tensionSide(lc)} it`}
       extra={{ 'data-x': String(na.point.x), 'data-y': String(na.point.y), 'data-dx': String(na.direction.x), 'data-dy': String(na.direction.y) }}
     />
   );

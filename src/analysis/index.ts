@@ -5,7 +5,8 @@
  */
 export { documentLoadUnits, loadUnitTexts, type UnitFields } from './units';
 export { stressSection, sectionContours, ONE_MATERIAL, ONE_MATERIAL_ID, type StressSection, type EvaluatedSection } from './stress-section';
-export { analyseLoadCase, noNormalLoad, type LoadCase, type CutLine } from './load-case';
+export { analyseLoadCase, noNormalLoad, tensionSide, axisAngle, type LoadCase, type CutLine } from './load-case';
 export { kernOfSection, type KernResult } from './kern';
-export { plasticOfSection, type PlasticResult } from './plastic';
+export { plasticOfSection, plasticInLoadUnits, rawPlastic, type PlasticResult, type PlasticOutcome } from './plastic';
 export { sectionExtrasJson, type SectionExtrasJson } from './props-json';
+export { materialColour, materialColours, stressColour, withAlpha, STRESS_INK } from './palette';

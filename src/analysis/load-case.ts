@@ -72,3 +72,24 @@ export function analyseLoadCase(section: MixedSection, loads: Loads | undefined,
     cautions,
   };
 }
+
+/**
+ * In words, the side of the neutral axis where the stress is tensile: the direction in which σ/n
+ * grows (the gradient (b, c) of the field), named by the nearest of eight compass directions on
+ * the drawing ('above', 'below left', ...). Null without bending.
+ */
+export function tensionSide(lc: Pick<LoadCase, 'field'>): string | null {
+  const { b, c } = lc.field;
+  if (!(Math.hypot(b, c) > 0)) return null;
+  const names = ['right', 'above right', 'above', 'above left', 'left', 'below left', 'below', 'below right'];
+  const k = Math.round(Math.atan2(c, b) / (Math.PI / 4));
+  return names[(k + 8) % 8];
+}
+
+/** The neutral axis's angle from +x in degrees, in (−90°, 90°]. */
+export function axisAngle(direction: { x: number; y: number }): number {
+  let deg = (Math.atan2(direction.y, direction.x) * 180) / Math.PI;
+  if (deg <= -90) deg += 180;
+  if (deg > 90) deg -= 180;
+  return deg + 0;
+}

@@ -5,7 +5,7 @@
  */
 import { MaterialError } from '../materials/material';
 import type { MixedSection } from '../materials/mixed';
-import { compositePlastic, PLASTIC_CAUTION } from '../materials/plastic';
+import { compositePlastic, PLASTIC_CAUTION, type CompositePlastic } from '../materials/plastic';
 import { momentUnitText, resistanceMomentFactor, type LoadUnits } from '../materials/units';
 import { SectionError } from '../properties/section';
 
@@ -19,13 +19,25 @@ export interface PlasticResult {
   caution: string;
 }
 
-export function plasticOfSection(section: MixedSection, units: LoadUnits): { plastic: PlasticResult; message: null } | { plastic: null; message: string } {
+export type PlasticOutcome = { plastic: PlasticResult; message: null } | { plastic: null; message: string };
+
+/** The engine's plastic moments (stress unit × length³), or why there are none. */
+export function rawPlastic(section: MixedSection): CompositePlastic | { message: string } {
   try {
-    const p = compositePlastic(section.parts.map((q) => ({ material: q.material, region: q.region })));
-    const k = resistanceMomentFactor(units);
-    return { plastic: { x: { at: p.x.at, Mp: p.x.Mp * k }, y: { at: p.y.at, Mp: p.y.Mp * k }, unit: momentUnitText(units), caution: PLASTIC_CAUTION }, message: null };
+    return compositePlastic(section.parts.map((q) => ({ material: q.material, region: q.region })));
   } catch (e) {
     if (!(e instanceof SectionError) && !(e instanceof MaterialError)) throw e;
-    return { plastic: null, message: e.message };
+    return { message: e.message };
   }
+}
+
+/** Raw plastic moments in the unit loads are entered in. */
+export function plasticInLoadUnits(raw: CompositePlastic | { message: string }, units: LoadUnits): PlasticOutcome {
+  if ('message' in raw) return { plastic: null, message: raw.message };
+  const k = resistanceMomentFactor(units);
+  return { plastic: { x: { at: raw.x.at, Mp: raw.x.Mp * k }, y: { at: raw.y.at, Mp: raw.y.Mp * k }, unit: momentUnitText(units), caution: PLASTIC_CAUTION }, message: null };
+}
+
+export function plasticOfSection(section: MixedSection, units: LoadUnits): PlasticOutcome {
+  return plasticInLoadUnits(rawPlastic(section), units);
 }
