@@ -141,8 +141,8 @@ function printText(doc: SectionDocument, file: string, lc: LoadCase, points: Ret
 export async function stressCommand(args: string[]): Promise<number> {
   const { rest, values } = takeRepeated(args, 'at');
   const a = parseArgs(rest, [...LOAD_FLAGS, 'cut', 'force', 'stress', 'moment-length', 'variant', 'units']);
-  if (a.positional.length !== 1) throw new UsageError(a.positional.length ? `stress takes one FILE, got ${a.positional.length}` : 'missing FILE');
   for (const k of a.flags.keys()) if (![...LOAD_FLAGS, 'cut', 'force', 'stress', 'moment-length', 'variant', 'units', 'json'].includes(k)) throw new UsageError(`unknown option --${k}`);
+  if (a.positional.length !== 1) throw new UsageError(a.positional.length ? `stress takes one FILE, got ${a.positional.length}` : 'missing FILE');
   const given: Loads = {};
   for (const k of LOAD_FLAGS) {
     const v = number(a.flags.get(k), k);

@@ -16,6 +16,7 @@ import {
   FORCE_UNITS,
   formatIssue,
   kindOf,
+  shapeDisplayName,
   libraryMaterial,
   materialInStressUnit,
   MATERIAL_LIBRARY,
@@ -59,10 +60,10 @@ function commitChecked(ctx: CommandContext, next: SectionDocument, selected?: st
 
 /** Every shape of the document (baseline and proposals) with the place it is shown at. */
 function everyShape(doc: SectionDocument): { shape: Shape; where: string }[] {
-  const out = doc.shapes.map((shape, k) => ({ shape, where: shape.name ?? `shape ${k + 1}` }));
+  const out = doc.shapes.map((shape, k) => ({ shape, where: shapeDisplayName(shape, k) }));
   for (const v of doc.variants ?? []) {
     v.shapes.forEach((e, k) => {
-      if (typeof e !== 'string') out.push({ shape: e, where: `${e.name ?? `shape ${k + 1}`} in proposal "${v.name}"` });
+      if (typeof e !== 'string') out.push({ shape: e, where: `${shapeDisplayName(e, k)} in proposal "${v.name}"` });
     });
   }
   return out;

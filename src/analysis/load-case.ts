@@ -75,13 +75,14 @@ export function analyseLoadCase(section: MixedSection, loads: Loads | undefined,
 
 /**
  * In words, the side of the neutral axis where the stress is tensile: the direction in which σ/n
- * grows (the gradient (b, c) of the field), named by the nearest of eight compass directions on
- * the drawing ('above', 'below left', ...). Null without bending.
+ * grows (the gradient (b, c) of the field), named by the nearest of eight directions on the
+ * drawing, worded to read before "it" ('above', 'to the left of', 'below and to the right of').
+ * Null without bending.
  */
 export function tensionSide(lc: Pick<LoadCase, 'field'>): string | null {
   const { b, c } = lc.field;
   if (!(Math.hypot(b, c) > 0)) return null;
-  const names = ['right', 'above right', 'above', 'above left', 'left', 'below left', 'below', 'below right'];
+  const names = ['to the right of', 'above and to the right of', 'above', 'above and to the left of', 'to the left of', 'below and to the left of', 'below', 'below and to the right of'];
   const k = Math.round(Math.atan2(c, b) / (Math.PI / 4));
   return names[(k + 8) % 8];
 }

@@ -297,7 +297,7 @@ function loadsBlock(doc: SectionDocument, s: MixedSection, lc: LoadCase, marks: 
     ? '<p class="small">N, Mx and My are zero: there is no normal stress.</p>'
     : table(['Mark', 'Stress', 'Material', `σ (${e(u.stress)})`, `At (${e(L)})`], markRows);
   const na = lc.axis
-    ? `Neutral axis (σ = 0): through ${at(lc.axis.point)} ${e(L)}, at ${e(formatNumber(axisAngle(lc.axis.direction), 4, 90))}° from x; the fibres ${e(tensionSide(lc))} of it are in tension.`
+    ? `Neutral axis (σ = 0): through ${at(lc.axis.point)} ${e(L)}, at ${e(formatNumber(axisAngle(lc.axis.direction), 4, 90))}° from x; the fibres ${e(tensionSide(lc))} it are in tension.`
     : 'Neutral axis: none (no bending).';
   let shear = '';
   if (lc.shear && lc.loads.V !== 0) {
