@@ -161,23 +161,52 @@ function Probe({ lc }: { lc: LoadCase }) {
   );
 }
 
+/** Put the cut line through the transformed centroid (where VQ/(Ib) of a rectangle-like section peaks), showing it if hidden. */
+function CutAtCentroid({ label }: { label: string }) {
+  const editor = useEditor();
+  const { section } = useStressSection();
+  if (!section) return null;
+  return (
+    <button
+      className="btn small"
+      data-testid="cut-at-centroid"
+      onClick={() => {
+        const s = editor.store.getState();
+        const c = section.transformed.centroid;
+        editor.store.setState({ overlays: { ...s.overlays, cut: true }, cutAt: s.cutAxis === 'y' ? c.y : c.x });
+      }}
+    >
+      {label}
+    </button>
+  );
+}
+
 function Shear({ lc, units }: { lc: LoadCase; units: Units }) {
   const sh = lc.shear;
-  if (!sh) return <p className="mat-note">τ = VQ/(Ib): show the cut line (K) and enter V.</p>;
+  if (!sh)
+    return (
+      <p className="mat-note">
+        τ = VQ/(Ib) is given at the cut line: <CutAtCentroid label="Show the cut through the centroid" />
+      </p>
+    );
   const where = `${sh.axis} = ${formatNumber(sh.at, 6)} ${units}`;
   return (
     <div className="prop-group">
-      <h3>Shear at the cut line, {where}</h3>
+      <h3>Shear at the cut line</h3>
       {sh.tau === null ? (
         <p className="mat-note" data-prop="stress.tau" data-value="NaN">
-          The cut misses the section (b = 0).
+          The cut at {where} misses the section (b = 0).
         </p>
       ) : (
-        <ValueRow prop="stress.tau" symbol="τ" label="VQ/(I·b), transformed Q and I, actual b" value={sh.tau} text={formatNumber(sh.tau)} unit={lc.units.stress} place={`V = ${formatNumber(sh.V)} ${lc.units.force}, b = ${formatNumber(sh.width)} ${units}`} />
+        <ValueRow prop="stress.tau" symbol="τ" label="VQ/(I·b), transformed Q and I, actual b" value={sh.tau} text={formatNumber(sh.tau)} unit={lc.units.stress} place={`at ${where}: V = ${formatNumber(sh.V)} ${lc.units.force}, b = ${formatNumber(sh.width)} ${units}`} />
       )}
       {sh.tauUnsymmetric !== null && sh.tau !== null && Math.abs(sh.tauUnsymmetric - sh.tau) > 1e-9 * Math.abs(sh.tau) && (
         <ValueRow prop="stress.tau_unsymmetric" symbol="τ′" label="The same with Ixy included" value={sh.tauUnsymmetric} text={formatNumber(sh.tauUnsymmetric)} unit={lc.units.stress} />
       )}
+      <p className="mat-note">
+        {lc.field.parts.length > 1 || lc.field.parts[0]?.n !== 1 ? 'Q and I here are those of the transformed section; the cut panel below gives the geometric Q and b. ' : ''}
+        Drag the cut line on the canvas or type its place in the cut panel. <CutAtCentroid label="Through the centroid" />
+      </p>
     </div>
   );
 }
