@@ -3,8 +3,8 @@
  * that a material and a stress have one colour everywhere. A material's fill follows its family
  * when its id or name says which (steel, stainless, aluminium, timber, concrete, glass), so a steel
  * plate on timber reads at a glance; other materials take the next colour of a fixed list by
- * their place in the document's list. Stresses run from compression (blue) through zero (paper)
- * to tension (red), symmetric about zero.
+ * their place in the document's list. Stresses run from compression (blue) through a light grey
+ * at zero to tension (red), symmetric about zero.
  */
 import type { Material } from '../materials/material';
 
@@ -38,7 +38,8 @@ export function withAlpha(hex: string, alpha: number): string {
 }
 
 const COMPRESSION = [47, 95, 158];
-const ZERO = [246, 243, 234];
+// Zero is a light grey, not the paper colour, so a part with little stress still reads as material.
+const ZERO = [218, 217, 210];
 const TENSION = [184, 67, 47];
 
 /** The colour of a stress t = σ / peak, t in [−1, 1] (clamped): blue, paper, red. */
