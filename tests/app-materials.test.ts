@@ -151,6 +151,9 @@ describe('commands and the stress probe', () => {
     expect(materialsUi(e.store).getState().probe).toEqual([50, 200]);
     expect(e.type('d 0, -10')).toBeNull();
     expect(materialsUi(e.store).getState().probe).toEqual([50, 190]);
+    // A new length unit carries the point with the section: 50 mm = 5 cm.
+    e.run('units.set', 'cm');
+    expect(materialsUi(e.store).getState().probe).toEqual([5, 19]);
     e.tool().key(e.env, 'escape');
     expect(e.store.getState().tool).toBe('select');
     expect(e.run('material.assign', 'x')).toBe(false); // nothing selected

@@ -5,7 +5,7 @@
  * document or of undo.
  */
 import { createStore, type StoreApi } from 'zustand/vanilla';
-import type { Point } from '../../src';
+import { unitFactor, type Point } from '../../src';
 import type { EditorStore } from '../store/store';
 
 export interface MaterialsUiState {
@@ -23,8 +23,17 @@ const stores = new WeakMap<EditorStore, MaterialsUiStore>();
 export function materialsUi(editorStore: EditorStore): MaterialsUiStore {
   let s = stores.get(editorStore);
   if (!s) {
-    s = createStore<MaterialsUiState>()(() => ({ dialogOpen: false, probe: null, idleTick: 0 }));
-    stores.set(editorStore, s);
+    const ui = createStore<MaterialsUiState>()(() => ({ dialogOpen: false, probe: null, idleTick: 0 }));
+    // The probed point is a place on the section: it follows a change of the document's units.
+    editorStore.subscribe((st, prev) => {
+      const p = ui.getState().probe;
+      if (p && st.doc.units !== prev.doc.units) {
+        const f = unitFactor(prev.doc.units, st.doc.units);
+        ui.setState({ probe: [p[0] * f, p[1] * f] });
+      }
+    });
+    stores.set(editorStore, ui);
+    s = ui;
   }
   return s;
 }
