@@ -162,6 +162,14 @@ export const tests = [
       assert.match(await page.textContent('[data-error-for="steel-s355.E"]'), /materials\[0\]\.E: the elastic modulus E must be a number greater than 0, got -1/);
       assert.equal(await page.evaluate(() => JSON.stringify(window.__kern.editor.store.getState().doc)), docBefore);
       await page.press('[data-field="steel-s355.E"]', 'Escape');
+      // A material typed in by hand: fill the fields and press Add straight away.
+      await page.fill('[data-field="new.name"]', 'Glulam GL28h');
+      await page.fill('[data-field="new.E"]', '12600');
+      await page.fill('[data-field="new.fy"]', '28');
+      await page.fill('[data-field="new.density"]', '460');
+      await page.click('[data-testid="hand-add"]');
+      const added = await page.evaluate(() => window.__kern.editor.store.getState().doc.materials.find((m) => m.id === 'glulam-gl28h'));
+      assert.deepEqual(added, { id: 'glulam-gl28h', name: 'Glulam GL28h', E: 12600, density: 460, fy: 28 });
       // Give a shape the steel explicitly, then try to remove it.
       await page.click('[data-testid="materials-close"]');
       await page.click('[data-shape="flat"]');

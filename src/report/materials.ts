@@ -337,7 +337,7 @@ export function renderMaterialsReport(input: MaterialsReportInput): string {
   const fig = figure(doc, s, lc, kern.points, st.oneMaterial, marks);
   const bits = [
     `Drawn to scale ${fig.scale} on the printed page.`,
-    st.oneMaterial ? 'C = centroid.' : 'Fill = material (see the materials table); C = centroid of the area; G = centre of gravity.',
+    st.oneMaterial ? 'C = centroid.' : `${marks.length ? '' : 'Fill = material (see the materials table); '}C = centroid of the area; G = centre of gravity.`,
     kern.points ? `Green = kern (core, of the ${st.oneMaterial ? '' : 'transformed '}section): an axial compression applied inside it causes no tension.` : `No kern: ${kern.message}`,
   ];
   if (lc && !lc.unloaded) bits.push('Colours = normal stress under the loads below (scale beside); n.a. = neutral axis; numbered marks = largest stresses, listed under Loads and stresses.');
