@@ -5,7 +5,7 @@
  * at the cut line; the sign convention and the cautions. A section without materials is taken as
  * one material, so stresses work on any section.
  */
-import { axisAngle, tensionSide, FORCE_UNITS, formatNumber, formatQuantity, SIGN_CONVENTION, STRESS_CAUTION, sectionSize, stressAt, STRESS_UNITS, UNITS, type ForceUnit, type LoadCase, type StressPoint, type StressUnit, type Units } from '../../src';
+import { axisAngle, tensionSide, KERN_CAUTION, FORCE_UNITS, formatNumber, formatQuantity, SIGN_CONVENTION, STRESS_CAUTION, sectionSize, stressAt, STRESS_UNITS, UNITS, type ForceUnit, type LoadCase, type StressPoint, type StressUnit, type Units } from '../../src';
 import { useEditor, useEditorState, useResults } from '../context';
 import { CommitInput } from '../fields/CommitInput';
 import { useLoadCase, useStressSection } from '../materials/derived';
@@ -211,8 +211,17 @@ function Shear({ lc, units }: { lc: LoadCase; units: Units }) {
   );
 }
 
+/** The cautions of the load case, with the kern's before the deferral to the code when the kern is shown. */
+function withKernCaution(cautions: string[], kern: boolean): string[] {
+  if (!kern) return cautions;
+  const out = cautions.slice();
+  out.splice(Math.max(0, out.length - 1), 0, KERN_CAUTION);
+  return out;
+}
+
 export function LoadsPanel() {
   const lc = useLoadCase();
+  const kernShown = useEditorState((s) => s.overlays.kern);
   const { section, oneMaterial, message } = useStressSection();
   const units = useResults((r) => r.doc.units);
   const size = section ? sectionSize(section.bounds) : 0;
@@ -241,8 +250,8 @@ export function LoadsPanel() {
             {SIGN_CONVENTION}
           </details>
           <ul className="mat-cautions" data-testid="stress-cautions">
-            {lc.cautions.map((c, i) => (
-              <li key={i} className={c === STRESS_CAUTION || /^(The transformed|Check the design)/.test(c) ? '' : 'specific'}>
+            {withKernCaution(lc.cautions, kernShown).map((c, i) => (
+              <li key={i} className={c === STRESS_CAUTION || c === KERN_CAUTION || /^(The transformed|Check the design)/.test(c) ? '' : 'specific'}>
                 {c}
               </li>
             ))}
