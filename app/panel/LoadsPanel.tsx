@@ -249,13 +249,15 @@ export function LoadsPanel() {
             <summary>Sign convention: tension +; Mx &gt; 0 stretches the top, My &gt; 0 the left</summary>
             {SIGN_CONVENTION}
           </details>
-          <ul className="mat-cautions" data-testid="stress-cautions">
-            {withKernCaution(lc.cautions, kernShown).map((c, i) => (
-              <li key={i} className={c === STRESS_CAUTION || c === KERN_CAUTION || /^(The transformed|Check the design)/.test(c) ? '' : 'specific'}>
-                {c}
-              </li>
-            ))}
-          </ul>
+          {(!lc.unloaded || lc.loads.V !== 0 || kernShown) && (
+            <ul className="mat-cautions" data-testid="stress-cautions">
+              {withKernCaution(lc.cautions, kernShown).map((c, i) => (
+                <li key={i} className={c === STRESS_CAUTION || c === KERN_CAUTION || /^(The transformed|Check the design)/.test(c) ? '' : 'specific'}>
+                  {c}
+                </li>
+              ))}
+            </ul>
+          )}
         </>
       )}
     </section>
