@@ -17,6 +17,10 @@ import { TitleBlockDialog } from './ui/TitleBlock';
 import { downloadBlob } from './exchange/exports';
 import { FirstRunGuide } from './ui/FirstRunGuide';
 import { QuestionDialog } from './ui/QuestionDialog';
+import { LoadsPanel } from './panel/LoadsPanel';
+import { MaterialResults } from './panel/MaterialResults';
+import { MaterialLegend } from './ui/MaterialLegend';
+import { MaterialsDialog } from './ui/MaterialsDialog';
 
 export function App({ editor }: { editor: EditorHandle }) {
   const fileInput = useRef<HTMLInputElement>(null);
@@ -41,6 +45,7 @@ export function App({ editor }: { editor: EditorHandle }) {
         <ToolRail />
         <main className="stage">
           <Canvas />
+          <MaterialLegend />
           <Notice />
           <FirstRunGuide />
         </main>
@@ -54,6 +59,8 @@ export function App({ editor }: { editor: EditorHandle }) {
           <div className="panel-scroll panel-results">
             <ResultsPanel />
             <LineResults />
+            <MaterialResults />
+            <LoadsPanel />
             <CutPanel />
           </div>
           <Caution />
@@ -63,6 +70,7 @@ export function App({ editor }: { editor: EditorHandle }) {
         <ExchangeDialogs />
         <TitleBlockDialog />
         <QuestionDialog />
+        <MaterialsDialog />
         <input
           ref={fileInput}
           type="file"

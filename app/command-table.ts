@@ -35,6 +35,7 @@ import { canRedo, canUndo, redo, undo } from './store/history';
 import type { EditorState, Overlays } from './store/store';
 import { CommandRegistry, type CommandContext } from './commands/registry';
 import { activeShapes } from './store/section';
+import { registerMaterials } from './materials/commands';
 
 const OP_LABEL = { add: 'Add', subtract: 'Subtract', intersect: 'Intersect' } as const;
 const OP_KEY = { add: 'shift+a', subtract: 'shift+s', intersect: 'shift+i' } as const;
@@ -201,6 +202,7 @@ export function buildRegistry(): CommandRegistry {
   registerEdits(r);
   registerView(r);
   registerFiles(r);
+  registerMaterials(r);
   return r;
 }
 

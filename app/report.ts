@@ -10,6 +10,8 @@ export interface ReportRequest {
   evaluation: Evaluation;
   cut?: { axis: 'x' | 'y'; at: number } | null;
   generated?: string;
+  /** Draw the kern in the report even without materials or loads (the kern view is on). */
+  kern?: boolean;
 }
 
 export type ReportRenderer = (input: ReportRequest) => string;

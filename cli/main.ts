@@ -1,6 +1,6 @@
 /**
  * Kern's command line: `kern props FILE`, `kern cut FILE --y VALUE`, `kern report FILE ...`,
- * `kern compare BASE PROPOSED`, `kern netsection FILE --from X,Y --to X,Y`, `kern weld FILE`.
+ * `kern compare BASE PROPOSED`, `kern netsection FILE --from X,Y --to X,Y`, `kern weld FILE`, `kern stress FILE --Mx ...`.
  * Run with `npm run -s cli -- <command> ...`. Exit codes: 0 ok, 2 bad input or usage, 1 internal.
  */
 import { readFileSync } from 'node:fs';
@@ -15,6 +15,7 @@ import {
   oneSidedWidths,
   parseDocument,
   propertiesJson,
+  sectionExtrasJson,
   sectionOf,
   VariantError,
   PROPERTY_CATALOG,
@@ -46,6 +47,12 @@ const USAGE = `Usage:
                                            in the document's force unit, kN if unset; M + CCW in
                                            force x momentLength); the largest force per length
   kern schema [--version 1|2]              JSON Schema of the section document, for editors
+  kern stress FILE [--N F] [--Mx M] [--My M] [--at X,Y]... [--V F --cut y=VALUE|x=VALUE] [--json]
+                                           normal stresses under N, Mx, My (loads not given come
+                                           from the document), largest tension and compression,
+                                           neutral axis, σ at points, τ = VQ/(Ib) at a cut; units
+                                           as the document states or --force U --stress U
+                                           --moment-length U
 Options: --units U  (mm, cm, m, in, ft) for a DXF file that does not state its units
          --variant NAME  (props, cut, inertia, weld) a proposal of the document instead of its baseline
 Line elements: props gives each line group (length, centroid, Ix, Iy, Ixy, J per unit
@@ -98,7 +105,7 @@ export async function loadFile(path: string, units?: string): Promise<Loaded> {
 
 /** `props --json`: the units, every catalogue property (full precision) and the warnings. */
 function propsJson(doc: SectionDocument, ev: Evaluation, p: SectionProperties, warnings: string[]) {
-  return { units: doc.units, ...propertiesJson(p), warnings: [...warnings, ...ev.warnings.map(formatIssue)] };
+  return { units: doc.units, ...propertiesJson(p), ...sectionExtrasJson(doc, ev), warnings: [...warnings, ...ev.warnings.map(formatIssue)] };
 }
 
 function table(rows: [string, string, string][]): string {
@@ -173,6 +180,7 @@ export async function main(argv: string[]): Promise<number> {
         });
         out(table(rows));
       } else out(`Area properties: absent. ${r.ev.message ?? ''}`.trim());
+      for (const line of (await import('./materials-props')).materialsPropsText(r.doc, r.ev)) out(line);
       if (r.ev.lines.length) out(lines.linesTable(r.ev, r.doc.units));
       for (const w of [...r.warnings, ...r.ev.warnings.map(formatIssue)]) out(`warning: ${w}`);
       out(CAUTION_TEXT);
@@ -227,6 +235,7 @@ export async function main(argv: string[]): Promise<number> {
     if (cmd === 'netsection') return await (await import('./netsection')).netsectionCommand(rest);
     if (cmd === 'weld') return await (await import('./lines')).weldCommand(rest);
     if (cmd === 'schema') return (await import('./schema')).schemaCommand(rest);
+    if (cmd === 'stress') return await (await import('./stress')).stressCommand(rest);
     if (cmd === undefined || cmd === 'help' || cmd === '--help' || cmd === '-h') {
       out(USAGE);
       return cmd === undefined ? 2 : 0;

@@ -15,6 +15,10 @@ import { OverlayLayer } from './layers/Overlays';
 import { ProblemLayer } from './layers/Problems';
 import { ShapesLayer } from './layers/Shapes';
 import { WeldLayer } from './layers/Welds';
+import { MaterialsLayer } from './layers/Materials';
+import { StressMapLayer, StressMarksLayer } from './layers/Stress';
+import { KernLayer } from './layers/Kern';
+import { GravityLayer } from './layers/Gravity';
 
 function isField(t: EventTarget | null): boolean {
   return t instanceof HTMLInputElement || t instanceof HTMLTextAreaElement || t instanceof HTMLSelectElement;
@@ -107,8 +111,13 @@ export function Canvas() {
             compositing copies each changed canvas every frame. */}
         <Layer listening={false}>
           <ShapesLayer />
+          <MaterialsLayer />
+          <StressMapLayer />
           <OverlayLayer />
           <WeldLayer />
+          <KernLayer />
+          <GravityLayer />
+          <StressMarksLayer />
           <ProblemLayer />
           <InteractionLayer />
         </Layer>

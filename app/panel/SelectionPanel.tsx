@@ -13,6 +13,7 @@ import { ShapeFields } from '../shapes';
 import { activeSection } from '../store/section';
 import { HINT } from '../input-syntax';
 import { RoundCorner } from './RoundCorner';
+import { MaterialSelect } from '../fields/MaterialSelect';
 
 const OP_LABEL: Record<Op, string> = { add: 'Add', subtract: 'Subtract', intersect: 'Intersect' };
 
@@ -83,6 +84,7 @@ export function SelectionPanel() {
           ))}
         </div>
       )}
+      <MaterialSelect shapes={shapes} />
       {one && (
         <div className="fields" key={one.id}>
           <label className="field">

@@ -55,6 +55,10 @@ export interface Overlays {
   principal: boolean;
   fibres: boolean;
   cut: boolean;
+  /** The kern (core) of the section. */
+  kern: boolean;
+  /** Stress colour map, neutral axis and largest stresses under the document's loads. */
+  stress: boolean;
 }
 
 export interface Notice {
@@ -107,7 +111,7 @@ export function createEditorStore(doc: SectionDocument): EditorStore {
     oy: 400,
     width: 800,
     height: 600,
-    overlays: { centroid: true, principal: false, fibres: false, cut: false },
+    overlays: { centroid: true, principal: false, fibres: false, cut: false, kern: false, stress: true },
     cutAxis: 'y',
     cutAt: null,
     notice: null,

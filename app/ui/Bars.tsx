@@ -35,6 +35,7 @@ export function TopBar() {
         <CommandButton name="file.importDxf">Import DXF…</CommandButton>
         <CommandButton name="file.export">Export…</CommandButton>
         <CommandButton name="doc.titleBlock">Title block…</CommandButton>
+        <CommandButton name="materials.open">Materials…</CommandButton>
       </div>
       <div className="group">
         <CommandButton name="undo" />
@@ -77,6 +78,8 @@ export function ToolRail() {
         <CommandButton name="view.principal" />
         <CommandButton name="view.fibres" />
         <CommandButton name="view.cut" />
+        <CommandButton name="view.kern" />
+        <CommandButton name="view.stress" />
         <CommandButton name="view.fit" />
       </div>
     </nav>

@@ -28,6 +28,7 @@ import { renderSectionFigure } from './figure';
 import { renderQbDiagram } from './qb-chart';
 import { renderLineReport } from './lines';
 import { frameNotes, listingSummary, paramsText, renderScheduleTables, shapeSchedule } from './schedule';
+import { MATERIALS_CSS, renderMaterialsReport } from './materials';
 
 export interface ReportInput {
   doc: SectionDocument;
@@ -37,6 +38,8 @@ export interface ReportInput {
   generated?: string;
   /** Paper size for printing; the browser's default when absent. */
   paper?: 'A4' | 'Letter';
+  /** Draw the kern even for a section of one material without loads (src/report/materials.ts). */
+  kern?: boolean;
 }
 
 export const METHOD_NOTE =
@@ -274,6 +277,7 @@ export function renderReportHtml(input: ReportInput): string {
   if (notes.length > 0) body.push(`<section class="block"><h2>Notes from the evaluation</h2><ul class="small">${notes.join('')}</ul></section>`);
   if (props) body.push(propertyTable(input));
   if (props && cut) body.push(renderQbDiagram(evaluation.region, props, units, cut));
+  if (props) body.push(renderMaterialsReport(input));
   const lines = renderLineReport(input);
   if (lines) body.push(lines);
   body.push(
@@ -287,7 +291,7 @@ export function renderReportHtml(input: ReportInput): string {
     `<!DOCTYPE html>\n<html lang="en"><head><meta charset="utf-8">` +
     `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">` +
     `<meta name="viewport" content="width=device-width, initial-scale=1">` +
-    `<title>${escapeHtml(`Section properties: ${heading}`)}</title><style>${pageCss(`Section properties: ${heading}${input.generated ? ` · generated ${input.generated}` : ''}`, input.paper)}${CSS}</style></head>` +
+    `<title>${escapeHtml(`Section properties: ${heading}`)}</title><style>${pageCss(`Section properties: ${heading}${input.generated ? ` · generated ${input.generated}` : ''}`, input.paper)}${CSS}${MATERIALS_CSS}</style></head>` +
     `<body>${body.join('\n')}</body></html>\n`
   );
 }
