@@ -4,6 +4,7 @@ import { EditorContext, type EditorHandle } from './context';
 import { installKeyboard } from './keyboard';
 import { loadDocumentText } from './ops/document';
 import { Canvas } from './canvas/Canvas';
+import { DimensionCaption } from './canvas/DimensionCaption';
 import { CutPanel } from './panel/CutPanel';
 import { Caution, ResultsPanel } from './panel/ResultsPanel';
 import { SelectionPanel } from './panel/SelectionPanel';
@@ -13,6 +14,7 @@ import { Notice } from './ui/Notice';
 import { ReportOverlay } from './ui/ReportOverlay';
 import { ExchangeDialogs } from './exchange/ExchangeDialogs';
 import { TitleBlockDialog } from './ui/TitleBlock';
+import { CheckerDialog } from './ui/CheckerDialog';
 import { downloadBlob } from './exchange/exports';
 
 export function App({ editor }: { editor: EditorHandle }) {
@@ -38,6 +40,7 @@ export function App({ editor }: { editor: EditorHandle }) {
         <ToolRail />
         <main className="stage">
           <Canvas />
+          <DimensionCaption />
           <Notice />
         </main>
         <aside className="panel" aria-label="Selection and results">
@@ -57,6 +60,7 @@ export function App({ editor }: { editor: EditorHandle }) {
         <ReportOverlay />
         <ExchangeDialogs />
         <TitleBlockDialog />
+        <CheckerDialog />
         <input
           ref={fileInput}
           type="file"

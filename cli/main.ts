@@ -10,6 +10,7 @@ import {
   evaluateDocument,
   formatIssue,
   formatNumber,
+  formatShapeIssue,
   formatProperty,
   inertiaAboutAxis,
   oneSidedWidths,
@@ -22,6 +23,7 @@ import {
   type SectionDocument,
   type SectionProperties,
 } from '../src';
+import { cutRows } from './cut-table';
 
 const USAGE = `Usage:
   kern props FILE [--json] [--variant NAME]
@@ -89,7 +91,7 @@ export async function loadFile(path: string, units?: string): Promise<Loaded> {
 
 /** `props --json`: the units, every catalogue property (full precision) and the warnings. */
 function propsJson(doc: SectionDocument, ev: Evaluation, p: SectionProperties, warnings: string[]) {
-  return { units: doc.units, ...propertiesJson(p), warnings: [...warnings, ...ev.warnings.map(formatIssue)] };
+  return { units: doc.units, ...propertiesJson(p), warnings: [...warnings, ...ev.warnings.map((w) => formatShapeIssue(w, doc.shapes))] };
 }
 
 function table(rows: [string, string, string][]): string {
@@ -130,7 +132,7 @@ async function evaluateFile(file: string | undefined, flags: Parsed['flags']) {
   const ev = evaluateDocument(doc);
   if (!ev.props) {
     err(`${file}: ${ev.message ?? 'the section has no area'}`);
-    for (const w of ev.warnings) err(`  warning: ${formatIssue(w)}`);
+    for (const w of ev.warnings) err(`  warning: ${formatShapeIssue(w, doc.shapes)}`);
     return null;
   }
   return { doc, ev, props: ev.props, warnings: loaded.warnings };
@@ -154,7 +156,7 @@ export async function main(argv: string[]): Promise<number> {
       });
       out(`${r.doc.name ?? a.positional[0]} (${r.doc.units})`);
       out(table(rows));
-      for (const w of [...r.warnings, ...r.ev.warnings.map(formatIssue)]) out(`warning: ${w}`);
+      for (const w of [...r.warnings, ...r.ev.warnings.map((i) => formatShapeIssue(i, r.doc.shapes))]) out(`warning: ${w}`);
       out(CAUTION_TEXT);
       return 0;
     }
@@ -175,14 +177,7 @@ export async function main(argv: string[]): Promise<number> {
       else {
         const side = xs !== undefined ? `right of x = ${at}` : `above y = ${at}`;
         out(`Part ${side} (${r.doc.units}):`);
-        out(
-          table([
-            ['Cut width b', String(c.width), r.doc.units],
-            ['Area beyond the cut', String(c.area), `${r.doc.units}²`],
-            ['Centroid of that part', c.centroid ? `(${c.centroid.x}, ${c.centroid.y})` : '—', r.doc.units],
-            ['First moment Q about the centroidal axis', String(c.Q), `${r.doc.units}³`],
-          ]),
-        );
+        out(table(cutRows(r.ev.region, r.props, xs !== undefined ? 'x' : 'y', at, r.doc.units)));
       }
       return 0;
     }

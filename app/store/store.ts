@@ -51,6 +51,8 @@ export interface Overlays {
   principal: boolean;
   fibres: boolean;
   cut: boolean;
+  /** Dimensions of holes, notches and plates, as on the report's figure (app/canvas/layers/Dimensions.tsx). */
+  dimensions: boolean;
 }
 
 export interface Notice {
@@ -73,6 +75,8 @@ export interface ViewSlice {
   cutAt: number | null;
   notice: Notice | null;
   reportOpen: boolean;
+  /** The dialog for the revision history, notes and "checked by" (app/ui/CheckerDialog.tsx). */
+  checkerOpen: boolean;
 }
 
 export type EditorState = DocumentSlice & SelectionSlice & ToolSlice & ViewSlice;
@@ -101,10 +105,11 @@ export function createEditorStore(doc: SectionDocument): EditorStore {
     oy: 400,
     width: 800,
     height: 600,
-    overlays: { centroid: true, principal: false, fibres: false, cut: false },
+    overlays: { centroid: true, principal: false, fibres: false, cut: false, dimensions: false },
     cutAxis: 'y',
     cutAt: null,
     notice: null,
     reportOpen: false,
+    checkerOpen: false,
   }));
 }

@@ -6,7 +6,7 @@
  */
 import type { SectionDocument } from '../document/types';
 import { createEvaluator, type Evaluation } from '../evaluate';
-import { formatIssue } from '../document/validate';
+import { formatShapeIssue } from '../document/issue-names';
 import { regionMoments } from '../moments/kernel';
 import type { Region } from '../geometry/contour';
 import {
@@ -143,8 +143,10 @@ function titleBlock(doc: SectionDocument): string {
     `<td><span class="label">${escapeHtml(label)}</span><span class="value" data-field="${escapeHtml(label.toLowerCase())}">${escapeHtml(value ?? '')}</span></td>`;
   return (
     `<table class="titleblock block"><tbody>` +
-    `<tr>${cell('Project', t.project)}${cell('Section', t.section ?? doc.name)}${cell('Units', doc.units)}${cell('Revision', t.revision || last?.revision)}</tr>` +
-    `<tr>${cell('Author', t.author)}${cell('Checker', t.checker || ck.checked?.by)}${cell('Date', t.date || last?.date)}<td><span class="label">Signature</span><span class="value"></span></td></tr>` +
+    // The revision history and the sign-off, when recorded, are the current state: the latest
+    // revision and the checker's name win over the title block's own fields.
+    `<tr>${cell('Project', t.project)}${cell('Section', t.section ?? doc.name)}${cell('Units', doc.units)}${cell('Revision', last?.revision || t.revision)}</tr>` +
+    `<tr>${cell('Author', t.author)}${cell('Checker', ck.checked?.by || t.checker)}${cell('Date', last?.date || t.date)}<td><span class="label">Signature</span><span class="value"></span></td></tr>` +
     `</tbody></table>`
   );
 }
@@ -265,7 +267,7 @@ export function renderReportHtml(input: ReportInput): string {
     sectionBlock = `<section class="block empty-section" data-empty="true"><h2>Section</h2><p class="empty-message">${escapeHtml(why)}</p></section>`;
   }
 
-  const notes = evaluation.warnings.map((w) => `<li>${escapeHtml(formatIssue(w))}</li>`);
+  const notes = evaluation.warnings.map((w) => `<li>${escapeHtml(formatShapeIssue(w, doc.shapes))}</li>`);
   const shapes = shapeTable(input, size);
   const body: string[] = [`<h1>Section properties: ${escapeHtml(heading)}</h1>`, titleBlock(doc), sectionBlock, shapes.html];
   if (notes.length > 0) body.push(`<section class="block"><h2>Notes from the evaluation</h2><ul class="small">${notes.join('')}</ul></section>`);

@@ -1,7 +1,8 @@
-/** What follows the pointer: the selection and its handles, the tool's draft, the snap target. */
+/** What follows the pointer: the selection, its handles and names, the tool's draft, the snap target. */
 import { useEditorShallow, useTransient } from '../../context';
 import { DraftNode } from './Draft';
 import { SelectionNode } from './Selection';
+import { ShapeNamesNode } from './ShapeNames';
 import { SnapNode } from './Snap';
 
 export function InteractionLayer() {
@@ -11,6 +12,7 @@ export function InteractionLayer() {
   return (
     <>
       <SelectionNode v={v} />
+      <ShapeNamesNode v={v} />
       {draft && <DraftNode draft={draft} v={v} />}
       {snap && <SnapNode snap={snap} v={v} />}
     </>
