@@ -31,6 +31,7 @@ export {
 } from './properties/section';
 export { propertiesJson, jsonValueAt, type PropertyJson } from './properties/json';
 export { CAUTION_TEXT, shearFormulaCaution } from './report/caution';
+export { emptySectionText } from './report/empty';
 export { PROPERTY_CATALOG, formatNumber, formatProperty, unitText, propertyByKey, DISPLAY_SIGFIGS, type PropertyInfo } from './properties/catalog';
 export { formatQuantity, parseFormatted, sectionSize, GEOMETRY_SIGFIGS, ZERO_RELATIVE } from './properties/catalog';
 export { oneSidedWidths, qbWidth, type OneSidedWidths, type QbSide } from './moments/width';

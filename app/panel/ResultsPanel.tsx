@@ -2,7 +2,7 @@
  * Live results: every property of the engine's catalogue, formatted by the engine's one
  * formatter. Each value carries data-prop (its key) and data-value (the full-precision number).
  */
-import { CAUTION_TEXT, formatProperty, formatShapeIssue, PROPERTY_CATALOG, UNITS, type PropertyInfo, type Units } from '../../src';
+import { CAUTION_TEXT, emptySectionText, formatProperty, formatShapeIssue, PROPERTY_CATALOG, UNITS, type PropertyInfo, type Units } from '../../src';
 import { useEditor, useEditorState, useResults } from '../context';
 import { activeSection } from '../store/section';
 
@@ -70,7 +70,7 @@ export function ResultsPanel() {
       </div>
       {ev.message && (
         <p className="result-message" data-testid="result-message">
-          {ev.message}
+          {ev.props ? ev.message : emptySectionText(section.shapes.length, ev.message)}
         </p>
       )}
       {ev.warnings.length > 0 && (

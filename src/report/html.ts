@@ -24,6 +24,7 @@ import {
 import { CAUTION_TEXT } from './caution';
 import { checkerFields, renderCheckerBlock } from './checker';
 import { escapeHtml } from './escape';
+import { emptySectionText } from './empty';
 import { renderSectionFigure } from './figure';
 import { renderQbDiagram } from './qb-chart';
 import { frameNotes, listingSummary, paramsText, renderScheduleTables, shapeSchedule } from './schedule';
@@ -260,10 +261,7 @@ export function renderReportHtml(input: ReportInput): string {
       `<div class="fig-side"><p class="caption" data-scale="${escapeHtml(fig.scale.label)}">${escapeHtml(captionBits.join(' '))}</p>${renderCheckerBlock(checkerFields(doc))}</div></div></section>`;
   } else {
     // Nothing to draw: say so in words, never a drawing of nothing.
-    const why =
-      doc.shapes.length === 0
-        ? 'The section is empty: the document has no shapes, so there is nothing to draw and there are no properties.'
-        : `The section has no area, so there is nothing to draw and there are no properties. ${evaluation.message ?? ''}`.trim();
+    const why = emptySectionText(doc.shapes.length, evaluation.message);
     sectionBlock = `<section class="block empty-section" data-empty="true"><h2>Section</h2><p class="empty-message">${escapeHtml(why)}</p></section>`;
   }
 
