@@ -178,7 +178,17 @@ function registerFiles(r: CommandRegistry): void {
 
 /** The checker's fields: revision history, notes, checked by / date (app/ops/checker.ts). */
 function registerChecker(r: CommandRegistry): void {
-  r.register({ name: 'doc.checker', label: 'Revisions…', group: 'file', hint: 'Revision history, notes and the checked-by block for the report', perform: (c) => c.store.setState({ checkerOpen: true }) });
+  r.register({
+    name: 'doc.checker',
+    label: 'Revisions…',
+    group: 'file',
+    hint: 'Revision history, notes and the checked-by block for the report',
+    perform: (c) => {
+      // One dialog at a time: it is also opened from the title block's dialog.
+      exchangeStore(c.store).setState({ titleOpen: false });
+      c.store.setState({ checkerOpen: true });
+    },
+  });
   r.register({ name: 'doc.addRevision', label: 'Add revision', group: 'file', perform: (c, arg) => addRevision(c, (arg ?? {}) as Parameters<typeof addRevision>[1]) });
   r.register({
     name: 'doc.setRevision',

@@ -131,8 +131,11 @@ export const tests = [
       const steps = () => page.evaluate(() => window.__kern.editor.store.getState().past.length);
       const doc = () => page.evaluate(() => window.__kern.editor.store.getState().doc);
       const h0 = await steps();
-      await page.click('[data-command="doc.checker"]');
+      // From the title block's dialog (the report's head has the same button).
+      await page.click('[data-command="doc.titleBlock"]');
+      await page.click('[data-testid="title-dialog"] [data-command="doc.checker"]');
       await page.waitForSelector('[data-testid="checker-dialog"]');
+      assert.equal(await page.$('[data-testid="title-dialog"]'), null, 'one dialog at a time');
       await page.click('[data-command="doc.addRevision"]');
       assert.equal(await page.inputValue('[data-revision-row="0"] [data-revision-field="revision"]'), 'B', 'the mark after the title block’s A');
       await page.fill('[data-revision-row="0"] [data-revision-field="date"]', '2026-12-03');

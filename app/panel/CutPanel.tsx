@@ -6,7 +6,7 @@
  * turned from x and y the report's caution about the shear formula is shown. The line is dragged
  * on the canvas or its position typed here.
  */
-import { useMemo } from 'react';
+import { useEffect, useMemo, useRef } from 'react';
 import { shearFormulaCaution, type Evaluation } from '../../src';
 import { useEditor, useEditorState, useResults } from '../context';
 import { NumberField } from '../fields/NumberField';
@@ -53,6 +53,12 @@ export function CutPanel() {
   const units = useResults((r) => r.doc.units);
   const ev = useResults((r) => r.evaluation);
   const data = useMemo(() => (on ? diagram(ev, axis) : null), [on, ev, axis]);
+  // Switched on, the readout comes into view at the foot of the results.
+  const box = useRef<HTMLElement>(null);
+  const shown = on && !!ev.props && at !== null;
+  useEffect(() => {
+    if (shown) box.current?.scrollIntoView?.({ block: 'nearest' });
+  }, [shown]);
   if (!on || !ev.props || at === null) return null;
   const props = ev.props;
   const r = cutReadout(ev.region, props, axis, at);
@@ -64,7 +70,7 @@ export function CutPanel() {
   const caution = shearFormulaCaution(props);
   const beyond = axis === 'y' ? 'above' : 'right of';
   return (
-    <section className="panel-section cut" data-testid="cut-panel">
+    <section className="panel-section cut" data-testid="cut-panel" ref={box}>
       <h2>Cut line</h2>
       <div className="op-switch" role="radiogroup" aria-label="Cut direction">
         {(['y', 'x'] as const).map((a) => (

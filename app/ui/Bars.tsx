@@ -32,7 +32,6 @@ export function TopBar() {
         <CommandButton name="file.importDxf">Import DXF…</CommandButton>
         <CommandButton name="file.export">Export…</CommandButton>
         <CommandButton name="doc.titleBlock">Title block…</CommandButton>
-        <CommandButton name="doc.checker" />
       </div>
       <div className="group">
         <CommandButton name="undo" />
