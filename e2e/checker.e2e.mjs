@@ -106,7 +106,7 @@ export const tests = [
     },
   },
   {
-    name: 'checker: one name per shape in the panel, on the canvas and in the report (an unnamed path is “Path 1”)',
+    name: 'checker: one name per shape in the shape list, the selection and the report (an unnamed path is “Path 1”)',
     async run(t) {
       const { page } = await open(t, { seed: bracket, view: { scale: 3 } });
       await settle(page);

@@ -175,7 +175,7 @@ describe('dimensions on the canvas', () => {
     { id: 'h', type: 'circle', center: [30, 50], radius: 10, op: 'subtract' },
   ]);
   const ev = evaluateDocument(plate);
-  const input = (scale: number) => ({ region: ev.region, shapes: ev.shapes, records: plate.shapes, props: ev.props!, scale, principal: true, centroid: true, cut: null });
+  const input = (scale: number) => ({ region: ev.region, shapes: ev.shapes, records: plate.shapes, props: ev.props!, scale, principal: true, centroid: true });
 
   test('the hole’s diameter and position, as on the report’s figure', () => {
     const lay = canvasDimensions(input(3))!;

@@ -2,8 +2,10 @@
  * The dimensions drawn on the canvas: the report figure's own (src/report/dimension-features.ts
  * finds the holes, openings, notches and plate thicknesses; src/report/dimensions.ts places them)
  * laid out for the screen, where one millimetre is PX_PER_MM CSS pixels, so spacings and text
- * read the same at any zoom. The layout keeps clear of the other overlays shown (principal axes,
- * cut line, centroid mark), leaves off what has no room and says so (`omitted`).
+ * read the same at any zoom. The layout keeps clear of the principal axes and the centroid mark
+ * when they are shown, leaves off what has no room and says so (`omitted`). It does not dodge the
+ * cut line: that line is dragged, and values that jumped about as it passed would be harder to read
+ * than a value the line crosses.
  *
  * Both steps are memoised by the data they read: the features by the region (and the subtracted
  * shapes), the layout by the features, the zoom and the overlays; panning moves nothing. The
@@ -28,7 +30,6 @@ export interface DimensionInput {
   /** The other overlays shown, which the texts keep clear of. */
   principal: boolean;
   centroid: boolean;
-  cut: { axis: 'x' | 'y'; at: number } | null;
 }
 
 const featureCache = new WeakMap<Region, { cuts: Region[]; features: DimensionFeature[] }>();
@@ -65,7 +66,6 @@ function marks(inp: DimensionInput, mm: number) {
   }
   // The centroid symbol and its "C" (app/canvas/layers/Centroid.tsx draws them within ~16 px).
   if (inp.centroid) boxes.push({ xmin: x - 3 * mm, xmax: x + 5 * mm, ymin: y - 3 * mm, ymax: y + 5 * mm });
-  if (inp.cut) lines.push(inp.cut.axis === 'y' ? [-far + x, inp.cut.at, far + x, inp.cut.at] : [inp.cut.at, -far + y, inp.cut.at, far + y]);
   return { lines, boxes };
 }
 
@@ -74,7 +74,7 @@ export function canvasDimensions(inp: DimensionInput): DimensionLayout | null {
   if (inp.region.length === 0 || !(inp.scale > 0) || !Number.isFinite(inp.scale)) return null;
   const f = features(inp.region, cutRegions(inp.shapes, inp.records));
   const mm = PX_PER_MM / inp.scale;
-  const key = [inp.scale, inp.principal, inp.centroid, inp.cut?.axis ?? '', inp.cut?.at ?? '', inp.props.centroid.x, inp.props.centroid.y, inp.props.theta].join('|');
+  const key = [inp.scale, inp.principal, inp.centroid, inp.props.centroid.x, inp.props.centroid.y, inp.props.theta].join('|');
   const hit = layoutCache.get(f);
   if (hit && hit.key === key) return hit.layout;
   const layout = layoutDimensions(f, inp.region, { mm, textMm: TEXT_MM, avoid: marks(inp, mm) });

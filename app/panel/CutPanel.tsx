@@ -52,7 +52,17 @@ export function CutPanel() {
   const axis = useEditorState((s) => s.cutAxis);
   const units = useResults((r) => r.doc.units);
   const ev = useResults((r) => r.evaluation);
-  const data = useMemo(() => (on ? diagram(ev, axis) : null), [on, ev, axis]);
+  // The diagram takes tens of milliseconds: while shapes are being dragged the last one stays up,
+  // and the diagram is redone when they come to rest.
+  const moving = useEditorState((s) => s.gestureBase !== null);
+  const last = useRef<{ axis: Axis; data: QbData | null } | null>(null);
+  const data = useMemo(() => {
+    if (!on) return null;
+    if (moving && last.current?.axis === axis) return last.current.data;
+    const d = diagram(ev, axis);
+    last.current = { axis, data: d };
+    return d;
+  }, [on, ev, axis, moving]);
   // Switched on, the readout comes into view at the foot of the results.
   const box = useRef<HTMLElement>(null);
   const shown = on && !!ev.props && at !== null;
