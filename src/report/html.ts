@@ -109,6 +109,7 @@ table.schedule caption { text-align: left; font-weight: 600; font-size: 8pt; pad
 table.schedule th, table.schedule td { padding: 0.2mm 1.2mm; }
 table.shapes { break-inside: auto; page-break-inside: auto; }
 table.shapes tr { break-inside: avoid; page-break-inside: avoid; }
+table.shapes td[data-shape-name] { min-width: 26mm; }
 .shapes-list h2 { break-after: avoid; page-break-after: avoid; }
 .frame-note { margin: 0.5mm 0; font-size: 7.5pt; }
 table.schedule .group-start { border-left: 0.5mm solid #555; }
