@@ -149,7 +149,7 @@ describe('the cut readout (panel and canvas)', () => {
     expect(parseFormatted(rd.text.widthBelow)).toBe(37.1);
     const [first, second] = cutLabelLines(rd, 'y', 'mm');
     expect(first).toContain(`Q = ${rd.text.Q} mm³`);
-    expect(second).toBe('b above 150 mm · b below 37.1 mm: Q/b uses b below the cut');
+    expect(second).toBe('b above = 150 mm · below = 37.1 mm; Q/b uses the width below the cut');
   });
 
   test('a cut below the section shows Q = 0, not round-off', () => {

@@ -10,8 +10,8 @@ export interface CutReadout {
   cut: SidedCut;
   /** True when the width jumps at the cut: b above and b below differ. */
   jump: boolean;
-  /** 'above'/'below' for a horizontal cut, 'right of'/'left of' for a vertical one. */
-  words: { plus: string; minus: string; beyond: string };
+  /** 'above'/'below' for a horizontal cut, 'right of'/'left of' for a vertical one; `side`: the sides alone ('right', 'left'). */
+  words: { plus: string; minus: string; beyond: string; side: { plus: string; minus: string } };
   /** The side Q/b takes its width from, in words ('below'), or '' when both sides agree. */
   qbSide: string;
   text: { at: string; widthAbove: string; widthBelow: string; widthForQb: string; Q: string; area: string; qOverB: string };
@@ -27,7 +27,10 @@ export function cutReadout(region: Region, props: SectionProperties, axis: 'x' |
   }
   const size = sectionSize(props.bounds);
   const q = (v: number, power: number) => formatQuantity(v, power, size);
-  const words = axis === 'y' ? { plus: 'above', minus: 'below', beyond: 'above' } : { plus: 'right of', minus: 'left of', beyond: 'right of' };
+  const words =
+    axis === 'y'
+      ? { plus: 'above', minus: 'below', beyond: 'above', side: { plus: 'above', minus: 'below' } }
+      : { plus: 'right of', minus: 'left of', beyond: 'right of', side: { plus: 'right', minus: 'left' } };
   const jump = cut.onEdge && cut.widthAbove !== cut.widthBelow;
   return {
     cut,

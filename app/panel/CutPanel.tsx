@@ -103,7 +103,7 @@ export function CutPanel() {
           ) : (
             <Value symbol="b" label="Width at the cut" k="width" value={r.cut.widthForQb} text={r.text.widthForQb} unit={units} />
           )}
-          <Value symbol="Q" label={`First moment of the part ${beyond}`} k="Q" value={r.cut.Q} text={r.text.Q} unit={`${units}³`} />
+          <Value symbol="Q" label={`First moment of the part ${beyond} the cut`} k="Q" value={r.cut.Q} text={r.text.Q} unit={`${units}³`} />
           <Value symbol="Q/b" label={r.jump ? `Q over b just ${r.qbSide} the cut` : 'Q over the width'} k="qb" value={r.cut.qOverB} text={r.text.qOverB} unit={`${units}²`} />
           <Value symbol="A′" label={axis === 'y' ? 'Area above the cut' : 'Area right of the cut'} k="area" value={r.cut.area} text={r.text.area} unit={`${units}²`} />
         </div>

@@ -15,7 +15,7 @@ import { Paint } from '../PaintNode';
 export function cutLabelLines(r: CutReadout, axis: 'x' | 'y', units: Units): [string, string] {
   const first = `cut ${axis} = ${r.text.at}   Q = ${r.text.Q} ${units}³   Q/b = ${r.text.qOverB}${r.text.qOverB === '—' ? '' : ` ${units}²`}   A ${r.words.beyond} = ${r.text.area} ${units}²`;
   const second = r.jump
-    ? `b ${r.words.plus} ${r.text.widthAbove} ${units} · b ${r.words.minus} ${r.text.widthBelow} ${units}: Q/b uses b ${r.qbSide} the cut`
+    ? `b ${r.words.side.plus} = ${r.text.widthAbove} ${units} · ${r.words.side.minus} = ${r.text.widthBelow} ${units}; Q/b uses the width ${r.qbSide} the cut`
     : `b = ${r.text.widthForQb} ${units}`;
   return [first, second];
 }
