@@ -11,7 +11,7 @@
 import { formatQuantity, sectionSize, type Region, type SectionProperties, type Units } from '../../src';
 import { CAP_FACTOR, qbCurve, qbScale, type QbPoint } from '../../src/report/qb-chart';
 
-const W = 330, H = 170;
+const W = 330, H = 200;
 /** Plot frame inside the SVG (pixels): room for the position ticks left, the value ticks below, the marks right and top. */
 const L = 44, R = 14, T = 10, B = 22;
 /** Room beyond the largest value, so the curve never runs along the frame. */
