@@ -91,7 +91,7 @@ tr.group th { background: #dde3ea; }
 .figure { text-align: center; margin: 1mm 0; }
 .figure svg { display: block; margin: 0 auto; }
 .caption, .small { font-size: 8pt; color: #333; margin: 1mm 0; }
-.caution { border: 0.4mm solid #111; padding: 1.5mm 2.5mm; font-weight: 600; margin: 3mm 0; break-inside: avoid; }
+.caution { border: 0.4mm solid #111; padding: 1.5mm 2.5mm; font-weight: 600; margin: 2mm 0 0; break-inside: avoid; }
 .block { break-inside: avoid; page-break-inside: avoid; }
 .values { width: 100%; }
 .values td { padding: 0.3mm 1.2mm; }
@@ -121,7 +121,7 @@ table.schedule.long { break-inside: auto; page-break-inside: auto; }
 .revisions td:nth-child(3) { width: 45%; }
 .fig-row { display: flex; flex-wrap: wrap; gap: 3mm 5mm; align-items: flex-start; justify-content: center; }
 .fig-row > .figure { margin: 0; }
-.fig-side { flex: 1 1 55mm; min-width: 55mm; }
+.fig-side { flex: 1 1 50mm; min-width: 50mm; }
 .fig-side .caption { margin-top: 0; }
 .checker h2 { font-size: 9pt; margin-top: 2mm; }
 .checker table { font-size: 7.5pt; }
@@ -272,9 +272,10 @@ export function renderReportHtml(input: ReportInput): string {
   if (notes.length > 0) body.push(`<section class="block"><h2>Notes from the evaluation</h2><ul class="small">${notes.join('')}</ul></section>`);
   if (props) body.push(propertyTable(input));
   if (props && cut) body.push(renderQbDiagram(evaluation.region, props, units, cut));
+  // The caution closes the method block, so a page break never leaves it alone on a last page.
   body.push(
-    `<section class="block method"><h2>Method</h2><div class="method-cols"><p class="small">${escapeHtml(METHOD_NOTE)}</p><p class="small">${escapeHtml(CONVENTIONS)}</p><p class="small" data-note="numbers">${escapeHtml(NUMBER_NOTE)}</p><p class="small">${escapeHtml(QB_NOTE)}</p></div></section>`,
-    `<p class="caution">${escapeHtml(CAUTION_TEXT)}</p>`,
+    `<section class="block method"><h2>Method</h2><div class="method-cols"><p class="small">${escapeHtml(METHOD_NOTE)}</p><p class="small">${escapeHtml(CONVENTIONS)}</p><p class="small" data-note="numbers">${escapeHtml(NUMBER_NOTE)}</p><p class="small">${escapeHtml(QB_NOTE)}</p></div>` +
+      `<p class="caution">${escapeHtml(CAUTION_TEXT)}</p></section>`,
   );
   if (!fig) body.push(renderCheckerBlock(checkerFields(doc)));
   if (shapes.appendix) body.push(shapes.appendix);
