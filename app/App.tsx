@@ -4,6 +4,7 @@ import { EditorContext, type EditorHandle } from './context';
 import { installKeyboard } from './keyboard';
 import { openFileText } from './exchange/open';
 import { Canvas } from './canvas/Canvas';
+import { DimensionCaption } from './canvas/DimensionCaption';
 import { CutPanel } from './panel/CutPanel';
 import { LineResults } from './panel/LineResults';
 import { Caution, ResultsPanel } from './panel/ResultsPanel';
@@ -14,6 +15,7 @@ import { Notice } from './ui/Notice';
 import { ReportOverlay } from './ui/ReportOverlay';
 import { ExchangeDialogs } from './exchange/ExchangeDialogs';
 import { TitleBlockDialog } from './ui/TitleBlock';
+import { CheckerDialog } from './ui/CheckerDialog';
 import { downloadBlob } from './exchange/exports';
 import { FirstRunGuide } from './ui/FirstRunGuide';
 import { QuestionDialog } from './ui/QuestionDialog';
@@ -46,6 +48,7 @@ export function App({ editor }: { editor: EditorHandle }) {
         <main className="stage">
           <Canvas />
           <MaterialLegend />
+          <DimensionCaption />
           <Notice />
           <FirstRunGuide />
         </main>
@@ -71,6 +74,7 @@ export function App({ editor }: { editor: EditorHandle }) {
         <TitleBlockDialog />
         <QuestionDialog />
         <MaterialsDialog />
+        <CheckerDialog />
         <input
           ref={fileInput}
           type="file"

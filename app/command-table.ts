@@ -29,6 +29,7 @@ import {
   setSelectionOp,
 } from './ops/selection';
 import { setTitleField, type TitleField } from './ops/title';
+import { addRevision, deleteRevision, setChecked, setNotes, setRevisionField, type CheckedField, type RevisionField } from './ops/checker';
 import { fitView, toggleOverlay } from './ops/view';
 import { SHAPE_EDITORS } from './shapes';
 import { canRedo, canUndo, redo, undo } from './store/history';
@@ -115,6 +116,7 @@ function registerView(r: CommandRegistry): void {
     ['principal', 'Principal axes', undefined],
     ['fibres', 'Extreme fibres', undefined],
     ['cut', 'Cut line', 'k'],
+    ['dimensions', 'Dimensions', 'm'],
   ];
   for (const [key, label, k] of overlays) {
     r.register({ name: `view.${key}`, label, group: 'view', keys: k ? [k] : undefined, active: (c) => c.store.getState().overlays[key], perform: (c) => toggleOverlay(c, key) });
@@ -195,6 +197,42 @@ function registerFiles(r: CommandRegistry): void {
   });
 }
 
+/** The checker's fields: revision history, notes, checked by / date (app/ops/checker.ts). */
+function registerChecker(r: CommandRegistry): void {
+  r.register({
+    name: 'doc.checker',
+    label: 'Revisions…',
+    group: 'file',
+    hint: 'Revision history, notes and the checked-by block for the report',
+    perform: (c) => {
+      // One dialog at a time: it is also opened from the title block's dialog.
+      exchangeStore(c.store).setState({ titleOpen: false });
+      c.store.setState({ checkerOpen: true });
+    },
+  });
+  r.register({ name: 'doc.addRevision', label: 'Add revision', group: 'file', perform: (c, arg) => addRevision(c, (arg ?? {}) as Parameters<typeof addRevision>[1]) });
+  r.register({
+    name: 'doc.setRevision',
+    label: 'Set revision field',
+    group: 'file',
+    perform: (c, arg) => {
+      const a = arg as { index: number; field: RevisionField; value: string } | undefined;
+      if (a) setRevisionField(c, a.index, a.field, a.value);
+    },
+  });
+  r.register({ name: 'doc.deleteRevision', label: 'Delete revision', group: 'file', perform: (c, arg) => deleteRevision(c, Number(arg)) });
+  r.register({ name: 'doc.setNotes', label: 'Set notes', group: 'file', perform: (c, arg) => setNotes(c, String(arg ?? '')) });
+  r.register({
+    name: 'doc.setChecked',
+    label: 'Set checked by / date',
+    group: 'file',
+    perform: (c, arg) => {
+      const a = arg as { field: CheckedField; value: string } | undefined;
+      if (a) setChecked(c, a.field, a.value);
+    },
+  });
+}
+
 export function buildRegistry(): CommandRegistry {
   const r = new CommandRegistry();
   registerHistory(r);
@@ -203,6 +241,7 @@ export function buildRegistry(): CommandRegistry {
   registerView(r);
   registerFiles(r);
   registerMaterials(r);
+  registerChecker(r);
   return r;
 }
 

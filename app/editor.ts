@@ -2,7 +2,7 @@
  * One editor instance: the store, the live results, the transient pointer state, the tools and
  * the command context. Nothing here depends on React, so the tests build the same editor.
  */
-import { allShapeIds, formatIssue, newShapeId, unitFactor, validateShape, type Point, type SectionDocument, type Shape } from '../src';
+import { allShapeIds, formatShapeIssue, newShapeId, unitFactor, validateShape, type Point, type SectionDocument, type Shape } from '../src';
 import { registry } from './command-table';
 import type { CommandContext, FileIO } from './commands/registry';
 import type { EditorHandle } from './context';
@@ -51,7 +51,7 @@ export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule
       const shape = { ...partial, id: partial.id ?? newShapeId(allShapeIds(s.doc)) } as Shape;
       const issues = validateShape(shape, `shapes[${shapes.length}]`);
       if (issues.length) {
-        transient.setState({ inputError: `Not added: ${issues.map(formatIssue).join('; ')}` });
+        transient.setState({ inputError: `Not added: ${issues.map((i) => formatShapeIssue(i, [...shapes, shape])).join('; ')}` });
         return false;
       }
       commit(store, withActiveShapes(s.doc, [...shapes, shape]), [shape.id]);

@@ -13,6 +13,8 @@ import {
   convertDocumentUnits,
   evaluateDocument,
   formatIssue,
+  formatShapeIssue,
+  shapeDisplayName,
   formatNumber,
   UNIT_IN_METRES,
   type Evaluation,
@@ -71,16 +73,15 @@ function err(s: string): void {
 /** Evaluate one section document; a message instead when it has no area. */
 export function evaluateSide(label: string, doc: SectionDocument, warnings: string[]): Side | string {
   const ev = evaluateDocument(doc);
-  if (!ev.props) return `${label}: ${ev.message ?? 'the section has no area'}${ev.warnings.map((w) => `\n  warning: ${formatIssue(w)}`).join('')}`;
-  return { label, doc, ev, props: ev.props, warnings: [...warnings, ...ev.warnings.map(formatIssue)] };
+  if (!ev.props) return `${label}: ${ev.message ?? 'the section has no area'}${ev.warnings.map((w) => `\n  warning: ${formatShapeIssue(w, doc.shapes)}`).join('')}`;
+  return { label, doc, ev, props: ev.props, warnings: [...warnings, ...ev.warnings.map((w) => formatShapeIssue(w, doc.shapes))] };
 }
 
 /** The input shapes of an evaluated document, for the cautions to name. */
 export function inputShapes(doc: SectionDocument, ev: Evaluation): InputShape[] {
   return doc.shapes.map((s, k) => {
-    const shape: InputShape = { id: s.id, op: s.op ?? 'add', region: ev.shapes[k]?.region ?? [] };
-    if (s.name !== undefined) shape.name = s.name;
-    return shape;
+    // The cautions name a shape by its display name, as the panel, the canvas and the report do.
+    return { id: s.id, op: s.op ?? 'add', region: ev.shapes[k]?.region ?? [], name: shapeDisplayName(s, k) } satisfies InputShape;
   });
 }
 

@@ -10,6 +10,7 @@ import {
   evaluateDocument,
   formatIssue,
   formatNumber,
+  formatShapeIssue,
   formatProperty,
   inertiaAboutAxis,
   oneSidedWidths,
@@ -23,6 +24,7 @@ import {
   type SectionDocument,
   type SectionProperties,
 } from '../src';
+import { cutRows } from './cut-table';
 
 const USAGE = `Usage:
   kern props FILE [--json] [--variant NAME]
@@ -105,7 +107,7 @@ export async function loadFile(path: string, units?: string): Promise<Loaded> {
 
 /** `props --json`: the units, every catalogue property (full precision) and the warnings. */
 function propsJson(doc: SectionDocument, ev: Evaluation, p: SectionProperties, warnings: string[]) {
-  return { units: doc.units, ...propertiesJson(p), ...sectionExtrasJson(doc, ev), warnings: [...warnings, ...ev.warnings.map(formatIssue)] };
+  return { units: doc.units, ...propertiesJson(p), ...sectionExtrasJson(doc, ev), warnings: [...warnings, ...ev.warnings.map((w) => formatShapeIssue(w, doc.shapes))] };
 }
 
 function table(rows: [string, string, string][]): string {
@@ -151,7 +153,7 @@ async function evaluateFile(file: string | undefined, flags: Parsed['flags'], li
   const ev = evaluateDocument(doc);
   if (!ev.props && !(linesOnly && ev.lines.length > 0)) {
     err(`${file}: ${ev.message ?? 'the section has no area'}`);
-    for (const w of ev.warnings) err(`  warning: ${formatIssue(w)}`);
+    for (const w of ev.warnings) err(`  warning: ${formatShapeIssue(w, doc.shapes)}`);
     return null;
   }
   return { doc, ev, props: ev.props, warnings: loaded.warnings };
@@ -182,7 +184,7 @@ export async function main(argv: string[]): Promise<number> {
       } else out(`Area properties: absent. ${r.ev.message ?? ''}`.trim());
       for (const line of (await import('./materials-props')).materialsPropsText(r.doc, r.ev)) out(line);
       if (r.ev.lines.length) out(lines.linesTable(r.ev, r.doc.units));
-      for (const w of [...r.warnings, ...r.ev.warnings.map(formatIssue)]) out(`warning: ${w}`);
+      for (const w of [...r.warnings, ...r.ev.warnings.map((i) => formatShapeIssue(i, r.doc.shapes))]) out(`warning: ${w}`);
       out(CAUTION_TEXT);
       return 0;
     }
@@ -203,14 +205,7 @@ export async function main(argv: string[]): Promise<number> {
       else {
         const side = xs !== undefined ? `right of x = ${at}` : `above y = ${at}`;
         out(`Part ${side} (${r.doc.units}):`);
-        out(
-          table([
-            ['Cut width b', String(c.width), r.doc.units],
-            ['Area beyond the cut', String(c.area), `${r.doc.units}²`],
-            ['Centroid of that part', c.centroid ? `(${c.centroid.x}, ${c.centroid.y})` : '—', r.doc.units],
-            ['First moment Q about the centroidal axis', String(c.Q), `${r.doc.units}³`],
-          ]),
-        );
+        out(table(cutRows(r.ev.region, r.props, xs !== undefined ? 'x' : 'y', at, r.doc.units)));
       }
       return 0;
     }

@@ -5,7 +5,7 @@
  * says so), 2 bad input or Chromium missing, 1 internal error.
  */
 import { existsSync, writeFileSync } from 'node:fs';
-import { evaluateDocument, formatIssue } from '../src';
+import { evaluateDocument, formatShapeIssue } from '../src';
 import { renderReportHtml } from '../src/report';
 import { loadSectionFile } from './dxf-input';
 
@@ -116,7 +116,7 @@ export async function reportCommand(args: string[]): Promise<number> {
   }
   for (const w of loaded.warnings) err(`warning: ${w}`);
   const evaluation = evaluateDocument(loaded.doc);
-  for (const w of evaluation.warnings) err(`warning: ${formatIssue(w)}`);
+  for (const w of evaluation.warnings) err(`warning: ${formatShapeIssue(w, loaded.doc.shapes)}`);
   // An empty or degenerate section still gets its report: a page that says so, with no figure.
   if (!evaluation.props && evaluation.lines.length > 0) err(`note: ${file}: line elements only; the report gives the line groups, and says that the area properties are absent`);
   else if (!evaluation.props) err(`warning: ${file}: ${(evaluation.message ?? 'the section has no area').replace(/\.$/, '')}; the report says so and has no figure`);

@@ -12,6 +12,7 @@ export type { PointMap } from './shapes/base';
 export { shapeCorners, roundShapeCorner } from './shapes/ops';
 export type { Corner } from './shapes/corners';
 export { shapeToRegion, shapeContours, mayCrossItself, translateShape, rotateShape, mirrorShape, scaleShape, shapeKindLabel, shapeDisplayName } from './shapes/ops';
+export { formatShapeIssue, issueShapeName } from './document/issue-names';
 export { pathContour } from './shapes/path';
 export { PROFILE_TYPES, isProfile, isProfileType } from './shapes/profile';
 export { STRIP_CORNERS } from './shapes/strip';
@@ -34,7 +35,8 @@ export {
   type CutResult,
 } from './properties/section';
 export { propertiesJson, jsonValueAt, type PropertyJson } from './properties/json';
-export { CAUTION_TEXT } from './report/caution';
+export { CAUTION_TEXT, shearFormulaCaution } from './report/caution';
+export { emptySectionText } from './report/empty';
 export { PROPERTY_CATALOG, formatNumber, formatProperty, unitText, propertyByKey, DISPLAY_SIGFIGS, type PropertyInfo } from './properties/catalog';
 export { formatQuantity, parseFormatted, sectionSize, GEOMETRY_SIGFIGS, ZERO_RELATIVE } from './properties/catalog';
 export { oneSidedWidths, qbWidth, type OneSidedWidths, type QbSide } from './moments/width';

@@ -4,7 +4,7 @@
  * change returns why and changes nothing.
  */
 import { useState } from 'react';
-import { formatIssue, shapeToRegion, validateShape, type PointEdit, type Shape } from '../../src';
+import { formatShapeIssue, shapeToRegion, validateShape, type PointEdit, type Shape } from '../../src';
 import { useEditor, useEditorState } from '../context';
 import { commit } from '../store/history';
 import { activeShapes, withActiveShapes } from '../store/section';
@@ -27,7 +27,7 @@ export function useApply(): ApplyEdit {
     // Enter then blur applies the same value twice: an edit that changes nothing records nothing.
     if (JSON.stringify(cand) === JSON.stringify(shapes[idx])) return null;
     const issues = validateShape(cand, `shapes[${idx}]`);
-    if (issues.length) return issues.map(formatIssue).join('; ');
+    if (issues.length) return issues.map((i) => formatShapeIssue(i, shapes)).join('; ');
     try {
       shapeToRegion(cand);
     } catch (e) {

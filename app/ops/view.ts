@@ -13,7 +13,8 @@ export function fitView(ctx: CommandContext): void {
   // Line elements and weld loads have no area: their extent is added to the outlines'.
   const b = unionBounds(evaluationBounds({ shapes }), linesAndLoadsBounds(shapes, activeSection(s.doc)));
   if (!b) return;
-  ctx.store.setState(fitBounds(b, s.width, s.height));
+  // With dimensions shown, room for their lanes (about 20 mm of screen beyond the section).
+  ctx.store.setState(fitBounds(b, s.width, s.height, s.overlays.dimensions ? 48 + 76 : 48));
 }
 
 /** Where a new cut line starts: through the centroid, with round-off zero shown as 0. */

@@ -1,30 +1,49 @@
 /**
- * The cut line readout: b, Q and the area beyond a cut (engine's cutSection), for a horizontal
- * cut (the part above y) or a vertical one (the part right of x), with a small plot of Q and b
- * across the section (cutDiagram). The line is dragged on the canvas or its position typed here.
+ * The cut line readout: b, Q, Q/b and the area beyond a cut (app/ops/cut-readout.ts), for a
+ * horizontal cut (the part above y) or a vertical one (the part right of x), and the Q/b diagram
+ * across the section (QbPlot.tsx). Where an edge lies on the cut line the width jumps: b just
+ * above and just below are both shown, with the one Q/b uses marked. When the principal axes are
+ * turned from x and y the report's caution about the shear formula is shown. The line is dragged
+ * on the canvas or its position typed here.
  */
-import { useMemo } from 'react';
-import { cutDiagram, cutSection, formatNumber, type Evaluation } from '../../src';
+import { useEffect, useMemo, useRef } from 'react';
+import { shearFormulaCaution, type Evaluation } from '../../src';
 import { useEditor, useEditorState, useResults } from '../context';
 import { NumberField } from '../fields/NumberField';
+import { cutReadout } from '../ops/cut-readout';
 import { centroidCut } from '../ops/view';
+import { qbData, qbLegend, QbPlot, type QbData } from './QbPlot';
+import './cut.css';
 
 type Axis = 'x' | 'y';
-const diagramCache = { x: new WeakMap<Evaluation, ReturnType<typeof cutDiagram>>(), y: new WeakMap<Evaluation, ReturnType<typeof cutDiagram>>() };
+const diagramCache = { x: new WeakMap<Evaluation, QbData>(), y: new WeakMap<Evaluation, QbData>() };
 
-function diagram(ev: Evaluation, axis: Axis) {
+/** The diagram for one evaluation and direction, computed once (it waits for the pointer to rest). */
+function diagram(ev: Evaluation, axis: Axis): QbData | null {
+  if (!ev.props) return null;
   let d = diagramCache[axis].get(ev);
-  if (!d && ev.props) {
-    d = cutDiagram(ev.region, axis, ev.props, 81);
+  if (!d) {
+    d = qbData(ev.region, axis, ev.props, NaN);
     diagramCache[axis].set(ev, d);
   }
-  return d ?? [];
+  return d;
 }
 
-const WORDS = {
-  y: { at: 'Cut at y', beyond: 'above', area: 'Area above the cut', runs: 'depth runs upwards', plot: 'Q and b over the depth' },
-  x: { at: 'Cut at x', beyond: 'to the right', area: 'Area right of the cut', runs: 'width runs to the right', plot: 'Q and b across the width' },
-} as const;
+function Value({ symbol, label, k, value, text, unit, mark }: { symbol: string; label: string; k: string; value: number; text: string; unit: string; mark?: string }) {
+  return (
+    <div className={`prop-row${mark ? ' used' : ''}`}>
+      <span className="prop-symbol">{symbol}</span>
+      <span className="prop-label">
+        {label}
+        {mark && <span className="qb-used" data-qb-uses={k}> {mark}</span>}
+      </span>
+      <span className="prop-value" data-cut={k} data-value={String(value)}>
+        {text}
+      </span>
+      <span className="prop-unit">{unit}</span>
+    </div>
+  );
+}
 
 export function CutPanel() {
   const editor = useEditor();
@@ -33,42 +52,35 @@ export function CutPanel() {
   const axis = useEditorState((s) => s.cutAxis);
   const units = useResults((r) => r.doc.units);
   const ev = useResults((r) => r.evaluation);
-  // The diagram waits for the pointer to rest: it is recomputed only when the evaluation changes.
-  const pts = useMemo(() => (on ? diagram(ev, axis) : []), [on, ev, axis]);
+  // The diagram takes tens of milliseconds: while shapes are being dragged the last one stays up,
+  // and the diagram is redone when they come to rest.
+  const moving = useEditorState((s) => s.gestureBase !== null);
+  const last = useRef<{ axis: Axis; data: QbData | null } | null>(null);
+  const data = useMemo(() => {
+    if (!on) return null;
+    if (moving && last.current?.axis === axis) return last.current.data;
+    const d = diagram(ev, axis);
+    last.current = { axis, data: d };
+    return d;
+  }, [on, ev, axis, moving]);
+  // Switched on, the readout comes into view at the foot of the results.
+  const box = useRef<HTMLElement>(null);
+  const shown = on && !!ev.props && at !== null;
+  useEffect(() => {
+    if (shown) box.current?.scrollIntoView?.({ block: 'nearest' });
+  }, [shown]);
   if (!on || !ev.props || at === null) return null;
-  let cut: ReturnType<typeof cutSection> | null;
-  try {
-    cut = cutSection(ev.region, axis, at, ev.props);
-  } catch {
-    cut = null;
-  }
-  const words = WORDS[axis];
   const props = ev.props;
+  const r = cutReadout(ev.region, props, axis, at);
   const setAxis = (a: Axis) => {
     if (a === axis) return;
     // A new direction starts through the centroid, where Q is largest.
     editor.store.setState({ cutAxis: a, cutAt: centroidCut(props, a) });
   };
-  const W = 300, H = 150, pad = 30;
-  const b = props.bounds;
-  const lo = axis === 'y' ? b.ymin : b.xmin, hi = axis === 'y' ? b.ymax : b.xmax;
-  const qMax = Math.max(...pts.map((p) => Math.abs(p.Q)), 1e-300);
-  const wMax = Math.max(...pts.map((p) => p.width), 1e-300);
-  // Position along the cut's axis, and a value (Q or b) across it, mapped to the plot.
-  const P = (t: number) => ((t - lo) / (hi - lo || 1)) * (axis === 'y' ? H - pad : W - 2 * pad);
-  const pt = (pos: number, frac: number): [number, number] =>
-    axis === 'y' ? [pad + frac * (W - 2 * pad), H - pad / 2 - P(pos)] : [pad + P(pos), H - pad / 2 - frac * (H - pad)];
-  const line = (f: (p: (typeof pts)[number]) => number) =>
-    pts
-      .map((p, i) => {
-        const [x, y] = pt(p.at, f(p));
-        return `${i ? 'L' : 'M'}${x.toFixed(1)},${y.toFixed(1)}`;
-      })
-      .join(' ');
-  const [ax0, ay0] = pt(lo, 0), [ax1, ay1] = pt(hi, 0);
-  const [c0x, c0y] = pt(at, 0), [c1x, c1y] = pt(at, 1);
+  const caution = shearFormulaCaution(props);
+  const beyond = axis === 'y' ? 'above' : 'right of';
   return (
-    <section className="panel-section cut" data-testid="cut-panel">
+    <section className="panel-section cut" data-testid="cut-panel" ref={box}>
       <h2>Cut line</h2>
       <div className="op-switch" role="radiogroup" aria-label="Cut direction">
         {(['y', 'x'] as const).map((a) => (
@@ -77,35 +89,32 @@ export function CutPanel() {
           </button>
         ))}
       </div>
-      <NumberField key={axis} label={words.at} value={at} field="cut-at" suffix={units} onCommit={(v) => (editor.store.setState({ cutAt: v }), null)} />
-      {cut && (
+      <NumberField key={axis} label={axis === 'y' ? 'Cut at y' : 'Cut at x'} value={at} field="cut-at" suffix={units} onCommit={(v) => (editor.store.setState({ cutAt: v }), null)} />
+      {r && (
         <div className="cut-values">
-          <div className="prop-row"><span className="prop-symbol">b</span><span className="prop-label">Width at the cut</span><span className="prop-value" data-cut="width" data-value={String(cut.width)}>{formatNumber(cut.width)}</span><span className="prop-unit">{units}</span></div>
-          <div className="prop-row"><span className="prop-symbol">Q</span><span className="prop-label">First moment of the part {words.beyond}</span><span className="prop-value" data-cut="Q" data-value={String(cut.Q)}>{formatNumber(cut.Q)}</span><span className="prop-unit">{units}³</span></div>
-          <div className="prop-row"><span className="prop-symbol">A′</span><span className="prop-label">{words.area}</span><span className="prop-value" data-cut="area" data-value={String(cut.area)}>{formatNumber(cut.area)}</span><span className="prop-unit">{units}²</span></div>
+          {r.jump ? (
+            <>
+              <Value symbol="b" label={`Width just ${r.words.plus} the cut`} k="width-above" value={r.cut.widthAbove} text={r.text.widthAbove} unit={units} mark={r.cut.qbSide === 'above' ? '← Q/b' : undefined} />
+              <Value symbol="b" label={`Width just ${r.words.minus} the cut`} k="width-below" value={r.cut.widthBelow} text={r.text.widthBelow} unit={units} mark={r.cut.qbSide === 'below' ? '← Q/b' : undefined} />
+              <p className="cut-note" data-testid="cut-jump-note">
+                An edge lies on the cut line, so the width jumps here. Q is the same from either side; Q/b uses the smaller width, just {r.qbSide} the cut, where the shear stress is larger.
+              </p>
+            </>
+          ) : (
+            <Value symbol="b" label="Width at the cut" k="width" value={r.cut.widthForQb} text={r.text.widthForQb} unit={units} />
+          )}
+          <Value symbol="Q" label={`First moment of the part ${beyond} the cut`} k="Q" value={r.cut.Q} text={r.text.Q} unit={`${units}³`} />
+          <Value symbol="Q/b" label={r.jump ? `Q over b just ${r.qbSide} the cut` : 'Q over the width'} k="qb" value={r.cut.qOverB} text={r.text.qOverB} unit={`${units}²`} />
+          <Value symbol="A′" label={axis === 'y' ? 'Area above the cut' : 'Area right of the cut'} k="area" value={r.cut.area} text={r.text.area} unit={`${units}²`} />
         </div>
       )}
-      <svg className="cut-plot" width={W} height={H} viewBox={`0 0 ${W} ${H}`} role="img" aria-label={words.plot}>
-        <line x1={ax0} y1={ay0} x2={ax1} y2={ay1} className="plot-axis" />
-        <path d={line((p) => p.width / wMax)} className="plot-b" />
-        <path d={line((p) => Math.abs(p.Q) / qMax)} className="plot-q" />
-        <line x1={c0x} x2={c1x} y1={c0y} y2={c1y} className="plot-cut" />
-        {axis === 'y' ? (
-          <>
-            <text x={4} y={pt(hi, 0)[1] + 4} className="plot-tick">{formatNumber(hi, 4)}</text>
-            <text x={4} y={pt(lo, 0)[1]} className="plot-tick">{formatNumber(lo, 4)}</text>
-          </>
-        ) : (
-          <>
-            <text x={pt(lo, 0)[0]} y={H - 2} className="plot-tick">{formatNumber(lo, 4)}</text>
-            <text x={pt(hi, 0)[0] - 24} y={H - 2} className="plot-tick">{formatNumber(hi, 4)}</text>
-          </>
-        )}
-      </svg>
-      <p className="plot-legend-row">
-        <span className="plot-key q">Q</span> first moment {words.beyond === 'above' ? 'above' : 'right of'} the cut, max {formatNumber(qMax, 4)} {units}³ ·{' '}
-        <span className="plot-key b">b</span> width, max {formatNumber(wMax, 4)} {units}; {words.runs}
-      </p>
+      {caution && (
+        <p className="qb-caution" role="note" data-testid="qb-caution">
+          {caution}
+        </p>
+      )}
+      {data && <QbPlot data={data} axis={axis} at={at} here={r ? r.cut.qOverB : NaN} props={props} units={units} />}
+      {data && <p className="plot-legend-row">{qbLegend(data, axis, props, units)}</p>}
     </section>
   );
 }

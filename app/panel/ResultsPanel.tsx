@@ -2,7 +2,7 @@
  * Live results: every property of the engine's catalogue, formatted by the engine's one
  * formatter. Each value carries data-prop (its key) and data-value (the full-precision number).
  */
-import { CAUTION_TEXT, formatIssue, formatProperty, PROPERTY_CATALOG, UNITS, type PropertyInfo, type Units } from '../../src';
+import { CAUTION_TEXT, emptySectionText, formatProperty, formatShapeIssue, PROPERTY_CATALOG, UNITS, type PropertyInfo, type Units } from '../../src';
 import { useEditor, useEditorState, useResults } from '../context';
 import { activeSection } from '../store/section';
 
@@ -58,6 +58,7 @@ function Pending() {
 
 export function ResultsPanel() {
   const ev = useResults((r) => r.evaluation);
+  const section = useResults((r) => r.doc);
   const ms = useResults((r) => r.lastMs);
   return (
     <section className="panel-section results" data-testid="results">
@@ -70,13 +71,13 @@ export function ResultsPanel() {
       {ev.message && (
         // Line elements only: the area results are absent, which is not an error.
         <p className={`result-message${!ev.props && ev.lines.length ? ' absent' : ''}`} data-testid="result-message" data-absent={!ev.props && ev.lines.length ? 'area' : undefined}>
-          {ev.message}
+          {ev.props || ev.lines.length ? ev.message : emptySectionText(section.shapes.length, ev.message)}
         </p>
       )}
       {ev.warnings.length > 0 && (
         <ul className="warnings" data-testid="warnings">
           {ev.warnings.map((w, i) => (
-            <li key={i}>{formatIssue(w)}</li>
+            <li key={i}>{formatShapeIssue(w, section.shapes)}</li>
           ))}
         </ul>
       )}

@@ -2,7 +2,7 @@
  * Moving one handle (a vertex, an arc's middle point, a centre, a radius): snapped, validated on
  * release. A click that does not move the handle picks its corner for rounding instead.
  */
-import { formatIssue, validateShape, type SectionDocument } from '../../src';
+import { formatShapeIssue, validateShape, type SectionDocument } from '../../src';
 import { cancelGesture, endGesture, previewGesture } from '../store/history';
 import { moveHandle, type HandleRef } from '../shapes';
 import { cornerOfHandle } from '../shapes/corners';
@@ -42,7 +42,7 @@ export class DraggingHandle implements SelectState {
     if (issues.length) {
       // A point that makes the shape invalid is not applied: the shape goes back.
       cancelGesture(env.store);
-      env.message(`Point not moved: ${issues.map(formatIssue).join('; ')}`);
+      env.message(`Point not moved: ${issues.map((i) => formatShapeIssue(i, shapes)).join('; ')}`);
     } else endGesture(env.store);
     return IDLE;
   }

@@ -59,6 +59,8 @@ export interface Overlays {
   kern: boolean;
   /** Stress colour map, neutral axis and largest stresses under the document's loads. */
   stress: boolean;
+  /** Dimensions of holes, notches and plates, as on the report's figure (app/canvas/layers/Dimensions.tsx). */
+  dimensions: boolean;
 }
 
 export interface Notice {
@@ -81,6 +83,8 @@ export interface ViewSlice {
   cutAt: number | null;
   notice: Notice | null;
   reportOpen: boolean;
+  /** The dialog for the revision history, notes and "checked by" (app/ui/CheckerDialog.tsx). */
+  checkerOpen: boolean;
 }
 
 export type EditorState = DocumentSlice & SelectionSlice & ToolSlice & ViewSlice;
@@ -111,10 +115,11 @@ export function createEditorStore(doc: SectionDocument): EditorStore {
     oy: 400,
     width: 800,
     height: 600,
-    overlays: { centroid: true, principal: false, fibres: false, cut: false, kern: false, stress: true },
+    overlays: { centroid: true, principal: false, fibres: false, cut: false, kern: false, stress: true, dimensions: false },
     cutAxis: 'y',
     cutAt: null,
     notice: null,
     reportOpen: false,
+    checkerOpen: false,
   }));
 }

@@ -80,6 +80,7 @@ export function ToolRail() {
         <CommandButton name="view.cut" />
         <CommandButton name="view.kern" />
         <CommandButton name="view.stress" />
+        <CommandButton name="view.dimensions" />
         <CommandButton name="view.fit" />
       </div>
     </nav>
@@ -93,12 +94,14 @@ export function StatusBar() {
   const pointer = useTransient((t) => t.pointer);
   const snap = useTransient((t) => t.snap);
   const units = useEditorState((s) => s.doc.units);
+  // Round-off below 10⁻¹⁰ of the visible width shows as 0 (a snapped point at x = 1e-15 is at 0).
+  const span = useEditorState((s) => s.width / s.scale);
   const input = useRef<HTMLInputElement>(null);
   const p = snap?.p ?? pointer;
   return (
     <footer className="statusbar">
       <div className="coords" data-testid="coords">
-        {p ? `x ${formatNumber(p[0], 6)}  y ${formatNumber(p[1], 6)} ${units}` : '—'}
+        {p ? `x ${formatNumber(p[0], 6, span)}  y ${formatNumber(p[1], 6, span)} ${units}` : '—'}
       </div>
       <div className="prompt" data-testid="prompt">
         {prompt}

@@ -4,6 +4,7 @@ import { loadReportRenderer } from '../report';
 import { useEditor, useEditorState } from '../context';
 import { withPaperSize, type Paper } from '../exchange/paper';
 import { CommandButton } from '../fields/CommandButton';
+import { activeSection } from '../store/section';
 
 export function ReportOverlay() {
   const editor = useEditor();
@@ -27,7 +28,8 @@ export function ReportOverlay() {
         }
         const s = editor.store.getState();
         const cut = s.overlays.cut && s.cutAt !== null ? { axis: s.cutAxis, at: s.cutAt } : null;
-        setHtml(render({ doc: s.doc, evaluation: editor.results.evaluate(s.doc), cut, kern: s.overlays.kern, generated: new Date().toISOString().slice(0, 16).replace('T', ' ') }));
+        // The section being edited (a proposal when one is active), named as the panel names it.
+        setHtml(render({ doc: activeSection(s.doc), evaluation: editor.results.evaluate(s.doc), cut, kern: s.overlays.kern, generated: new Date().toISOString().slice(0, 16).replace('T', ' ') }));
       })
       .catch((e) => live && setProblem(`The report could not be made: ${(e as Error).message}`));
     return () => {
@@ -43,6 +45,7 @@ export function ReportOverlay() {
           <h2>Report</h2>
           <div className="spacer" />
           <CommandButton name="doc.titleBlock" />
+          <CommandButton name="doc.checker" />
           <select data-testid="report-paper" aria-label="Paper size" value={paper} onChange={(e) => setPaper(e.target.value as Paper)}>
             <option value="A4">A4</option>
             <option value="Letter">US Letter</option>

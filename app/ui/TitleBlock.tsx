@@ -7,6 +7,7 @@ import { TITLE_FIELDS, titleValue, type TitleField } from '../ops/title';
 import { useExchange } from '../exchange/hooks';
 import { exchangeStore } from '../exchange/state';
 import { useEditor, useEditorState } from '../context';
+import { CommandButton } from '../fields/CommandButton';
 import '../exchange/exchange.css';
 
 const LABEL: Record<TitleField, string> = {
@@ -99,6 +100,9 @@ export function TitleBlockDialog() {
             <span className="xc-muted">{units} (change them in the results panel)</span>
           </div>
           <p className="xc-muted">Kept in the section document and printed in the report. Each change is one step of undo.</p>
+          <div>
+            <CommandButton name="doc.checker">Revision history, notes and check…</CommandButton>
+          </div>
         </div>
       </div>
     </div>

@@ -1,4 +1,6 @@
 /** The cautions printed with results (panel, CLI, report): one wording each, shared. */
+import { DISPLAY_SIGFIGS, formatNumber } from '../properties/catalog';
+
 export const CAUTION_TEXT = 'Geometric properties only. The design must be checked against the applicable code by a qualified engineer.';
 
 /** The principal axes count as turned from x and y beyond this angle (degrees; common practice, no source)... */
@@ -20,7 +22,7 @@ export function shearFormulaCaution(p: { theta: number; Ix: number; Iy: number; 
   const coupling = Math.abs(p.Ixy) / Math.sqrt(Math.max(p.Ix * p.Iy, 0));
   if (!(turn > PRINCIPAL_TURN_DEG) || !(coupling > PRODUCT_RATIO)) return null;
   return (
-    `Caution: the principal axes are turned ${turn.toFixed(1)}° from x and y (θ = ${p.theta.toFixed(1)}°). ` +
+    `Caution: the principal axes are turned ${formatNumber(turn, DISPLAY_SIGFIGS, 90)}° from x and y (θ = ${formatNumber(p.theta, DISPLAY_SIGFIGS, 90)}°). ` +
     'Q/b and τ = VQ/(Ib) assume bending about a principal axis; for a shear force along x or y on this section they do not give the shear stress. ' +
     'Use the unsymmetric-bending form or resolve the load onto the principal axes. ' +
     `(Shown when the principal axes are turned more than ${PRINCIPAL_TURN_DEG}° from x and y and |Ixy| exceeds ${PRODUCT_RATIO * 100} % of √(Ix·Iy).)`

@@ -76,6 +76,13 @@ function signedArea(c: Contour): number {
 
 const near = (a: number, b: number, tol: number) => Math.abs(a - b) <= tol;
 
+/** Every vertex of the region's loops. */
+function regionCorners(region: Region): [number, number][] {
+  const out: [number, number][] = [];
+  for (const c of region) for (let i = 0; i + 1 < c.xy.length; i += 2) out.push([c.xy[i], c.xy[i + 1]]);
+  return out;
+}
+
 interface Edge {
   ax: number;
   ay: number;
@@ -220,6 +227,7 @@ export function findDimensionFeatures(region: Region, cuts: readonly Region[] = 
         ? !!circ && near(h.cx, circ.cx, tol) && near(h.cy, circ.cy, tol) && near(h.r, circ.r, tol)
         : near(h.xmin, cb.xmin, tol) && near(h.xmax, cb.xmax, tol) && near(h.ymin, cb.ymin, tol) && near(h.ymax, cb.ymax, tol),
     );
+  const corners = regionCorners(region);
   for (const cut of cuts) {
     const cb = regionBounds(cut);
     // A cut that misses the section leaves nothing to dimension.
@@ -230,8 +238,12 @@ export function findDimensionFeatures(region: Region, cuts: readonly Region[] = 
       out.push({ kind: 'hole', cx: circ.cx, cy: circ.cy, diameter: 2 * circ.r, notch: true });
       continue;
     }
-    const x = [cb.xmin, cb.xmax].filter((v) => v > b.xmin + tol && v < b.xmax - tol);
-    const y = [cb.ymin, cb.ymax].filter((v) => v > b.ymin + tol && v < b.ymax - tol);
+    // An edge of the cut counts where it shapes the section: some corner of the finished outline
+    // lies on it, inside the cut's extent (a cut that overhangs the section has edges in the air).
+    const shapes = (axis: 0 | 1, v: number) =>
+      corners.some((p) => near(p[axis], v, tol) && p[1 - axis] >= (axis ? cb.xmin : cb.ymin) - tol && p[1 - axis] <= (axis ? cb.xmax : cb.ymax) + tol);
+    const x = [cb.xmin, cb.xmax].filter((v) => v > b.xmin + tol && v < b.xmax - tol && shapes(0, v));
+    const y = [cb.ymin, cb.ymax].filter((v) => v > b.ymin + tol && v < b.ymax - tol && shapes(1, v));
     if (x.length + y.length > 0) out.push({ kind: 'notch', x, y, ...cb });
   }
   const polys = region.map((c) => contourPolyline(c, 1e-4 * size));

@@ -4,9 +4,10 @@
  * formatter as the panel (formatProperty / formatNumber), and every string taken from the
  * document is escaped, so a name is always shown as text.
  */
+import { kindOf } from '../shapes/registry';
 import type { SectionDocument } from '../document/types';
 import { createEvaluator, type Evaluation } from '../evaluate';
-import { formatIssue } from '../document/validate';
+import { formatShapeIssue } from '../document/issue-names';
 import { regionMoments } from '../moments/kernel';
 import type { Region } from '../geometry/contour';
 import {
@@ -24,6 +25,7 @@ import {
 import { CAUTION_TEXT } from './caution';
 import { checkerFields, renderCheckerBlock } from './checker';
 import { escapeHtml } from './escape';
+import { emptySectionText } from './empty';
 import { renderSectionFigure } from './figure';
 import { renderQbDiagram } from './qb-chart';
 import { renderLineReport } from './lines';
@@ -94,7 +96,7 @@ tr.group th { background: #dde3ea; }
 .figure { text-align: center; margin: 1mm 0; }
 .figure svg { display: block; margin: 0 auto; }
 .caption, .small { font-size: 8pt; color: #333; margin: 1mm 0; }
-.caution { border: 0.4mm solid #111; padding: 1.5mm 2.5mm; font-weight: 600; margin: 3mm 0; break-inside: avoid; }
+.caution { border: 0.4mm solid #111; padding: 1.5mm 2.5mm; font-weight: 600; margin: 2mm 0 0; break-inside: avoid; }
 .block { break-inside: avoid; page-break-inside: avoid; }
 .values { width: 100%; }
 .values td { padding: 0.3mm 1.2mm; }
@@ -112,6 +114,7 @@ table.schedule caption { text-align: left; font-weight: 600; font-size: 8pt; pad
 table.schedule th, table.schedule td { padding: 0.2mm 1.2mm; }
 table.shapes { break-inside: auto; page-break-inside: auto; }
 table.shapes tr { break-inside: avoid; page-break-inside: avoid; }
+table.shapes td[data-shape-name] { min-width: 26mm; }
 .shapes-list h2 { break-after: avoid; page-break-after: avoid; }
 .frame-note { margin: 0.5mm 0; font-size: 7.5pt; }
 table.schedule .group-start { border-left: 0.5mm solid #555; }
@@ -123,7 +126,7 @@ table.schedule.long { break-inside: auto; page-break-inside: auto; }
 .revisions td:nth-child(3) { width: 45%; }
 .fig-row { display: flex; flex-wrap: wrap; gap: 3mm 5mm; align-items: flex-start; justify-content: center; }
 .fig-row > .figure { margin: 0; }
-.fig-side { flex: 1 1 55mm; min-width: 55mm; }
+.fig-side { flex: 1 1 50mm; min-width: 50mm; }
 .fig-side .caption { margin-top: 0; }
 .checker h2 { font-size: 9pt; margin-top: 2mm; }
 .checker table { font-size: 7.5pt; }
@@ -147,8 +150,10 @@ function titleBlock(doc: SectionDocument): string {
     `<td><span class="label">${escapeHtml(label)}</span><span class="value" data-field="${escapeHtml(label.toLowerCase())}">${escapeHtml(value ?? '')}</span></td>`;
   return (
     `<table class="titleblock block"><tbody>` +
-    `<tr>${cell('Project', t.project)}${cell('Section', t.section ?? doc.name)}${cell('Units', doc.units)}${cell('Revision', t.revision || last?.revision)}</tr>` +
-    `<tr>${cell('Author', t.author)}${cell('Checker', t.checker || ck.checked?.by)}${cell('Date', t.date || last?.date)}<td><span class="label">Signature</span><span class="value"></span></td></tr>` +
+    // The revision history and the sign-off, when recorded, are the current state: the latest
+    // revision and the checker's name win over the title block's own fields.
+    `<tr>${cell('Project', t.project)}${cell('Section', t.section ?? doc.name)}${cell('Units', doc.units)}${cell('Revision', last?.revision || t.revision)}</tr>` +
+    `<tr>${cell('Author', t.author)}${cell('Checker', ck.checked?.by || t.checker)}${cell('Date', last?.date || t.date)}<td><span class="label">Signature</span><span class="value"></span></td></tr>` +
     `</tbody></table>`
   );
 }
@@ -263,15 +268,13 @@ export function renderReportHtml(input: ReportInput): string {
   } else {
     // Nothing to draw: say so in words, never a drawing of nothing.
     const why =
-      doc.shapes.length === 0
-        ? 'The section is empty: the document has no shapes, so there is nothing to draw and there are no properties.'
-        : evaluation.lines.length > 0 && doc.shapes.every((s) => s.type === 'line')
-          ? 'The document holds line elements only: there is no area, so the area properties are absent (this is not an error). The line groups, with their own figure and table, follow.'
-          : `The section has no area, so there is nothing to draw and there are no properties. ${evaluation.message ?? ''}`.trim();
+      evaluation.lines.length > 0 && doc.shapes.every((s) => kindOf(s).line)
+        ? 'The document holds line elements only: there is no area, so the area properties are absent (this is not an error). The line groups, with their own figure and table, follow.'
+        : emptySectionText(doc.shapes.length, evaluation.message);
     sectionBlock = `<section class="block empty-section" data-empty="true"><h2>Section</h2><p class="empty-message">${escapeHtml(why)}</p></section>`;
   }
 
-  const notes = evaluation.warnings.map((w) => `<li>${escapeHtml(formatIssue(w))}</li>`);
+  const notes = evaluation.warnings.map((w) => `<li>${escapeHtml(formatShapeIssue(w, doc.shapes))}</li>`);
   const shapes = shapeTable(input, size);
   const body: string[] = [`<h1>Section properties: ${escapeHtml(heading)}</h1>`, titleBlock(doc), sectionBlock, shapes.html];
   if (notes.length > 0) body.push(`<section class="block"><h2>Notes from the evaluation</h2><ul class="small">${notes.join('')}</ul></section>`);
@@ -280,9 +283,10 @@ export function renderReportHtml(input: ReportInput): string {
   if (props) body.push(renderMaterialsReport(input));
   const lines = renderLineReport(input);
   if (lines) body.push(lines);
+  // The caution closes the method block, so a page break never leaves it alone on a last page.
   body.push(
-    `<section class="block method"><h2>Method</h2><div class="method-cols"><p class="small">${escapeHtml(METHOD_NOTE)}</p><p class="small">${escapeHtml(CONVENTIONS)}</p><p class="small" data-note="numbers">${escapeHtml(NUMBER_NOTE)}</p><p class="small">${escapeHtml(QB_NOTE)}</p></div></section>`,
-    `<p class="caution">${escapeHtml(CAUTION_TEXT)}</p>`,
+    `<section class="block method"><h2>Method</h2><div class="method-cols"><p class="small">${escapeHtml(METHOD_NOTE)}</p><p class="small">${escapeHtml(CONVENTIONS)}</p><p class="small" data-note="numbers">${escapeHtml(NUMBER_NOTE)}</p><p class="small">${escapeHtml(QB_NOTE)}</p></div>` +
+      `<p class="caution">${escapeHtml(CAUTION_TEXT)}</p></section>`,
   );
   if (!fig) body.push(renderCheckerBlock(checkerFields(doc)));
   if (shapes.appendix) body.push(shapes.appendix);

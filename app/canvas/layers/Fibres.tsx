@@ -1,10 +1,14 @@
-/** The extreme fibres: dashed lines at the bounds, with their distances from the centroid. */
-import { formatNumber, type SectionProperties, type Units } from '../../../src';
+/**
+ * The extreme fibres: dashed lines at the bounds, with their distances from the centroid through
+ * the one formatter. A label that would run off the canvas moves to the other side, or is held
+ * inside the canvas's edge.
+ */
+import { formatQuantity, sectionSize, type SectionProperties, type Units } from '../../../src';
 import { INK, label } from '../../paint/ink';
 import { screenX, screenY, type ViewTransform } from '../../view';
 import { Paint } from '../PaintNode';
 
-export function FibreNode({ p, v, units }: { p: SectionProperties; v: ViewTransform; units: Units }) {
+export function FibreNode({ p, v, units, width }: { p: SectionProperties; v: ViewTransform; units: Units; width: number }) {
   return (
     <Paint
       paint={(ctx) => {
@@ -14,7 +18,6 @@ export function FibreNode({ p, v, units }: { p: SectionProperties; v: ViewTransf
         ctx.fillStyle = INK.fibre;
         ctx.lineWidth = 1;
         ctx.setLineDash([4, 3]);
-        ctx.font = '11px ui-sans-serif, system-ui, sans-serif';
         const pad = 24;
         ctx.beginPath();
         for (const y of [b.ymax, b.ymin]) {
@@ -27,13 +30,22 @@ export function FibreNode({ p, v, units }: { p: SectionProperties; v: ViewTransf
         }
         ctx.stroke();
         ctx.setLineDash([]);
-        const f = (n: number) => `${formatNumber(n, 4)} ${units}`;
-        label(ctx, `c top ${f(p.fibres.top)}`, X(b.xmax) + pad + 4, Y(b.ymax) + 4, INK.fibre);
-        label(ctx, `c bottom ${f(p.fibres.bottom)}`, X(b.xmax) + pad + 4, Y(b.ymin) + 4, INK.fibre);
-        const left = `c left ${f(p.fibres.left)}`;
         ctx.font = '11px ui-sans-serif, system-ui, sans-serif';
-        label(ctx, left, X(b.xmin) - ctx.measureText(left).width - 6, Y(b.ymax) - pad - 4, INK.fibre);
-        label(ctx, `c right ${f(p.fibres.right)}`, X(b.xmax) + 6, Y(b.ymax) - pad - 4, INK.fibre);
+        const size = sectionSize(b);
+        const f = (n: number) => `${formatQuantity(n, 1, size)} ${units}`;
+        const w = (t: string) => ctx.measureText(t).width;
+        const inside = (x: number, t: string) => Math.max(4, Math.min(x, width - w(t) - 4));
+        // Right of the section when it fits, else left of it.
+        const beside = (t: string) => {
+          const right = X(b.xmax) + pad + 4;
+          return right + w(t) + 4 <= width ? right : inside(X(b.xmin) - pad - 4 - w(t), t);
+        };
+        const top = `c top ${f(p.fibres.top)}`, bottom = `c bottom ${f(p.fibres.bottom)}`;
+        label(ctx, top, beside(top), Y(b.ymax) + 4, INK.fibre);
+        label(ctx, bottom, beside(bottom), Y(b.ymin) + 4, INK.fibre);
+        const left = `c left ${f(p.fibres.left)}`, right = `c right ${f(p.fibres.right)}`;
+        label(ctx, left, inside(X(b.xmin) - w(left) - 6, left), Y(b.ymax) - pad - 4, INK.fibre);
+        label(ctx, right, inside(X(b.xmax) + 6, right), Y(b.ymax) - pad - 4, INK.fibre);
       }}
     />
   );

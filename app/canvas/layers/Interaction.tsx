@@ -1,8 +1,9 @@
-/** What follows the pointer: the selection and its handles, a corner picked for rounding, the tool's draft, the snap target. */
+/** What follows the pointer: the selection, its handles and names, a corner picked for rounding, the tool's draft, the snap target. */
 import { useEditorShallow, useTransient } from '../../context';
 import { CornerNode } from './Corner';
 import { DraftNode } from './Draft';
 import { SelectionNode } from './Selection';
+import { ShapeNamesNode } from './ShapeNames';
 import { SnapNode } from './Snap';
 
 export function InteractionLayer() {
@@ -13,6 +14,7 @@ export function InteractionLayer() {
     <>
       <SelectionNode v={v} />
       <CornerNode v={v} />
+      <ShapeNamesNode v={v} />
       {draft && <DraftNode draft={draft} v={v} />}
       {snap && <SnapNode snap={snap} v={v} />}
     </>

@@ -1,7 +1,9 @@
-/** The result overlays the user switches on: cut line, extreme fibres, principal axes, centroid. */
+/** The result overlays the user switches on: dimensions, cut line, extreme fibres, principal axes, centroid. */
 import { useEditorShallow, useEditorState, useResults } from '../../context';
 import { CentroidNode } from './Centroid';
 import { CutNode } from './Cut';
+import { DimensionNode } from './Dimensions';
+import { useDimensions } from '../useDimensions';
 import { FibreNode } from './Fibres';
 import { PrincipalNode } from './Principal';
 
@@ -13,12 +15,14 @@ export function OverlayLayer() {
   const units = useEditorState((s) => s.doc.units);
   const ev = useResults((r) => r.evaluation);
   const { width, height } = useEditorShallow((s) => ({ width: s.width, height: s.height }));
+  const dims = useDimensions();
   const p = ev.props;
   if (!p) return null;
   return (
     <>
+      {dims && <DimensionNode layout={dims} v={v} />}
       {overlays.cut && cutAt !== null && <CutNode ev={ev} p={p} axis={cutAxis} at={cutAt} v={v} units={units} width={width} height={height} />}
-      {overlays.fibres && <FibreNode p={p} v={v} units={units} />}
+      {overlays.fibres && <FibreNode p={p} v={v} units={units} width={width} />}
       {overlays.principal && <PrincipalNode p={p} v={v} />}
       {overlays.centroid && <CentroidNode p={p} v={v} />}
     </>
