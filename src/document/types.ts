@@ -78,6 +78,10 @@ import type { Loads } from '../materials/stress';
 export { STRESS_UNITS, FORCE_UNITS, type StressUnit, type ForceUnit } from '../materials/units';
 import type { ForceUnit, StressUnit } from '../materials/units';
 
+/** A straight line across the section for its net section (src/document/net-lines.ts). */
+export type { NetLine } from './net-lines';
+import type { NetLine } from './net-lines';
+
 export interface SectionDocument {
   format: typeof FORMAT;
   version: typeof CURRENT_VERSION;
@@ -94,6 +98,8 @@ export interface SectionDocument {
   limits?: Limit[];
   /** Hole spacing and edge-distance rules for the cautions. */
   holeRules?: 'en1993' | 'aisc360';
+  /** Lines across the section whose net section the panel and the report give. */
+  netLines?: NetLine[];
   /** Materials; a shape names one by `material`, or takes the reference material. */
   materials?: Material[];
   reference?: string;
