@@ -29,6 +29,7 @@ import { canRedo, canUndo, redo, undo } from './store/history';
 import type { EditorState, Overlays } from './store/store';
 import { CommandRegistry, type CommandContext } from './commands/registry';
 import { activeShapes } from './store/section';
+import { registerCutoutCommands } from './ops/cutout-commands';
 
 const OP_LABEL = { add: 'Add', subtract: 'Subtract', intersect: 'Intersect' } as const;
 const OP_KEY = { add: 'shift+a', subtract: 'shift+s', intersect: 'shift+i' } as const;
@@ -181,6 +182,7 @@ export function buildRegistry(): CommandRegistry {
   registerEdits(r);
   registerView(r);
   registerFiles(r);
+  registerCutoutCommands(r);
   return r;
 }
 

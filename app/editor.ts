@@ -16,6 +16,7 @@ import { createEditorStore } from './store/store';
 import { createTransientStore } from './store/transient';
 import type { Tool, ToolEnv } from './tools/types';
 import { activeShapes, withActiveShapes } from './store/section';
+import { NetLineTool } from './tools/net-line';
 
 export type Editor = EditorHandle;
 
@@ -25,6 +26,7 @@ export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule
   const transient = createTransientStore();
   const tools: Record<string, Tool> = { select: new SelectTool() };
   for (const t of TOOL_SPECS) tools[t.id] = t.create();
+  tools.netline = new NetLineTool();
   const env: ToolEnv = {
     store,
     results,

@@ -1,0 +1,164 @@
+/**
+ * The cutout check derived from the live results (no React): the comparison of the baseline and
+ * the active proposal, the limits in force and their verdict, the material removed and added, the
+ * structural cautions, and the net sections along the document's lines. Every function is
+ * memoised by the identity of what it reads (evaluations, regions, documents), so a panel and a
+ * canvas layer asking for the same thing share one computation, and nothing is recomputed until
+ * the results change.
+ */
+import {
+  analyseCutouts,
+  compareSections,
+  evaluateLimits,
+  exampleLimits,
+  materialChange,
+  netSection,
+  overallVerdict,
+  UNIT_IN_METRES,
+  type CutoutFindings,
+  type Evaluation,
+  type HoleRuleSetId,
+  type InputShape,
+  type Limit,
+  type LimitResult,
+  type MaterialChange,
+  type NetLine,
+  type NetSection,
+  type Region,
+  type SectionComparison,
+  type SectionDocument,
+  type SectionProperties,
+  type Verdict,
+} from '../../src';
+
+/** A cache of values computed from two objects (by identity). */
+function memo2<A extends object, B extends object, V>(f: (a: A, b: B) => V): (a: A, b: B) => V {
+  const outer = new WeakMap<A, WeakMap<B, V>>();
+  return (a, b) => {
+    let inner = outer.get(a);
+    if (!inner) outer.set(a, (inner = new WeakMap()));
+    if (!inner.has(b)) inner.set(b, f(a, b));
+    return inner.get(b)!;
+  };
+}
+
+/** The comparison of the baseline's properties with the proposal's. */
+export const comparisonOf: (base: SectionProperties, proposal: SectionProperties) => SectionComparison = memo2((b, p) => compareSections(b, p));
+
+/** The material removed and added, as exact regions (two booleans: wait for the pointer to rest before asking). */
+export const materialChangeOf: (base: Region, proposal: Region) => MaterialChange = memo2((b, p) => materialChange(b, p));
+
+export interface LimitsInForce {
+  limits: Limit[];
+  /** True when the document sets none and the example limits stand in. */
+  examples: boolean;
+}
+
+const examplesByUnits = new Map<string, Limit[]>();
+
+/** The document's limits, or the example limits for its units when it sets none. */
+export function limitsInForce(doc: SectionDocument): LimitsInForce {
+  if (doc.limits) return { limits: doc.limits, examples: false };
+  let ex = examplesByUnits.get(doc.units);
+  if (!ex) examplesByUnits.set(doc.units, (ex = exampleLimits(UNIT_IN_METRES[doc.units])));
+  return { limits: ex, examples: true };
+}
+
+export interface LimitCheck {
+  results: LimitResult[];
+  verdict: Verdict;
+}
+
+const limitCache = new WeakMap<SectionComparison, WeakMap<Limit[], Map<string, LimitCheck>>>();
+
+/** Each limit against the comparison, and the verdict. */
+export function limitCheckOf(c: SectionComparison, limits: Limit[], units: string): LimitCheck {
+  let byLimits = limitCache.get(c);
+  if (!byLimits) limitCache.set(c, (byLimits = new WeakMap()));
+  let byUnits = byLimits.get(limits);
+  if (!byUnits) byLimits.set(limits, (byUnits = new Map()));
+  let r = byUnits.get(units);
+  if (!r) {
+    const results = evaluateLimits(c, limits, units);
+    byUnits.set(units, (r = { results, verdict: overallVerdict(results) }));
+  }
+  return r;
+}
+
+/** The status a comparison row shows: beyond if any of its limits is beyond, within if any applies, else none. */
+export function rowStatus(results: readonly LimitResult[], key: string): 'within' | 'beyond' | null {
+  const hits = results.filter((r) => r.property === key && r.status !== 'not-applicable');
+  if (!hits.length) return null;
+  return hits.some((h) => h.status === 'beyond') ? 'beyond' : 'within';
+}
+
+/** The input shapes of an evaluated section, for the cautions to name. */
+export function inputShapesOf(section: SectionDocument, ev: Evaluation): InputShape[] {
+  return section.shapes.map((s, k) => {
+    const shape: InputShape = { id: s.id, op: s.op ?? 'add', region: ev.shapes[k]?.region ?? [] };
+    if (s.name !== undefined) shape.name = s.name;
+    return shape;
+  });
+}
+
+export interface CutoutCautions {
+  /** With a proposal: what the proposal raises that the baseline does not. Without: the section on its own. */
+  findings: CutoutFindings;
+  /** With a proposal: the baseline's own findings (already there before the cut); null otherwise. */
+  baseline: CutoutFindings | null;
+  rules: HoleRuleSetId;
+}
+
+function options(doc: SectionDocument) {
+  return { rules: doc.holeRules ?? 'en1993', unitInMetres: UNIT_IN_METRES[doc.units], units: doc.units } as const;
+}
+
+const plainCache = new WeakMap<Evaluation, Map<string, CutoutFindings>>();
+
+/** The section's own findings (plain mode), cached by evaluation, rules and units. */
+function plainFindings(section: SectionDocument, ev: Evaluation): CutoutFindings {
+  const o = options(section);
+  const key = `${o.rules}/${o.units}`;
+  let m = plainCache.get(ev);
+  if (!m) plainCache.set(ev, (m = new Map()));
+  let f = m.get(key);
+  if (!f) m.set(key, (f = analyseCutouts({ result: ev.region, shapes: inputShapesOf(section, ev) }, o)));
+  return f;
+}
+
+const proposalCache = new WeakMap<Evaluation, WeakMap<Evaluation, Map<string, CutoutFindings>>>();
+
+/**
+ * The cautions for the active section: against the baseline when a proposal is active (only what
+ * is new, with the baseline's own listed apart), else the section on its own.
+ */
+export function cautionsOf(section: SectionDocument, ev: Evaluation, base: { doc: SectionDocument; evaluation: Evaluation } | null): CutoutCautions {
+  const o = options(section);
+  if (!base) return { findings: plainFindings(section, ev), baseline: null, rules: o.rules };
+  const key = `${o.rules}/${o.units}`;
+  let inner = proposalCache.get(ev);
+  if (!inner) proposalCache.set(ev, (inner = new WeakMap()));
+  let m = inner.get(base.evaluation);
+  if (!m) inner.set(base.evaluation, (m = new Map()));
+  let f = m.get(key);
+  if (!f) m.set(key, (f = analyseCutouts({ result: ev.region, baseline: base.evaluation.region, shapes: inputShapesOf(section, ev) }, o)));
+  return { findings: f, baseline: plainFindings({ ...base.doc, holeRules: section.holeRules }, base.evaluation), rules: o.rules };
+}
+
+const netCache = new WeakMap<Region, WeakMap<NetLine, NetSection | string>>();
+
+/** The net section of a region along one stored line (or why there is none), cached by both. */
+export function netSectionOf(region: Region, line: NetLine): NetSection | string {
+  let m = netCache.get(region);
+  if (!m) netCache.set(region, (m = new WeakMap()));
+  let r = m.get(line);
+  if (r === undefined) {
+    try {
+      r = netSection(region, { x: line.from[0], y: line.from[1] }, { x: line.to[0], y: line.to[1] });
+    } catch (e) {
+      r = e instanceof Error ? e.message : String(e);
+    }
+    m.set(line, r);
+  }
+  return r;
+}
