@@ -14,6 +14,12 @@ import { ReportOverlay } from './ui/ReportOverlay';
 import { ExchangeDialogs } from './exchange/ExchangeDialogs';
 import { TitleBlockDialog } from './ui/TitleBlock';
 import { downloadBlob } from './exchange/exports';
+import { ProposalStrip } from './ui/ProposalStrip';
+import { ChangeLegend } from './ui/ChangeLegend';
+import { ComparePanel } from './panel/ComparePanel';
+import { LimitsEditor } from './panel/LimitsEditor';
+import { CautionsPanel } from './panel/CautionsPanel';
+import { NetSectionPanel } from './panel/NetSectionPanel';
 
 export function App({ editor }: { editor: EditorHandle }) {
   const fileInput = useRef<HTMLInputElement>(null);
@@ -38,6 +44,8 @@ export function App({ editor }: { editor: EditorHandle }) {
         <ToolRail />
         <main className="stage">
           <Canvas />
+          <ProposalStrip />
+          <ChangeLegend />
           <Notice />
         </main>
         <aside className="panel" aria-label="Selection and results">
@@ -48,8 +56,12 @@ export function App({ editor }: { editor: EditorHandle }) {
             <ShapeList />
           </div>
           <div className="panel-scroll panel-results">
+            <ComparePanel />
+            <LimitsEditor />
             <ResultsPanel />
             <CutPanel />
+            <CautionsPanel />
+            <NetSectionPanel />
           </div>
           <Caution />
         </aside>

@@ -207,7 +207,8 @@ describe('cautions for the active section', () => {
     // The notch leaves two sharp inside corners, at (120, 70) and (160, 70).
     const corners = c.findings.cautions.filter((k) => k.kind === 're-entrant-corner').map((k) => [k.at.x, k.at.y]);
     expect(corners.sort()).toEqual([[120, 70], [160, 70]]);
-    expect(c.findings.cautions.find((k) => k.kind === 're-entrant-corner')!.shape).toEqual({ id: 'notch' });
+    expect(c.findings.cautions.find((k) => k.kind === 're-entrant-corner')!.shape).toEqual({ id: 'notch', name: 'Rectangle 2' });
+    expect(c.findings.cautions.find((k) => k.kind === 're-entrant-corner')!.message).toContain('“Rectangle 2” (notch)');
     expect(c.baseline!.cautions).toEqual([]);
     // Same result as the engine on the document itself.
     expect(evaluateDocument(baselineSection(doc(e))).props!.area).toBe(20000);

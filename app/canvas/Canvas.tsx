@@ -14,6 +14,9 @@ import { InteractionLayer } from './layers/Interaction';
 import { OverlayLayer } from './layers/Overlays';
 import { ProblemLayer } from './layers/Problems';
 import { ShapesLayer } from './layers/Shapes';
+import { BaselineLayer } from './layers/Baseline';
+import { CautionMarksLayer } from './layers/CautionMarks';
+import { NetLinesLayer } from './layers/NetLines';
 
 function isField(t: EventTarget | null): boolean {
   return t instanceof HTMLInputElement || t instanceof HTMLTextAreaElement || t instanceof HTMLSelectElement;
@@ -105,8 +108,11 @@ export function Canvas() {
         {/* One layer (one canvas) for everything that changes during a drag: software
             compositing copies each changed canvas every frame. */}
         <Layer listening={false}>
+          <BaselineLayer />
           <ShapesLayer />
           <OverlayLayer />
+          <NetLinesLayer />
+          <CautionMarksLayer />
           <ProblemLayer />
           <InteractionLayer />
         </Layer>

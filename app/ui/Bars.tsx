@@ -6,6 +6,7 @@ import { CommandButton } from '../fields/CommandButton';
 import { SHAPE_EDITORS, TOOL_SPECS } from '../shapes';
 import { KeysHelp } from './KeysHelp';
 import { PLACEHOLDER } from '../input-syntax';
+import { CutoutRail } from './CutoutRail';
 
 export function TopBar() {
   const name = useEditorState((s) => s.doc.name);
@@ -61,6 +62,7 @@ export function ToolRail() {
         ))}
       </div>
       {SHAPE_EDITORS.map((e, i) => e.RailControl && <e.RailControl key={i} />)}
+      <CutoutRail />
       <div className="rail-group">
         <h3>Snap</h3>
         <CommandButton name="snap.grid" />
