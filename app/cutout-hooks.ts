@@ -9,7 +9,7 @@
  * stale, so a drag frame never waits for them.
  */
 import { useRef } from 'react';
-import type { Caution, CutoutFindings, MaterialChange, SectionComparison } from '../src';
+import { cautionsInOrder, type Caution, type CutoutFindings, type MaterialChange, type SectionComparison } from '../src';
 import { useEditorState, useResults } from './context';
 import { activeSection } from './store/section';
 import { cautionsOf, comparisonOf, limitCheckOf, limitsInForce, materialChangeOf, type CutoutCautions, type LimitCheck, type LimitsInForce } from './store/cutout';
@@ -69,8 +69,8 @@ export function numberedCautions(c: CutoutCautions | null): { findings: CutoutFi
   if (!c) return { findings: null, own: 0, all: [] };
   let r = numbered.get(c);
   if (!r) {
-    const own = warningsFirst(c.findings.cautions);
-    r = { findings: c.findings, own: own.length, all: [...own, ...warningsFirst(c.baseline?.cautions ?? [])] };
+    const own = cautionsInOrder(c.findings.cautions);
+    r = { findings: c.findings, own: own.length, all: [...own, ...cautionsInOrder(c.baseline?.cautions ?? [])] };
     numbered.set(c, r);
   }
   return r;
@@ -78,10 +78,6 @@ export function numberedCautions(c: CutoutCautions | null): { findings: CutoutFi
 
 const numbered = new WeakMap<CutoutCautions, { findings: CutoutFindings; own: number; all: Caution[] }>();
 
-/** Warnings before notes, otherwise in the order found. */
-function warningsFirst(list: readonly Caution[]): Caution[] {
-  return [...list.filter((c) => c.severity === 'warning'), ...list.filter((c) => c.severity !== 'warning')];
-}
 
 /** True when the shown section is the one the results belong to. */
 export function useSectionShown(): boolean {

@@ -10,6 +10,8 @@ export interface ReportRequest {
   evaluation: Evaluation;
   cut?: { axis: 'x' | 'y'; at: number } | null;
   generated?: string;
+  /** The proposal to check against the baseline (default: the one shown, else the first; null: none). */
+  variant?: string | null;
 }
 
 export type ReportRenderer = (input: ReportRequest) => string;

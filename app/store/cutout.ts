@@ -14,7 +14,7 @@ import {
   materialChange,
   netSection,
   overallVerdict,
-  shapeDisplayName,
+  namedInputShapes,
   UNIT_IN_METRES,
   type CutoutFindings,
   type Evaluation,
@@ -95,10 +95,7 @@ export function rowStatus(results: readonly LimitResult[], key: string): 'within
 
 /** The input shapes of an evaluated section, for the cautions to name. */
 export function inputShapesOf(section: SectionDocument, ev: Evaluation): InputShape[] {
-  return section.shapes.map((s, k) => {
-    // Unnamed shapes are named as the shape list names them ("Rectangle 4"), so a caution reads the same.
-    return { id: s.id, name: shapeDisplayName(s, k), op: s.op ?? 'add', region: ev.shapes[k]?.region ?? [] };
-  });
+  return namedInputShapes(section.shapes, ev.shapes);
 }
 
 export interface CutoutCautions {

@@ -27,7 +27,8 @@ export function ReportOverlay() {
         }
         const s = editor.store.getState();
         const cut = s.overlays.cut && s.cutAt !== null ? { axis: s.cutAxis, at: s.cutAt } : null;
-        setHtml(render({ doc: s.doc, evaluation: editor.results.evaluate(s.doc), cut, generated: new Date().toISOString().slice(0, 16).replace('T', ' ') }));
+        // The report describes the baseline; a proposal (the one shown, else the first) gets its cutout check after it.
+        setHtml(render({ doc: s.doc, evaluation: editor.results.evaluateBaseline(s.doc), cut, generated: new Date().toISOString().slice(0, 16).replace('T', ' ') }));
       })
       .catch((e) => live && setProblem(`The report could not be made: ${(e as Error).message}`));
     return () => {

@@ -18,3 +18,5 @@ export { shapeSchedule, renderScheduleTables, type ShapeSchedule, type ScheduleT
 export { checkerFields, renderCheckerBlock, type CheckerFields, type RevisionEntry } from './checker';
 export { chooseScale, STANDARD_SCALES, type DrawingScale } from './scale';
 export { escapeHtml } from './escape';
+export { renderComparisonSection, reportProposal, COMPARISON_CSS } from './comparison';
+export { renderComparisonFigure, type ComparisonFigure, type ComparisonFigureInput } from './comparison-figure';
