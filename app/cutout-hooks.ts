@@ -28,10 +28,12 @@ export function useComparison(): SectionComparison | null {
 
 /** The limits in force and, with a comparison, each limit's result and the verdict. */
 export function useLimits(): { inForce: LimitsInForce; check: LimitCheck | null } {
-  const doc = useEditorState((s) => s.doc);
+  // The limits and units only: the document itself changes on every pointer move of a drag.
+  const limits = useEditorState((s) => s.doc.limits);
+  const units = useEditorState((s) => s.doc.units);
   const c = useComparison();
-  const inForce = limitsInForce(doc);
-  return { inForce, check: c ? limitCheckOf(c, inForce.limits, doc.units) : null };
+  const inForce = limitsInForce({ limits, units });
+  return { inForce, check: c ? limitCheckOf(c, inForce.limits, units) : null };
 }
 
 /** A value that waits for the pointer to rest: while a gesture runs, the last one (stale: true). */

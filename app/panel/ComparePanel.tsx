@@ -50,6 +50,12 @@ function Row({ r, size, units, status }: { r: PropertyChange; size: number; unit
   );
 }
 
+/** Shown while the comparison trails the proposal (its own component: it re-renders on every pointer move). */
+function Updating() {
+  const shown = useSectionShown();
+  return <span className={`pending${shown ? '' : ' on'}`}>updating</span>;
+}
+
 export function ComparePanel() {
   const proposal = useActiveProposal();
   const c = useComparison();
@@ -57,7 +63,6 @@ export function ComparePanel() {
   const units = useResults((r) => r.doc.units);
   const baseMessage = useResults((r) => (r.baseline && !r.baseline.evaluation.props ? r.baseline.evaluation.message : null));
   const propMessage = useResults((r) => (r.baseline && !r.evaluation.props ? r.evaluation.message : null));
-  const shown = useSectionShown();
   const { change, stale } = useMaterialChange();
   if (!proposal) return null;
   if (!c || !check) {
@@ -82,7 +87,7 @@ export function ComparePanel() {
     <section className="panel-section compare-panel" data-testid="compare-panel">
       <div className="compare-head">
         <h2>
-          {proposal} against the baseline <span className={`pending${shown ? '' : ' on'}`}>updating</span>
+          {proposal} against the baseline <Updating />
         </h2>
         <span className={`verdict ${check.verdict}`} data-testid="verdict" data-verdict={check.verdict} title={results.map((r) => r.message).join('\n')}>
           {check.verdict === 'within' ? 'Within the limits' : 'Beyond the limits'}

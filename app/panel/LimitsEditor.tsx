@@ -6,7 +6,7 @@
  * focus, is checked by the engine first, and is one undo step; an empty field clears that limit.
  */
 import { useEffect, useRef, useState } from 'react';
-import { comparisonCatalog, CENTROID_KEY, EXAMPLE_LIMITS_NOTE, type LimitField, type LimitResult, type SectionDocument } from '../../src';
+import { comparisonCatalog, CENTROID_KEY, EXAMPLE_LIMITS_NOTE, type LimitField, type LimitResult } from '../../src';
 import { useLimits } from '../cutout-hooks';
 import { useEditor, useEditorState } from '../context';
 import { evaluateExpression } from '../expr';
@@ -105,7 +105,7 @@ function statusOf(results: readonly LimitResult[] | undefined, property: string)
   return { status, title: hits.map((h) => h.message).join('\n') };
 }
 
-function AddLimit({ doc }: { doc: SectionDocument }) {
+function AddLimit() {
   const editor = useEditor();
   const { inForce } = useLimits();
   const [choice, setChoice] = useState('');
@@ -114,7 +114,7 @@ function AddLimit({ doc }: { doc: SectionDocument }) {
   const options = [CENTROID_KEY, ...CATALOG.map((i) => i.key)].filter((k) => !taken.has(k) && limitFieldsFor(k).length > 0);
   const add = () => {
     if (!choice) return;
-    const plan = limitsWithAdded(doc, choice);
+    const plan = limitsWithAdded(editor.store.getState().doc, choice);
     if (typeof plan === 'string') return setError(plan);
     editor.run('limits.add', { property: choice });
     setChoice('');
@@ -143,9 +143,10 @@ function AddLimit({ doc }: { doc: SectionDocument }) {
 
 export function LimitsEditor() {
   const editor = useEditor();
-  const doc = useEditorState((s) => s.doc);
+  const active = useEditorState((s) => !!s.doc.activeVariant);
+  const units = useEditorState((s) => s.doc.units);
   const { inForce, check } = useLimits();
-  if (!doc.activeVariant) return null;
+  if (!active) return null;
   return (
     <section className="panel-section limits-editor" data-testid="limits-editor">
       <h2>Limits</h2>
@@ -168,7 +169,7 @@ export function LimitsEditor() {
             </span>
             <span className="limit-fields">
               {limitFieldsFor(l.property).map((f) => (
-                <LimitInput key={f} index={index} field={f} value={l[f]} units={doc.units} />
+                <LimitInput key={f} index={index} field={f} value={l[f]} units={units} />
               ))}
             </span>
             <span title={s.title}>{s.status && <span className={`flag ${s.status === 'n/a' ? '' : s.status}`} data-limit-status={s.status}>{s.status}</span>}</span>
@@ -178,7 +179,7 @@ export function LimitsEditor() {
           </div>
         );
       })}
-      <AddLimit doc={doc} />
+      <AddLimit />
     </section>
   );
 }

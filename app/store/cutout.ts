@@ -58,7 +58,7 @@ export interface LimitsInForce {
 const examplesByUnits = new Map<string, Limit[]>();
 
 /** The document's limits, or the example limits for its units when it sets none. */
-export function limitsInForce(doc: SectionDocument): LimitsInForce {
+export function limitsInForce(doc: Pick<SectionDocument, 'limits' | 'units'>): LimitsInForce {
   if (doc.limits) return { limits: doc.limits, examples: false };
   let ex = examplesByUnits.get(doc.units);
   if (!ex) examplesByUnits.set(doc.units, (ex = exampleLimits(UNIT_IN_METRES[doc.units])));

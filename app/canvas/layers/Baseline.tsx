@@ -4,11 +4,11 @@
  * outline drawn faintly, dashed. Painted before the section, so the proposal's own outline stays
  * on top. Nothing is drawn while the baseline is shown.
  *
- * The shaded regions are the exact booleans (src/compare/material-change.ts). Those wait for the
- * pointer to rest (cutout-hooks.ts); while a drag runs, the same two areas are painted by clipping
- * one outline with the other (the baseline's fill outside the proposal, and the reverse), which
- * shows the same pixels without computing a boolean per frame.
+ * The shaded regions are the exact booleans (src/compare/material-change.ts), which wait for the
+ * pointer to rest (cutout-hooks.ts). While a drag runs only the baseline is drawn (the moving
+ * shape's own hatch shows the cut); the shading returns when the pointer rests.
  */
+import { useRef } from 'react';
 import type { Region } from '../../../src';
 import { useMaterialChange } from '../../cutout-hooks';
 import { useEditorShallow, useResults } from '../../context';
@@ -16,20 +16,6 @@ import { CUTOUT_INK, removedHatch } from '../../paint/cutout-ink';
 import { traceRegion } from '../../paint/trace';
 import type { ViewTransform } from '../../view';
 import { Paint } from '../PaintNode';
-
-/** Fill `region` where `outside` has no material (the even-odd rule against a frame around the view). */
-function fillOutside(ctx: CanvasRenderingContext2D, region: Region, outside: Region, v: ViewTransform, w: number, h: number, fill: string | CanvasPattern) {
-  ctx.save();
-  ctx.beginPath();
-  ctx.rect(-10, -10, w + 20, h + 20);
-  traceRegion(ctx, outside, v);
-  ctx.clip('evenodd');
-  ctx.beginPath();
-  traceRegion(ctx, region, v);
-  ctx.fillStyle = fill;
-  ctx.fill('nonzero');
-  ctx.restore();
-}
 
 function fillRegion(ctx: CanvasRenderingContext2D, region: Region, v: ViewTransform, fills: (string | CanvasPattern)[], line: string) {
   if (!region.length) return;
@@ -44,33 +30,56 @@ function fillRegion(ctx: CanvasRenderingContext2D, region: Region, v: ViewTransf
   ctx.stroke();
 }
 
+/**
+ * The layer repaints as a whole on every pointer move of a drag, but this picture changes only
+ * when the results do: it is painted once into an offscreen bitmap per change (of the regions,
+ * the view or the size) and copied on every frame, so a drag pays one copy, not the fills.
+ */
+function useBitmap(width: number, height: number) {
+  const ref = useRef<{ canvas: HTMLCanvasElement; key: unknown[] } | null>(null);
+  return (key: unknown[], draw: (ctx: CanvasRenderingContext2D) => void): HTMLCanvasElement | null => {
+    if (typeof document === 'undefined') return null;
+    const pr = typeof window !== 'undefined' ? window.devicePixelRatio || 1 : 1;
+    const full = [...key, width, height, pr];
+    const hit = ref.current;
+    if (hit && hit.key.length === full.length && hit.key.every((k, i) => k === full[i])) return hit.canvas;
+    const canvas = hit?.canvas ?? document.createElement('canvas');
+    canvas.width = Math.max(1, Math.round(width * pr));
+    canvas.height = Math.max(1, Math.round(height * pr));
+    const ctx = canvas.getContext('2d');
+    if (!ctx) return null;
+    ctx.setTransform(pr, 0, 0, pr, 0, 0);
+    ctx.clearRect(0, 0, width, height);
+    draw(ctx);
+    ref.current = { canvas, key: full };
+    return canvas;
+  };
+}
+
 export function BaselineLayer() {
   const v = useEditorShallow((s) => ({ scale: s.scale, ox: s.ox, oy: s.oy }));
   const { width, height } = useEditorShallow((s) => ({ width: s.width, height: s.height }));
   const base = useResults((r) => r.baseline?.evaluation.region ?? null);
-  const proposal = useResults((r) => r.evaluation.region);
   const { change, stale } = useMaterialChange();
+  const bitmap = useBitmap(width, height);
   if (!base) return null;
-  return (
-    <Paint
-      paint={(ctx) => {
-        if (change && !stale) {
-          fillRegion(ctx, change.removed, v, [CUTOUT_INK.removedFill, removedHatch(ctx)], CUTOUT_INK.removedLine);
-          fillRegion(ctx, change.added, v, [CUTOUT_INK.addedFill], CUTOUT_INK.addedLine);
-        } else {
-          fillOutside(ctx, base, proposal, v, width, height, CUTOUT_INK.removedFill);
-          fillOutside(ctx, proposal, base, v, width, height, CUTOUT_INK.addedFill);
-        }
-        ctx.beginPath();
-        traceRegion(ctx, base, v);
-        ctx.fillStyle = CUTOUT_INK.baselineFill;
-        ctx.fill('nonzero');
-        ctx.setLineDash([6, 4]);
-        ctx.strokeStyle = CUTOUT_INK.baselineLine;
-        ctx.lineWidth = 1.2;
-        ctx.stroke();
-        ctx.setLineDash([]);
-      }}
-    />
-  );
+  // While a drag runs the shading is left out (the moving shape's own hatch shows the cut), so the
+  // picture does not change with each evaluation; it comes back, exact, when the pointer rests.
+  const exact = change && !stale ? change : null;
+  const picture = bitmap([base, exact, v.scale, v.ox, v.oy], (ctx) => {
+    if (exact) {
+      fillRegion(ctx, exact.removed, v, [CUTOUT_INK.removedFill, removedHatch(ctx)], CUTOUT_INK.removedLine);
+      fillRegion(ctx, exact.added, v, [CUTOUT_INK.addedFill], CUTOUT_INK.addedLine);
+    }
+    ctx.beginPath();
+    traceRegion(ctx, base, v);
+    ctx.fillStyle = CUTOUT_INK.baselineFill;
+    ctx.fill('nonzero');
+    ctx.setLineDash([6, 4]);
+    ctx.strokeStyle = CUTOUT_INK.baselineLine;
+    ctx.lineWidth = 1.2;
+    ctx.stroke();
+    ctx.setLineDash([]);
+  });
+  return <Paint paint={(ctx) => picture && ctx.drawImage(picture, 0, 0, width, height)} />;
 }
