@@ -214,3 +214,33 @@ describe('cautions for the active section', () => {
     expect(evaluateDocument(baselineSection(doc(e))).props!.area).toBe(20000);
   });
 });
+
+describe('hole cautions follow the rule set kept in the document', () => {
+  // EN 1993-1-8, Table 3.3: e1, e2 ≥ 1.2 d0; AISC 360-16, Table J3.4M (from memory, as in
+  // src/cautions/hole-rules.ts). A Ø20 hole with its centre 1.0 d0 = 20 from the plate's edge fails
+  // both; at 2.0 d0 = 40 it passes both.
+  const withHole = (cx: number) => {
+    const e = createEditor(plate());
+    e.run('proposal.new');
+    e.env.addShape({ id: 'bolt', type: 'circle', center: [cx, 50], radius: 10, op: 'subtract' } as never);
+    return e;
+  };
+  const edgeCautions = (e: ReturnType<typeof createEditor>) => {
+    const r = e.results.results.getState();
+    return cautionsOf(activeSection(doc(e)), r.evaluation, r.baseline).findings.cautions.filter((k) => k.kind === 'hole-edge-distance');
+  };
+  it('a hole at 1.0 d from the edge is flagged with the EN rule, then with AISC once chosen', () => {
+    const e = withHole(20);
+    const en = edgeCautions(e);
+    expect(en).toHaveLength(1);
+    expect(en[0].source).toMatch(/EN 1993-1-8/);
+    expect(en[0].values!.centreDistance).toBeCloseTo(20, 12);
+    e.run('holeRules.set', 'aisc360');
+    const aisc = edgeCautions(e);
+    expect(aisc).toHaveLength(1);
+    expect(aisc[0].source).toMatch(/AISC 360-16, Section J3.4/);
+  });
+  it('a hole at 2.0 d from the edge is not', () => {
+    expect(edgeCautions(withHole(40))).toEqual([]);
+  });
+});
