@@ -5,14 +5,15 @@
  * are in app/store/cutout.ts (memoised by identity).
  *
  * The comparison follows every evaluation. The exact material change (two booleans) and the
- * cautions wait for the pointer to rest: while a drag runs they keep their last value, marked
- * stale, so a drag frame never waits for them.
+ * cautions come from the cutout analysis (store/analysis.ts: a worker, once the pointer rests);
+ * until its answer belongs to the results shown they are marked stale.
  */
-import { useRef } from 'react';
-import { cautionsInOrder, type Caution, type CutoutFindings, type MaterialChange, type SectionComparison } from '../src';
-import { useEditorState, useResults } from './context';
+import { useStore } from 'zustand';
+import { cautionsInOrder, type Caution, type MaterialChange, type SectionComparison } from '../src';
+import { useEditor, useEditorState, useResults } from './context';
+import { cutoutAnalysis, type AnalysisState } from './store/analysis';
 import { activeSection } from './store/section';
-import { cautionsOf, comparisonOf, limitCheckOf, limitsInForce, materialChangeOf, type CutoutCautions, type LimitCheck, type LimitsInForce } from './store/cutout';
+import { comparisonOf, limitCheckOf, limitsInForce, type CutoutCautions, type LimitCheck, type LimitsInForce } from './store/cutout';
 
 /** The proposal shown (null: the baseline). */
 export function useActiveProposal(): string | null {
@@ -36,50 +37,45 @@ export function useLimits(): { inForce: LimitsInForce; check: LimitCheck | null 
   return { inForce, check: c ? limitCheckOf(c, inForce.limits, units) : null };
 }
 
-/** A value that waits for the pointer to rest: while a gesture runs, the last one (stale: true). */
-function useRested<T>(compute: () => T, deps: readonly unknown[]): { value: T; stale: boolean } {
-  const moving = useEditorState((s) => s.gestureBase !== null);
-  const last = useRef<{ deps: readonly unknown[]; value: T } | null>(null);
-  const same = last.current && last.current.deps.length === deps.length && last.current.deps.every((d, k) => d === deps[k]);
-  if (same) return { value: last.current!.value, stale: false };
-  if (moving && last.current) return { value: last.current.value, stale: true };
-  const value = compute();
-  last.current = { deps, value };
-  return { value, stale: false };
+/** The cutout analysis (analysis.ts) and whether its answer belongs to the results shown now. */
+function useAnalysis<T>(pick: (a: AnalysisState) => T): { value: T; stale: boolean } {
+  const editor = useEditor();
+  const a = cutoutAnalysis(editor.store, editor.results);
+  const value = useStore(a, pick);
+  const forEv = useStore(a, (x) => x.forEvaluation);
+  const forBase = useStore(a, (x) => x.forBaseline);
+  const forRules = useStore(a, (x) => x.forRules);
+  const ev = useResults((r) => r.evaluation);
+  const base = useResults((r) => r.baseline?.evaluation ?? null);
+  const rules = useEditorState((s) => `${s.doc.holeRules ?? 'en1993'}/${s.doc.units}`);
+  return { value, stale: forEv !== ev || forBase !== base || forRules !== rules };
 }
 
-/** The exact material removed and added by the shown proposal (null: the baseline is shown). */
+/** The exact material removed and added by the shown proposal (null: the baseline is shown, or not known yet). */
 export function useMaterialChange(): { change: MaterialChange | null; stale: boolean } {
-  const base = useResults((r) => r.baseline?.evaluation.region ?? null);
-  const prop = useResults((r) => (r.baseline ? r.evaluation.region : null));
-  const r = useRested(() => (base && prop ? materialChangeOf(base, prop) : null), [base, prop]);
+  const r = useAnalysis((a) => a.change);
   return { change: r.value, stale: r.stale };
 }
 
 /** The cautions of the shown section (against the baseline when a proposal is shown). */
 export function useCautions(): { cautions: CutoutCautions | null; stale: boolean } {
-  const section = useResults((r) => r.doc);
-  const ev = useResults((r) => r.evaluation);
-  const base = useResults((r) => r.baseline);
-  const rules = useEditorState((s) => s.doc.holeRules);
-  const r = useRested(() => (ev.props ? cautionsOf({ ...section, holeRules: rules }, ev, base) : null), [section, ev, base, rules]);
+  const r = useAnalysis((a) => a.cautions);
   return { cautions: r.value, stale: r.stale };
 }
 
-/** Every caution shown, numbered as on the canvas: the proposal's (or the section's) first, then the baseline's own. */
-export function numberedCautions(c: CutoutCautions | null): { findings: CutoutFindings | null; own: number; all: Caution[] } {
-  if (!c) return { findings: null, own: 0, all: [] };
+/** Every caution shown, numbered as on the canvas: the proposal's (or the section's) first, then the baseline's own; warnings first in each. */
+export function numberedCautions(c: CutoutCautions | null): { own: number; all: Caution[] } {
+  if (!c) return { own: 0, all: [] };
   let r = numbered.get(c);
   if (!r) {
-    const own = cautionsInOrder(c.findings.cautions);
-    r = { findings: c.findings, own: own.length, all: [...own, ...cautionsInOrder(c.baseline?.cautions ?? [])] };
+    const own = cautionsInOrder(c.cautions);
+    r = { own: own.length, all: [...own, ...cautionsInOrder(c.baseline ?? [])] };
     numbered.set(c, r);
   }
   return r;
 }
 
-const numbered = new WeakMap<CutoutCautions, { findings: CutoutFindings; own: number; all: Caution[] }>();
-
+const numbered = new WeakMap<CutoutCautions, { own: number; all: Caution[] }>();
 
 /** True when the shown section is the one the results belong to. */
 export function useSectionShown(): boolean {

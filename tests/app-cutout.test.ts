@@ -11,6 +11,9 @@ import { createEditor } from '../app/editor';
 import { comparisonOf, limitCheckOf, limitsInForce, cautionsOf } from '../app/store/cutout';
 import { activeSection } from '../app/store/section';
 import { baselineSection } from '../app/store/baseline';
+import { cutoutAnalysis } from '../app/store/analysis';
+import { beginGesture, endGesture, previewGesture } from '../app/store/history';
+import { withActiveShapes } from '../app/store/section';
 import { exampleLimits, evaluateDocument, type SectionDocument, type Shape } from '../src';
 
 const plate = (): SectionDocument => ({
@@ -205,11 +208,11 @@ describe('cautions for the active section', () => {
     const r = e.results.results.getState();
     const c = cautionsOf(activeSection(doc(e)), r.evaluation, r.baseline);
     // The notch leaves two sharp inside corners, at (120, 70) and (160, 70).
-    const corners = c.findings.cautions.filter((k) => k.kind === 're-entrant-corner').map((k) => [k.at.x, k.at.y]);
+    const corners = c.cautions.filter((k) => k.kind === 're-entrant-corner').map((k) => [k.at.x, k.at.y]);
     expect(corners.sort()).toEqual([[120, 70], [160, 70]]);
-    expect(c.findings.cautions.find((k) => k.kind === 're-entrant-corner')!.shape).toEqual({ id: 'notch', name: 'Rectangle 2' });
-    expect(c.findings.cautions.find((k) => k.kind === 're-entrant-corner')!.message).toContain('“Rectangle 2” (notch)');
-    expect(c.baseline!.cautions).toEqual([]);
+    expect(c.cautions.find((k) => k.kind === 're-entrant-corner')!.shape).toEqual({ id: 'notch', name: 'Rectangle 2' });
+    expect(c.cautions.find((k) => k.kind === 're-entrant-corner')!.message).toContain('“Rectangle 2” (notch)');
+    expect(c.baseline).toEqual([]);
     // Same result as the engine on the document itself.
     expect(evaluateDocument(baselineSection(doc(e))).props!.area).toBe(20000);
   });
@@ -227,7 +230,7 @@ describe('hole cautions follow the rule set kept in the document', () => {
   };
   const edgeCautions = (e: ReturnType<typeof createEditor>) => {
     const r = e.results.results.getState();
-    return cautionsOf(activeSection(doc(e)), r.evaluation, r.baseline).findings.cautions.filter((k) => k.kind === 'hole-edge-distance');
+    return cautionsOf(activeSection(doc(e)), r.evaluation, r.baseline).cautions.filter((k) => k.kind === 'hole-edge-distance');
   };
   it('a hole at 1.0 d from the edge is flagged with the EN rule, then with AISC once chosen', () => {
     const e = withHole(20);
@@ -242,5 +245,39 @@ describe('hole cautions follow the rule set kept in the document', () => {
   });
   it('a hole at 2.0 d from the edge is not', () => {
     expect(edgeCautions(withHole(40))).toEqual([]);
+  });
+});
+
+
+describe('the cutout analysis beside the live results (main thread here; a worker in the browser)', () => {
+  it('answers for the results shown, waits while a drag runs, and answers again when it ends', async () => {
+    const e = createEditor(plate());
+    withNotch(e);
+    const a = cutoutAnalysis(e.store, e.results);
+    await Promise.resolve();
+    let s = a.getState();
+    expect(s.forEvaluation).toBe(e.results.results.getState().evaluation);
+    // Removed: the notch inside the plate, 40 × 30 (composite method: the notch's own area).
+    expect(Math.abs(s.change!.removedArea - 1200)).toBeLessThanOrEqual(1e-9 * 1200);
+    expect(s.cautions!.cautions.filter((c) => c.kind === 're-entrant-corner')).toHaveLength(2);
+    expect(s.cautions!.baseline).toEqual([]);
+    // A drag: the results follow, the analysis waits.
+    beginGesture(e.store);
+    const moved = activeSection(doc(e)).shapes.map((x) => (x.id === 'notch' ? { ...x, at: [100, 70] } : x)) as Shape[];
+    previewGesture(e.store, withActiveShapes(doc(e), moved));
+    expect(e.results.results.getState().evaluation).not.toBe(s.forEvaluation);
+    expect(a.getState().forEvaluation).toBe(s.forEvaluation);
+    endGesture(e.store);
+    s = a.getState();
+    expect(s.forEvaluation).toBe(e.results.results.getState().evaluation);
+    expect(s.cautions!.cautions.filter((c) => c.kind === 're-entrant-corner').map((c) => c.at.x).sort()).toEqual([100, 140]);
+  });
+  it('a changed rule set is analysed again', async () => {
+    const e = createEditor(plate());
+    const a = cutoutAnalysis(e.store, e.results);
+    await Promise.resolve();
+    expect(a.getState().cautions!.rules).toBe('en1993');
+    e.run('holeRules.set', 'aisc360');
+    expect(a.getState().cautions!.rules).toBe('aisc360');
   });
 });

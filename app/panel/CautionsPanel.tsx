@@ -49,7 +49,7 @@ export function CautionsPanel() {
         Cautions{' '}
         <span className="kind">
           {cautions ? `${warnings} warning${warnings === 1 ? '' : 's'}, ${mine.length - warnings} note${mine.length - warnings === 1 ? '' : 's'}` : ''}
-          {stale ? ' · updating when the pointer rests' : ''}
+          {stale ? ' · updating…' : ''}
         </span>
       </h2>
       <label className="rules-choice">

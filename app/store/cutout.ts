@@ -1,28 +1,25 @@
 /**
  * The cutout check derived from the live results (no React): the comparison of the baseline and
- * the active proposal, the limits in force and their verdict, the material removed and added, the
- * structural cautions, and the net sections along the document's lines. Every function is
- * memoised by the identity of what it reads (evaluations, regions, documents), so a panel and a
- * canvas layer asking for the same thing share one computation, and nothing is recomputed until
- * the results change.
+ * the active proposal, the limits in force and their verdict, the net sections along the
+ * document's lines (memoised by the identity of what they read, so a panel and a canvas layer
+ * share one computation), and the structural cautions as plain jobs, which the analysis worker
+ * runs (analysis.ts; the material removed and added is computed there too).
  */
 import {
   analyseCutouts,
   compareSections,
   evaluateLimits,
   exampleLimits,
-  materialChange,
   netSection,
   overallVerdict,
   namedInputShapes,
   UNIT_IN_METRES,
-  type CutoutFindings,
+  type Caution,
   type Evaluation,
   type HoleRuleSetId,
   type InputShape,
   type Limit,
   type LimitResult,
-  type MaterialChange,
   type NetLine,
   type NetSection,
   type Region,
@@ -45,9 +42,6 @@ function memo2<A extends object, B extends object, V>(f: (a: A, b: B) => V): (a:
 
 /** The comparison of the baseline's properties with the proposal's. */
 export const comparisonOf: (base: SectionProperties, proposal: SectionProperties) => SectionComparison = memo2((b, p) => compareSections(b, p));
-
-/** The material removed and added, as exact regions (two booleans: wait for the pointer to rest before asking). */
-export const materialChangeOf: (base: Region, proposal: Region) => MaterialChange = memo2((b, p) => materialChange(b, p));
 
 export interface LimitsInForce {
   limits: Limit[];
@@ -100,46 +94,54 @@ export function inputShapesOf(section: SectionDocument, ev: Evaluation): InputSh
 
 export interface CutoutCautions {
   /** With a proposal: what the proposal raises that the baseline does not. Without: the section on its own. */
-  findings: CutoutFindings;
-  /** With a proposal: the baseline's own findings (already there before the cut); null otherwise. */
-  baseline: CutoutFindings | null;
+  cautions: Caution[];
+  /** With a proposal: the baseline's own cautions (already there before the cut); null otherwise. */
+  baseline: Caution[] | null;
   rules: HoleRuleSetId;
 }
 
-function options(doc: SectionDocument) {
-  return { rules: doc.holeRules ?? 'en1993', unitInMetres: UNIT_IN_METRES[doc.units], units: doc.units } as const;
+/** Everything one caution analysis reads, as plain data (it can go to a worker). */
+export interface CautionJob {
+  result: Region;
+  /** The baseline's region: only what is new is flagged. Absent: the section on its own. */
+  baseline?: Region;
+  shapes: InputShape[];
+  options: { rules: HoleRuleSetId; unitInMetres: number; units: string };
 }
 
-const plainCache = new WeakMap<Evaluation, Map<string, CutoutFindings>>();
-
-/** The section's own findings (plain mode), cached by evaluation, rules and units. */
-function plainFindings(section: SectionDocument, ev: Evaluation): CutoutFindings {
-  const o = options(section);
-  const key = `${o.rules}/${o.units}`;
-  let m = plainCache.get(ev);
-  if (!m) plainCache.set(ev, (m = new Map()));
-  let f = m.get(key);
-  if (!f) m.set(key, (f = analyseCutouts({ result: ev.region, shapes: inputShapesOf(section, ev) }, o)));
-  return f;
+/** The cautions of one job. */
+export function runCautionJob(job: CautionJob): Caution[] {
+  const input = job.baseline ? { result: job.result, baseline: job.baseline, shapes: job.shapes } : { result: job.result, shapes: job.shapes };
+  return analyseCutouts(input, job.options).cautions;
 }
 
-const proposalCache = new WeakMap<Evaluation, WeakMap<Evaluation, Map<string, CutoutFindings>>>();
+function options(doc: Pick<SectionDocument, 'holeRules' | 'units'>): CautionJob['options'] {
+  return { rules: doc.holeRules ?? 'en1993', unitInMetres: UNIT_IN_METRES[doc.units], units: doc.units };
+}
+
+/** The job for a section's own cautions (plain mode). */
+export function plainJob(section: SectionDocument, ev: Evaluation, rules: Pick<SectionDocument, 'holeRules' | 'units'> = section): CautionJob {
+  return { result: ev.region, shapes: inputShapesOf(section, ev), options: options(rules) };
+}
+
+/** The job for what a proposal raises against its baseline. */
+export function proposalJob(section: SectionDocument, ev: Evaluation, baseline: Region): CautionJob {
+  return { result: ev.region, baseline, shapes: inputShapesOf(section, ev), options: options(section) };
+}
 
 /**
- * The cautions for the active section: against the baseline when a proposal is active (only what
- * is new, with the baseline's own listed apart), else the section on its own.
+ * The cautions for the active section, computed here and now: against the baseline when a proposal
+ * is active (only what is new, with the baseline's own listed apart), else the section on its own.
+ * The editor runs the same jobs off the main thread (analysis.ts).
  */
 export function cautionsOf(section: SectionDocument, ev: Evaluation, base: { doc: SectionDocument; evaluation: Evaluation } | null): CutoutCautions {
-  const o = options(section);
-  if (!base) return { findings: plainFindings(section, ev), baseline: null, rules: o.rules };
-  const key = `${o.rules}/${o.units}`;
-  let inner = proposalCache.get(ev);
-  if (!inner) proposalCache.set(ev, (inner = new WeakMap()));
-  let m = inner.get(base.evaluation);
-  if (!m) inner.set(base.evaluation, (m = new Map()));
-  let f = m.get(key);
-  if (!f) m.set(key, (f = analyseCutouts({ result: ev.region, baseline: base.evaluation.region, shapes: inputShapesOf(section, ev) }, o)));
-  return { findings: f, baseline: plainFindings({ ...base.doc, holeRules: section.holeRules }, base.evaluation), rules: o.rules };
+  const rules = section.holeRules ?? 'en1993';
+  if (!base) return { cautions: runCautionJob(plainJob(section, ev)), baseline: null, rules };
+  return {
+    cautions: runCautionJob(proposalJob(section, ev, base.evaluation.region)),
+    baseline: runCautionJob(plainJob(base.doc, base.evaluation, section)),
+    rules,
+  };
 }
 
 const netCache = new WeakMap<Region, WeakMap<NetLine, NetSection | string>>();
