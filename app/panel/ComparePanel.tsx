@@ -103,9 +103,9 @@ export function ComparePanel() {
           <col />
           <col />
           <col />
-          <col style={{ width: '64px' }} />
+          <col style={{ width: '62px' }} />
           <col style={{ width: '30px' }} />
-          <col style={{ width: '54px' }} />
+          <col style={{ width: '58px' }} />
         </colgroup>
         <thead>
           <tr>

@@ -18,26 +18,26 @@ export function ChangeLegend() {
   const area = (v: number) => (stale ? '…' : `${formatQuantity(v, 2, size)} ${unitText(units, 2)}`);
   const { all, own } = numberedCautions(cautions);
   return (
-    <div className="change-legend" data-testid="change-legend" data-removed-area={change && !stale ? String(change.removedArea) : ''} data-added-area={change && !stale ? String(change.addedArea) : ''}>
-      <h4>{proposal} against the baseline</h4>
-      <div className="legend-row">
-        <span className="swatch baseline" /> Baseline outline
-      </div>
-      <div className="legend-row">
-        <span className="swatch removed" /> Material removed <span className="num">{change ? area(change.removedArea) : '…'}</span>
-      </div>
-      <div className="legend-row">
-        <span className="swatch added" /> Material added <span className="num">{change ? area(change.addedArea) : '…'}</span>
-      </div>
+    <div
+      className="change-legend"
+      data-testid="change-legend"
+      data-removed-area={change && !stale ? String(change.removedArea) : ''}
+      data-added-area={change && !stale ? String(change.addedArea) : ''}
+      title={`${proposal} against the baseline. Markers are numbered as in the Cautions panel${own < all.length ? '; faint ones were already in the baseline' : ''}.`}
+    >
+      <span className="legend-item">
+        <span className="swatch baseline" /> baseline
+      </span>
+      <span className="legend-item">
+        <span className="swatch removed" /> removed <span className="num">{change ? area(change.removedArea) : '…'}</span>
+      </span>
+      <span className="legend-item">
+        <span className="swatch added" /> added <span className="num">{change ? area(change.addedArea) : '…'}</span>
+      </span>
       {all.length > 0 && (
-        <div className="legend-row">
-          <span className="swatch warn" /> Warning <span className="swatch note" /> Note
-        </div>
-      )}
-      {all.length > 0 && (
-        <div className="legend-row legend-small">
-          numbered as in Cautions{own < all.length ? '; faint: already in the baseline' : ''}
-        </div>
+        <span className="legend-item">
+          <span className="swatch warn" /> warning <span className="swatch note" /> note{own < all.length ? ' (faint: in the baseline)' : ''}
+        </span>
       )}
     </div>
   );
