@@ -23,6 +23,12 @@ import { LoadsPanel } from './panel/LoadsPanel';
 import { MaterialResults } from './panel/MaterialResults';
 import { MaterialLegend } from './ui/MaterialLegend';
 import { MaterialsDialog } from './ui/MaterialsDialog';
+import { ProposalStrip } from './ui/ProposalStrip';
+import { ChangeLegend } from './ui/ChangeLegend';
+import { ComparePanel } from './panel/ComparePanel';
+import { LimitsEditor } from './panel/LimitsEditor';
+import { CautionsPanel } from './panel/CautionsPanel';
+import { NetSectionPanel } from './panel/NetSectionPanel';
 
 export function App({ editor }: { editor: EditorHandle }) {
   const fileInput = useRef<HTMLInputElement>(null);
@@ -49,6 +55,8 @@ export function App({ editor }: { editor: EditorHandle }) {
           <Canvas />
           <MaterialLegend />
           <DimensionCaption />
+          <ProposalStrip />
+          <ChangeLegend />
           <Notice />
           <FirstRunGuide />
         </main>
@@ -60,11 +68,15 @@ export function App({ editor }: { editor: EditorHandle }) {
             <ShapeList />
           </div>
           <div className="panel-scroll panel-results">
+            <ComparePanel />
+            <LimitsEditor />
             <ResultsPanel />
             <LineResults />
             <MaterialResults />
             <LoadsPanel />
             <CutPanel />
+            <CautionsPanel />
+            <NetSectionPanel />
           </div>
           <Caution />
         </aside>

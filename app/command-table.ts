@@ -37,6 +37,7 @@ import type { EditorState, Overlays } from './store/store';
 import { CommandRegistry, type CommandContext } from './commands/registry';
 import { activeShapes } from './store/section';
 import { registerMaterials } from './materials/commands';
+import { registerCutoutCommands } from './ops/cutout-commands';
 
 const OP_LABEL = { add: 'Add', subtract: 'Subtract', intersect: 'Intersect' } as const;
 const OP_KEY = { add: 'shift+a', subtract: 'shift+s', intersect: 'shift+i' } as const;
@@ -242,6 +243,7 @@ export function buildRegistry(): CommandRegistry {
   registerFiles(r);
   registerMaterials(r);
   registerChecker(r);
+  registerCutoutCommands(r);
   return r;
 }
 

@@ -17,6 +17,7 @@ import { createTransientStore } from './store/transient';
 import type { Tool, ToolEnv } from './tools/types';
 import { activeShapes, withActiveShapes } from './store/section';
 import { ProbeTool } from './materials/probe-tool';
+import { NetLineTool } from './tools/net-line';
 
 export type Editor = EditorHandle;
 
@@ -27,6 +28,7 @@ export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule
   const tools: Record<string, Tool> = { select: new SelectTool() };
   for (const t of TOOL_SPECS) tools[t.id] = t.create();
   tools.probe = new ProbeTool();
+  tools.netline = new NetLineTool();
   const env: ToolEnv = {
     store,
     results,

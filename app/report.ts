@@ -12,6 +12,8 @@ export interface ReportRequest {
   generated?: string;
   /** Draw the kern in the report even without materials or loads (the kern view is on). */
   kern?: boolean;
+  /** The proposal to check against the baseline (default: the one shown, else the first; null: none). */
+  variant?: string | null;
 }
 
 export type ReportRenderer = (input: ReportRequest) => string;

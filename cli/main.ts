@@ -37,7 +37,9 @@ const USAGE = `Usage:
                                            moment of inertia about the axis through (X, Y) at DEG
                                            degrees from +x (parallel-axis transfer)
   kern report FILE --out report.html [--pdf out.pdf] [--cut y=VALUE|x=VALUE] [--paper a4|letter]
-                                           self-contained HTML report, optionally printed to PDF
+              [--variant NAME]             self-contained HTML report, optionally printed to PDF; with
+                                           proposals, the cutout check of NAME (else the active one,
+                                           else the first) after the baseline
   kern compare BASE.json PROPOSED.json [--json] [--rules en1993|aisc360] [--limits FILE]
   kern compare FILE --variant NAME [...]   a proposal against its baseline: every property before
                                            and after, limits with a within/beyond verdict, cautions

@@ -1,7 +1,8 @@
 /**
- * `kern report FILE --out report.html [--pdf out.pdf] [--units U] [--cut y=VALUE|x=VALUE] [--paper a4|letter]`
+ * `kern report FILE --out report.html [--pdf out.pdf] [--units U] [--cut y=VALUE|x=VALUE] [--paper a4|letter] [--variant NAME]`
  * Writes the self-contained HTML report and, with --pdf, prints it to PDF through headless
- * Chromium (playwright-core). Exit codes: 0 done (an empty or zero-area section gives a report that
+ * Chromium (playwright-core). A document with proposals gets the cutout check of one of them after
+ * the baseline: --variant NAME, else the document's active proposal, else its first. Exit codes: 0 done (an empty or zero-area section gives a report that
  * says so), 2 bad input or Chromium missing, 1 internal error.
  */
 import { existsSync, writeFileSync } from 'node:fs';
@@ -9,7 +10,7 @@ import { evaluateDocument, formatShapeIssue } from '../src';
 import { renderReportHtml } from '../src/report';
 import { loadSectionFile } from './dxf-input';
 
-const USAGE = 'usage: kern report FILE [--out report.html] [--pdf out.pdf] [--units mm|cm|m|in|ft] [--cut y=VALUE|x=VALUE] [--paper a4|letter]';
+const USAGE = 'usage: kern report FILE [--out report.html] [--pdf out.pdf] [--units mm|cm|m|in|ft] [--cut y=VALUE|x=VALUE] [--paper a4|letter] [--variant NAME]';
 
 export const CHROMIUM_ARGS = [
   '--no-sandbox',
@@ -29,7 +30,7 @@ export const CHROMIUM_MISSING = (path: string) =>
   `  Install it with:  apt-get install -y chromium\n` +
   `  or point KERN_CHROMIUM at a Chromium or Chrome executable.`;
 
-const VALUED = ['out', 'pdf', 'units', 'cut', 'paper'];
+const VALUED = ['out', 'pdf', 'units', 'cut', 'paper', 'variant'];
 
 function parse(args: string[]): { file?: string; flags: Map<string, string> } | string {
   const flags = new Map<string, string>();
@@ -115,12 +116,18 @@ export async function reportCommand(args: string[]): Promise<number> {
     return 2;
   }
   for (const w of loaded.warnings) err(`warning: ${w}`);
+  const variant = flags.get('variant');
+  if (variant !== undefined && !loaded.doc.variants?.some((v) => v.name === variant)) {
+    const names = (loaded.doc.variants ?? []).map((v) => `"${v.name}"`).join(', ');
+    err(`kern report: ${file} has no proposal named "${variant}"; ${names ? `it has ${names}` : 'it has no proposals'}`);
+    return 2;
+  }
   const evaluation = evaluateDocument(loaded.doc);
   for (const w of evaluation.warnings) err(`warning: ${formatShapeIssue(w, loaded.doc.shapes)}`);
   // An empty or degenerate section still gets its report: a page that says so, with no figure.
   if (!evaluation.props && evaluation.lines.length > 0) err(`note: ${file}: line elements only; the report gives the line groups, and says that the area properties are absent`);
   else if (!evaluation.props) err(`warning: ${file}: ${(evaluation.message ?? 'the section has no area').replace(/\.$/, '')}; the report says so and has no figure`);
-  const html = renderReportHtml({ doc: loaded.doc, evaluation, cut, generated: new Date().toISOString().replace(/\.\d+Z$/, 'Z') });
+  const html = renderReportHtml({ doc: loaded.doc, evaluation, cut, variant, generated: new Date().toISOString().replace(/\.\d+Z$/, 'Z') });
   try {
     if (out) writeFileSync(out, html);
   } catch (e) {

@@ -3,6 +3,7 @@ export * from './document/types';
 export { parseDocument, validateDocument, validateShape, formatIssue, type Issue, type DocResult } from './document/validate';
 export { convertDocumentUnits, unitFactor } from './document/units';
 export { serialiseDocumentText } from './document/serialise';
+export { validateNetLines, scaleNetLines } from './document/net-lines';
 export { sectionOf, withSectionShapes, addVariant, allShapeIds, variantNames, findVariant, variantShapes, newVariantName, VariantError } from './document/variants';
 export { DEMO_DOCUMENT } from './document/demo';
 export { SHAPE_KIND_LABEL } from './document/labels';
@@ -55,7 +56,8 @@ export { filletCorner, filletPolygonCorner, pathEndDirection, tangentArc, type F
 export { catalogueSeries, catalogueSize, catalogueProfile, CatalogueError, type CatalogueSeries, type CatalogueSize, type CatalogueOptions } from './catalogue';
 export { compareSections, comparisonRow, evaluateLimits, overallVerdict, exampleLimits, EXAMPLE_LIMITS_NOTE, comparisonCatalog, CRITICAL_FIBRE_PROPERTIES, validateLimits } from './compare';
 export type { SectionComparison, PropertyChange, LimitResult, LimitStatus, Verdict, CentroidShift, AxesRotation } from './compare';
-export { analyseCutouts, sectionCautions, CUTOUT_CAUTION_TEXT, HOLE_CHECK_NOTE, HOLE_RULE_SETS } from './cautions';
+export { materialChange, fieldsFor, LIMIT_FIELDS, CENTROID_KEY, type MaterialChange, type LimitField } from './compare';
+export { analyseCutouts, sectionCautions, CUTOUT_CAUTION_TEXT, HOLE_CHECK_NOTE, HOLE_RULE_SETS, cautionsInOrder, namedInputShapes } from './cautions';
 export type { Caution, CautionKind, CautionSeverity, CutoutFindings, InputShape, HoleRuleSetId } from './cautions';
 export { netSection, describeGap, NetSectionError, NET_SECTION_PURPOSE, NET_SECTION_CAUTION, type NetSection, type NetGap, type GapKind } from './netsection';
 export * from './lines';

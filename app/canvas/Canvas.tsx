@@ -19,6 +19,9 @@ import { MaterialsLayer } from './layers/Materials';
 import { StressMapLayer, StressMarksLayer } from './layers/Stress';
 import { KernLayer } from './layers/Kern';
 import { GravityLayer } from './layers/Gravity';
+import { BaselineLayer } from './layers/Baseline';
+import { CautionMarksLayer } from './layers/CautionMarks';
+import { NetLinesLayer } from './layers/NetLines';
 
 function isField(t: EventTarget | null): boolean {
   return t instanceof HTMLInputElement || t instanceof HTMLTextAreaElement || t instanceof HTMLSelectElement;
@@ -110,6 +113,7 @@ export function Canvas() {
         {/* One layer (one canvas) for everything that changes during a drag: software
             compositing copies each changed canvas every frame. */}
         <Layer listening={false}>
+          <BaselineLayer />
           <ShapesLayer />
           <MaterialsLayer />
           <StressMapLayer />
@@ -118,6 +122,8 @@ export function Canvas() {
           <KernLayer />
           <GravityLayer />
           <StressMarksLayer />
+          <NetLinesLayer />
+          <CautionMarksLayer />
           <ProblemLayer />
           <InteractionLayer />
         </Layer>

@@ -5,9 +5,12 @@
  */
 import { createEvaluator, type SectionDocument, type Shape } from '../../src';
 import type { WorkerRequest, WorkerResponse } from './workerProtocol';
+import { SectionReplica } from './baseline';
 
 const evaluator = createEvaluator();
 const shapes = new Map<string, Shape>();
+/** The baseline beside an active proposal: evaluated only when the editor sends a new one. */
+const baseline = new SectionReplica();
 
 self.onmessage = (e: MessageEvent<WorkerRequest>) => {
   const req = e.data;
@@ -20,6 +23,12 @@ self.onmessage = (e: MessageEvent<WorkerRequest>) => {
   try {
     const ev = evaluator.evaluate(doc);
     res = { seq: req.seq, ok: true, region: ev.region, props: ev.props, message: ev.message, warnings: ev.warnings, lines: ev.lines, materials: ev.materials, welds: ev.welds, ms: performance.now() - t };
+    if (req.baseline) {
+      const tb = performance.now();
+      baseline.apply(req.baseline);
+      const b = baseline.evaluate()!;
+      res.baseline = { region: b.region, props: b.props, message: b.message, warnings: b.warnings, lines: b.lines, materials: b.materials, welds: b.welds, ms: performance.now() - tb };
+    }
   } catch (err) {
     res = { seq: req.seq, ok: false, error: err instanceof Error ? err.message : String(err), ms: performance.now() - t };
   }

@@ -1,5 +1,6 @@
 /** Messages between the editor and the evaluation worker. */
 import type { Issue, LineGroupResult, MaterialsResult, Region, SectionDocument, SectionProperties, Shape, WeldResult } from '../../src';
+import type { SectionPart } from './baseline';
 
 export interface WorkerRequest {
   seq: number;
@@ -7,6 +8,20 @@ export interface WorkerRequest {
   order: string[];
   /** Shapes that differ (by identity) from what the worker holds. */
   changed: Record<string, Shape>;
+  /** The baseline beside an active proposal (baseline.ts): absent when unchanged, null when none is needed. */
+  baseline?: SectionPart | null;
+}
+
+/** The baseline's evaluation, sent back only when a new baseline came with the request. */
+export interface BaselineAnswer {
+  region: Region;
+  props: SectionProperties | null;
+  message: string | null;
+  warnings: Issue[];
+  lines: LineGroupResult[];
+  materials: MaterialsResult | null;
+  welds: WeldResult[];
+  ms: number;
 }
 
 export type WorkerResponse =
@@ -21,5 +36,6 @@ export type WorkerResponse =
       materials: MaterialsResult | null;
       welds: WeldResult[];
       ms: number;
+      baseline?: BaselineAnswer;
     }
   | { seq: number; ok: false; error: string; ms: number };

@@ -9,6 +9,7 @@ import { CataloguePicker } from './CataloguePicker';
 import { ExamplesMenu } from '../examples/ExamplesMenu';
 import { ENTRY_TITLE, PLACEHOLDER } from '../input-syntax';
 import { entryKeyDown } from './entry-keys';
+import { CutoutRail } from './CutoutRail';
 
 export function TopBar() {
   const name = useEditorState((s) => s.doc.name);
@@ -66,6 +67,7 @@ export function ToolRail() {
       </div>
       {SHAPE_EDITORS.map((e, i) => e.RailControl && <e.RailControl key={i} />)}
       <CataloguePicker />
+      <CutoutRail />
       <div className="rail-group">
         <h3>Snap</h3>
         <CommandButton name="snap.grid" />

@@ -4,7 +4,6 @@ import { loadReportRenderer } from '../report';
 import { useEditor, useEditorState } from '../context';
 import { withPaperSize, type Paper } from '../exchange/paper';
 import { CommandButton } from '../fields/CommandButton';
-import { activeSection } from '../store/section';
 
 export function ReportOverlay() {
   const editor = useEditor();
@@ -28,8 +27,8 @@ export function ReportOverlay() {
         }
         const s = editor.store.getState();
         const cut = s.overlays.cut && s.cutAt !== null ? { axis: s.cutAxis, at: s.cutAt } : null;
-        // The section being edited (a proposal when one is active), named as the panel names it.
-        setHtml(render({ doc: activeSection(s.doc), evaluation: editor.results.evaluate(s.doc), cut, kern: s.overlays.kern, generated: new Date().toISOString().slice(0, 16).replace('T', ' ') }));
+        // The report describes the baseline; a proposal (the one shown, else the first) gets its cutout check after it.
+        setHtml(render({ doc: s.doc, evaluation: editor.results.evaluateBaseline(s.doc), cut, kern: s.overlays.kern, generated: new Date().toISOString().slice(0, 16).replace('T', ' ') }));
       })
       .catch((e) => live && setProblem(`The report could not be made: ${(e as Error).message}`));
     return () => {

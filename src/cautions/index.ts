@@ -9,3 +9,5 @@ export { ligaments, narrowestWidth, cutRuns, type Ligament, type CutRun } from '
 export { closestCandidates, closestPair, nearestOnCarrier, type PointPair } from './closest';
 export { REENTRANT_SOURCE } from './messages';
 export { CUTOUT_CAUTION_TEXT, HOLE_CHECK_NOTE } from './wording';
+export { cautionsInOrder } from './order';
+export { namedInputShapes } from './input-shapes';

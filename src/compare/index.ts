@@ -6,3 +6,4 @@ export { CRITICAL_FIBRE_PROPERTIES, comparisonCatalog } from './critical-fibre';
 export { evaluateLimits, overallVerdict, exampleLimits, EXAMPLE_LIMITS_NOTE, type Limit, type LimitResult, type LimitStatus, type Verdict } from './limits';
 export { fieldsFor, fieldsForKind, LIMIT_FIELDS, CENTROID_KEY, type LimitField } from './limit-fields';
 export { validateLimits } from './validate-limits';
+export { materialChange, type MaterialChange } from './material-change';

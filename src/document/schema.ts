@@ -29,6 +29,7 @@ import type { ProfileType } from '../shapes/profile/types';
 import { STRIP_CORNERS, type StripShape } from '../shapes/strip';
 import { FORMAT, UNITS, type Revision, type SectionDocument, type TitleBlock, type Variant } from './types';
 import type { WeldLoad as WeldLoadCase } from './weld-loads';
+import type { NetLine } from './net-lines';
 
 /** A JSON Schema as plain data. */
 export type JsonSchema = { [keyword: string]: unknown };
@@ -199,6 +200,11 @@ function v2Defs(): Record<string, JsonSchema> {
     M: { type: 'number', description: 'Added moment, counter-clockwise positive, in force × moment length.' },
     name: text('What the load is.'),
   };
+  const netLine: Record<keyof NetLine, JsonSchema> = {
+    from: { ...ref('point'), description: 'One end of the line.' },
+    to: { ...ref('point'), description: 'The other end.' },
+    name: text('A label, e.g. "Row A".'),
+  };
   const revision: Record<keyof Revision, JsonSchema> = {
     revision: text('Revision mark.'),
     date: text('Date.'),
@@ -213,6 +219,7 @@ function v2Defs(): Record<string, JsonSchema> {
     revision: object(revision, ['revision', 'date', 'description', 'by'], 'One line of the revision history.'),
     checked: object({ by: text('Who checked the section.'), date: text('When.') }, ['by', 'date'], 'The checker’s sign-off.'),
     weldLoad: object(weldLoad, ['group', 'at', 'Fx', 'Fy'], 'A force on a line group (a weld group), for the elastic weld-group method.'),
+    netLine: object(netLine, ['from', 'to'], 'A straight line across the section for the net length.'),
   };
 }
 
@@ -245,6 +252,7 @@ function documentProperties(v: SchemaVersion): Partial<DocumentKeys> {
     notes: text('Notes for the checker.'),
     checked: ref('checked'),
     weldLoads: list(ref('weldLoad'), 'Forces on line groups (weld groups).'),
+    netLines: list(ref('netLine'), 'Straight lines across the section for the net length through holes (tension checks).'),
   };
   return all;
 }

@@ -82,6 +82,10 @@ export type { WeldLoad as WeldLoadCase } from './weld-loads';
 import type { WeldLoad as WeldLoadCase } from './weld-loads';
 import type { ForceUnit, StressUnit } from '../materials/units';
 
+/** A straight line across the section for its net section (src/document/net-lines.ts). */
+export type { NetLine } from './net-lines';
+import type { NetLine } from './net-lines';
+
 export interface SectionDocument {
   format: typeof FORMAT;
   version: typeof CURRENT_VERSION;
@@ -98,6 +102,8 @@ export interface SectionDocument {
   limits?: Limit[];
   /** Hole spacing and edge-distance rules for the cautions. */
   holeRules?: 'en1993' | 'aisc360';
+  /** Lines across the section whose net section the panel and the report give. */
+  netLines?: NetLine[];
   /** Materials; a shape names one by `material`, or takes the reference material. */
   materials?: Material[];
   reference?: string;

@@ -5,6 +5,7 @@
  */
 import { scaleShape } from '../shapes/ops';
 import { UNIT_IN_METRES, type SectionDocument, type Units } from './types';
+import { scaleNetLines } from './net-lines';
 
 /** Factor that converts a length in `from` units to `to` units. */
 export function unitFactor(from: Units, to: Units): number {
@@ -17,6 +18,7 @@ export function convertDocumentUnits(doc: SectionDocument, units: Units): Sectio
   if (k === 1) return { ...doc, units };
   const out: SectionDocument = { ...doc, units, shapes: doc.shapes.map((s) => scaleShape(s, k)) };
   if (doc.variants) out.variants = doc.variants.map((v) => ({ ...v, shapes: v.shapes.map((e) => (typeof e === 'string' ? e : scaleShape(e, k))) }));
+  if (doc.netLines) out.netLines = scaleNetLines(doc.netLines, k);
   if (doc.limits) out.limits = doc.limits.map((l) => (l.maxShift === undefined ? l : { ...l, maxShift: l.maxShift * k }));
   // Moments in force × document length follow the length unit; with `momentLength` set they keep theirs.
   if (doc.loads && doc.momentLength === undefined && (doc.loads.Mx !== undefined || doc.loads.My !== undefined)) {

@@ -8,6 +8,7 @@ import { validateShape } from '../shapes/validate';
 import { validateCheckerFields, validateLimits, validateMaterials } from './fields';
 import { validateVariants } from './variants';
 import { validateWeldLoads } from './weld-loads';
+import { validateNetLines } from './net-lines';
 import { migrate, KNOWN_VERSIONS } from './migrate';
 import { CURRENT_VERSION, FORMAT, UNITS, type SectionDocument } from './types';
 
@@ -71,6 +72,7 @@ export function validateDocument(value: unknown): DocResult {
   ];
   validateMaterials(doc, allShapes, errors);
   validateLimits(doc, errors);
+  validateNetLines(doc, errors);
   validateCheckerFields(doc, errors);
   validateWeldLoads(doc, errors, warnings);
   if (doc.name !== undefined && typeof doc.name !== 'string') errors.push({ path: 'name', message: 'name must be text' });

@@ -31,6 +31,7 @@ import { renderQbDiagram } from './qb-chart';
 import { renderLineReport } from './lines';
 import { frameNotes, listingSummary, paramsText, renderScheduleTables, shapeSchedule } from './schedule';
 import { MATERIALS_CSS, renderMaterialsReport } from './materials';
+import { COMPARISON_CSS, renderComparisonSection, reportProposal } from './comparison';
 
 export interface ReportInput {
   doc: SectionDocument;
@@ -42,6 +43,12 @@ export interface ReportInput {
   paper?: 'A4' | 'Letter';
   /** Draw the kern even for a section of one material without loads (src/report/materials.ts). */
   kern?: boolean;
+  /**
+   * The proposal whose cutout check is printed after the baseline (comparison.ts): by name; when
+   * absent, the document's active proposal, else its first; null for none. `evaluation` is always
+   * the baseline's.
+   */
+  variant?: string | null;
 }
 
 export const METHOD_NOTE =
@@ -289,13 +296,19 @@ export function renderReportHtml(input: ReportInput): string {
       `<p class="caution">${escapeHtml(CAUTION_TEXT)}</p></section>`,
   );
   if (!fig) body.push(renderCheckerBlock(checkerFields(doc)));
+  const proposal = doc.variants?.length ? reportProposal(doc, input.variant) : null;
+  const cmp = proposal ? renderComparisonSection(doc, evaluation, proposal) : null;
+  if (cmp) {
+    body.splice(1, 0, cmp.intro);
+    body.push(cmp.html);
+  }
   if (shapes.appendix) body.push(shapes.appendix);
 
   return (
     `<!DOCTYPE html>\n<html lang="en"><head><meta charset="utf-8">` +
     `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">` +
     `<meta name="viewport" content="width=device-width, initial-scale=1">` +
-    `<title>${escapeHtml(`Section properties: ${heading}`)}</title><style>${pageCss(`Section properties: ${heading}${input.generated ? ` · generated ${input.generated}` : ''}`, input.paper)}${CSS}${MATERIALS_CSS}</style></head>` +
+    `<title>${escapeHtml(`Section properties: ${heading}`)}</title><style>${pageCss(`Section properties: ${heading}${input.generated ? ` · generated ${input.generated}` : ''}`, input.paper)}${CSS}${MATERIALS_CSS}${cmp ? COMPARISON_CSS : ''}</style></head>` +
     `<body>${body.join('\n')}</body></html>\n`
   );
 }

@@ -19,3 +19,5 @@ export { checkerFields, renderCheckerBlock, type CheckerFields, type RevisionEnt
 export { chooseScale, STANDARD_SCALES, type DrawingScale } from './scale';
 export { escapeHtml } from './escape';
 export { renderLineReport, renderLineFigure, chainPathData, type LineReportInput } from './lines';
+export { renderComparisonSection, reportProposal, COMPARISON_CSS } from './comparison';
+export { renderComparisonFigure, type ComparisonFigure, type ComparisonFigureInput } from './comparison-figure';
