@@ -7,6 +7,7 @@ import { Canvas } from './canvas/Canvas';
 import { CutPanel } from './panel/CutPanel';
 import { Caution, ResultsPanel } from './panel/ResultsPanel';
 import { SelectionPanel } from './panel/SelectionPanel';
+import { TorsionPanel } from './panel/TorsionPanel';
 import { ShapeList } from './panel/ShapeList';
 import { StatusBar, ToolRail, TopBar } from './ui/Bars';
 import { Notice } from './ui/Notice';
@@ -49,6 +50,7 @@ export function App({ editor }: { editor: EditorHandle }) {
           </div>
           <div className="panel-scroll panel-results">
             <ResultsPanel />
+            <TorsionPanel />
             <CutPanel />
           </div>
           <Caution />

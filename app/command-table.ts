@@ -24,6 +24,7 @@ import {
 } from './ops/selection';
 import { setTitleField, type TitleField } from './ops/title';
 import { fitView, toggleOverlay } from './ops/view';
+import { hasTorsion, setTorsionDensity, setTorsionPoisson, toggleTorsion } from './ops/torsion';
 import { SHAPE_EDITORS } from './shapes';
 import { canRedo, canUndo, redo, undo } from './store/history';
 import type { EditorState, Overlays } from './store/store';
@@ -95,6 +96,7 @@ function registerView(r: CommandRegistry): void {
     ['principal', 'Principal axes', undefined],
     ['fibres', 'Extreme fibres', undefined],
     ['cut', 'Cut line', 'k'],
+    ['stressMap', 'Torsion stress map', undefined],
   ];
   for (const [key, label, k] of overlays) {
     r.register({ name: `view.${key}`, label, group: 'view', keys: k ? [k] : undefined, active: (c) => c.store.getState().overlays[key], perform: (c) => toggleOverlay(c, key) });
@@ -119,6 +121,15 @@ function registerView(r: CommandRegistry): void {
   });
   r.register({ name: 'snap.ortho', label: 'Orthogonal', group: 'snap', keys: ['o'], active: (c) => c.store.getState().snap.ortho, perform: snapToggle('ortho') });
   r.register({ name: 'notice.dismiss', label: 'Dismiss', group: 'view', perform: (c) => c.store.setState({ notice: null }) });
+}
+
+/** Torsion by finite elements (app/torsion/): part of the results or not, its settings, runs. */
+function registerTorsion(r: CommandRegistry): void {
+  r.register({ name: 'torsion.include', label: 'Torsion', group: 'view', hint: 'Include J, the shear centre and Cw by finite elements in the results and the report', active: hasTorsion, perform: toggleTorsion });
+  r.register({ name: 'torsion.density', label: 'Torsion mesh density', group: 'view', perform: setTorsionDensity });
+  r.register({ name: 'torsion.poisson', label: "Poisson's ratio for the shear centre", group: 'view', perform: (c, v) => void setTorsionPoisson(c, v) });
+  r.register({ name: 'torsion.compute', label: 'Compute', group: 'view', hint: 'Run the torsion analysis now', enabled: hasTorsion, perform: (c) => c.torsion?.compute() });
+  r.register({ name: 'torsion.cancel', label: 'Cancel', group: 'view', hint: 'Stop the torsion run (automatic runs pause until Compute)', perform: (c) => c.torsion?.cancel() });
 }
 
 function registerFiles(r: CommandRegistry): void {
@@ -180,6 +191,7 @@ export function buildRegistry(): CommandRegistry {
   registerTools(r);
   registerEdits(r);
   registerView(r);
+  registerTorsion(r);
   registerFiles(r);
   return r;
 }

@@ -3,13 +3,14 @@
  * and its evaluation; the editor shows it in an overlay iframe and prints it for "Save as PDF".
  * Loaded on demand so the editor starts without it.
  */
-import type { Evaluation, SectionDocument } from '../src';
+import type { Evaluation, SectionDocument, SectionTorsion } from '../src';
 
 export interface ReportRequest {
   doc: SectionDocument;
   evaluation: Evaluation;
   cut?: { axis: 'x' | 'y'; at: number } | null;
   generated?: string;
+  torsion?: SectionTorsion | null;
 }
 
 export type ReportRenderer = (input: ReportRequest) => string;

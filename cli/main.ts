@@ -27,6 +27,8 @@ const USAGE = `Usage:
   kern props FILE [--json] [--variant NAME]
                                            section properties of a section document (.json): its
                                            baseline, or the proposal NAME
+      [--torsion [--density coarse|normal|fine] [--poisson NU]]
+                                           also J, shear centre and Cw by finite elements
   kern cut FILE (--y VALUE | --x VALUE) [--json]
                                            width, area, centroid and Q of the part above y = VALUE
                                            (or right of x = VALUE)
@@ -141,11 +143,15 @@ export async function main(argv: string[]): Promise<number> {
   const [cmd, ...rest] = argv;
   try {
     if (cmd === 'props') {
-      const a = parseArgs(rest, ['units', 'variant']);
+      const a = parseArgs(rest, ['units', 'variant', 'density', 'poisson']);
+      const tor = a.flags.has('torsion') || a.flags.has('density') || a.flags.has('poisson') ? await import('./torsion') : null;
+      const req = tor?.torsionRequest(a.flags) ?? null;
       const r = await evaluateFile(a.positional[0], a.flags);
       if (!r) return 2;
+      const t = tor && req ? tor.runTorsion(a.positional[0], r.doc, r.ev, req) : null;
+      if (req && !t) return 2;
       if (a.flags.has('json')) {
-        out(JSON.stringify(propsJson(r.doc, r.ev, r.props, r.warnings), null, 2));
+        out(JSON.stringify({ ...propsJson(r.doc, r.ev, r.props, r.warnings), ...(t ? tor!.torsionJson(t) : {}) }, null, 2));
         return 0;
       }
       const rows: [string, string, string][] = PROPERTY_CATALOG.map((info) => {
@@ -154,6 +160,7 @@ export async function main(argv: string[]): Promise<number> {
       });
       out(`${r.doc.name ?? a.positional[0]} (${r.doc.units})`);
       out(table(rows));
+      if (t) out(tor!.torsionText(t, r.doc, r.props));
       for (const w of [...r.warnings, ...r.ev.warnings.map(formatIssue)]) out(`warning: ${w}`);
       out(CAUTION_TEXT);
       return 0;

@@ -52,3 +52,4 @@ export { netSection, describeGap, NetSectionError, NET_SECTION_PURPOSE, NET_SECT
 export * from './lines';
 export * from './materials';
 export * from './torsion';
+export * from './section-torsion';

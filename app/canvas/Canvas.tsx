@@ -14,6 +14,8 @@ import { InteractionLayer } from './layers/Interaction';
 import { OverlayLayer } from './layers/Overlays';
 import { ProblemLayer } from './layers/Problems';
 import { ShapesLayer } from './layers/Shapes';
+import { TorsionLayer } from './layers/Torsion';
+import { StressLegend } from './StressLegend';
 
 function isField(t: EventTarget | null): boolean {
   return t instanceof HTMLInputElement || t instanceof HTMLTextAreaElement || t instanceof HTMLSelectElement;
@@ -106,11 +108,13 @@ export function Canvas() {
             compositing copies each changed canvas every frame. */}
         <Layer listening={false}>
           <ShapesLayer />
+          <TorsionLayer />
           <OverlayLayer />
           <ProblemLayer />
           <InteractionLayer />
         </Layer>
       </Stage>
+      <StressLegend />
     </div>
   );
 }

@@ -51,6 +51,8 @@ export interface Overlays {
   principal: boolean;
   fibres: boolean;
   cut: boolean;
+  /** The shaded shear-stress map of the torsion result (drawn when there is one). */
+  stressMap: boolean;
 }
 
 export interface Notice {
@@ -101,7 +103,7 @@ export function createEditorStore(doc: SectionDocument): EditorStore {
     oy: 400,
     width: 800,
     height: 600,
-    overlays: { centroid: true, principal: false, fibres: false, cut: false },
+    overlays: { centroid: true, principal: false, fibres: false, cut: false, stressMap: false },
     cutAxis: 'y',
     cutAt: null,
     notice: null,

@@ -73,6 +73,7 @@ export function ToolRail() {
         <CommandButton name="view.principal" />
         <CommandButton name="view.fibres" />
         <CommandButton name="view.cut" />
+        <CommandButton name="view.stressMap">Stress map</CommandButton>
         <CommandButton name="view.fit" />
       </div>
     </nav>

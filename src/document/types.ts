@@ -78,6 +78,10 @@ import type { Loads } from '../materials/stress';
 export { STRESS_UNITS, FORCE_UNITS, type StressUnit, type ForceUnit } from '../materials/units';
 import type { ForceUnit, StressUnit } from '../materials/units';
 
+/** Torsion by finite elements in the results, with its mesh density and Poisson's ratio (src/document/torsion-settings.ts). */
+export { TORSION_DENSITIES, type TorsionSettings, type TorsionDensitySetting } from './torsion-settings';
+import type { TorsionSettings } from './torsion-settings';
+
 export interface SectionDocument {
   format: typeof FORMAT;
   version: typeof CURRENT_VERSION;
@@ -104,6 +108,8 @@ export interface SectionDocument {
   /** Length unit of the moments Mx and My (force × this); the document's unit when absent. */
   momentLength?: Units;
   loads?: Loads;
+  /** When present, the results include J, the shear centre and Cw by finite elements, with these settings. */
+  torsion?: TorsionSettings;
   /** The checker's fields. */
   revisions?: Revision[];
   notes?: string;

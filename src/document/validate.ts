@@ -7,6 +7,7 @@ import { newShapeId } from '../shapes/ids';
 import { validateShape } from '../shapes/validate';
 import { validateCheckerFields, validateLimits, validateMaterials } from './fields';
 import { validateVariants } from './variants';
+import { validateTorsionSettings } from './torsion-settings';
 import { migrate, KNOWN_VERSIONS } from './migrate';
 import { CURRENT_VERSION, FORMAT, UNITS, type SectionDocument } from './types';
 
@@ -70,6 +71,7 @@ export function validateDocument(value: unknown): DocResult {
   ];
   validateMaterials(doc, allShapes, errors);
   validateLimits(doc, errors);
+  validateTorsionSettings(doc, errors);
   validateCheckerFields(doc, errors);
   if (doc.name !== undefined && typeof doc.name !== 'string') errors.push({ path: 'name', message: 'name must be text' });
   if (doc.title !== undefined) {

@@ -27,6 +27,8 @@ import { escapeHtml } from './escape';
 import { renderSectionFigure } from './figure';
 import { renderQbDiagram } from './qb-chart';
 import { frameNotes, listingSummary, paramsText, renderScheduleTables, shapeSchedule } from './schedule';
+import { renderTorsionSection } from './torsion';
+import type { SectionTorsion } from '../section-torsion';
 
 export interface ReportInput {
   doc: SectionDocument;
@@ -36,6 +38,8 @@ export interface ReportInput {
   generated?: string;
   /** Paper size for printing; the browser's default when absent. */
   paper?: 'A4' | 'Letter';
+  /** Torsion by finite elements, run when the report is made (the document's `torsion` settings); none when absent. */
+  torsion?: SectionTorsion | null;
 }
 
 export const METHOD_NOTE =
@@ -239,7 +243,7 @@ export function renderReportHtml(input: ReportInput): string {
   const heading = doc.name ?? doc.title?.section ?? 'Section';
 
   const size = sectionSize(props?.bounds ?? null);
-  const fig = props ? renderSectionFigure(evaluation.region, props, units, { maxWidthMm: 180, maxHeightMm: 150, cut, cuts: subtractedRegions(input) }) : null;
+  const fig = props ? renderSectionFigure(evaluation.region, props, units, { maxWidthMm: 180, maxHeightMm: 150, cut, cuts: subtractedRegions(input), shearCentre: input.torsion?.ok ? input.torsion.result.shearCentre : null }) : null;
   let sectionBlock: string;
   if (fig && props) {
     const shown = (key: string) => formatProperty(PROPERTY_CATALOG.find((i) => i.key === key)!, props, units).text;
@@ -250,6 +254,7 @@ export function renderReportHtml(input: ReportInput): string {
     const left = fig.dimensions.omitted.length;
     if (left > 0) captionBits.push(`${left} dimension${left === 1 ? ' was' : 's were'} left off to keep the figure legible; the geometry schedule lists every coordinate.`);
     captionBits.push(`C = centroid (${shown('centroid.x')}, ${shown('centroid.y')}); 1, 2 = principal axes, θ = ${shown('theta')}°.`);
+    if (input.torsion?.ok) captionBits.push('S = shear centre (see Torsion).');
     captionBits.push(fig.originShown ? 'O = origin (0, 0).' : 'The origin (0, 0) lies outside the figure.');
     // The figure with its caption and the revision block beside it, as on a drawing sheet; the
     // side column wraps below the figure when the figure leaves no room for it.
@@ -271,6 +276,7 @@ export function renderReportHtml(input: ReportInput): string {
   if (notes.length > 0) body.push(`<section class="block"><h2>Notes from the evaluation</h2><ul class="small">${notes.join('')}</ul></section>`);
   if (props) body.push(propertyTable(input));
   if (props && cut) body.push(renderQbDiagram(evaluation.region, props, units, cut));
+  if (props && input.torsion) body.push(renderTorsionSection(input.torsion, units, size, props.centroid));
   body.push(
     `<section class="block method"><h2>Method</h2><div class="method-cols"><p class="small">${escapeHtml(METHOD_NOTE)}</p><p class="small">${escapeHtml(CONVENTIONS)}</p><p class="small" data-note="numbers">${escapeHtml(NUMBER_NOTE)}</p><p class="small">${escapeHtml(QB_NOTE)}</p></div></section>`,
     `<p class="caution">${escapeHtml(CAUTION_TEXT)}</p>`,
