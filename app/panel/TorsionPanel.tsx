@@ -104,14 +104,21 @@ function Values({ shown, stale }: { shown: ShownTorsion; stale: boolean }) {
   const c = r.convergence;
   return (
     <div className={`torsion-values${stale ? ' stale' : ''}`} aria-disabled={stale}>
-      {rows.map((row) => (
-        <div key={row.key} className="prop-row" title={row.label}>
-          <span className="prop-symbol">{row.symbol}</span>
-          <span className="prop-label">{row.label}</span>
-          <span className="prop-value" data-prop={row.key} data-value={String(row.value)}>
-            {row.text}
-          </span>
-          <span className="prop-unit">{row.unit}</span>
+      {[...new Set(rows.map((row) => row.group))].map((g) => (
+        <div key={g} className="prop-group">
+          <h3>{g}</h3>
+          {rows
+            .filter((row) => row.group === g)
+            .map((row) => (
+              <div key={row.key} className="prop-row" title={row.label}>
+                <span className="prop-symbol">{row.symbol}</span>
+                <span className="prop-label">{row.label}</span>
+                <span className="prop-value" data-prop={row.key} data-value={String(row.value)}>
+                  {row.text}
+                </span>
+                <span className="prop-unit">{row.unit}</span>
+              </div>
+            ))}
         </div>
       ))}
       <p className="torsion-note" data-testid="torsion-convergence">

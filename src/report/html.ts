@@ -254,7 +254,10 @@ export function renderReportHtml(input: ReportInput): string {
     const left = fig.dimensions.omitted.length;
     if (left > 0) captionBits.push(`${left} dimension${left === 1 ? ' was' : 's were'} left off to keep the figure legible; the geometry schedule lists every coordinate.`);
     captionBits.push(`C = centroid (${shown('centroid.x')}, ${shown('centroid.y')}); 1, 2 = principal axes, θ = ${shown('theta')}°.`);
-    if (input.torsion?.ok) captionBits.push('S = shear centre (see Torsion).');
+    if (input.torsion?.ok) {
+      const sc = input.torsion.result.shearCentre;
+      captionBits.push(`S = shear centre (${formatQuantity(sc.x, 1, size)}, ${formatQuantity(sc.y, 1, size)}), see Torsion.`);
+    }
     captionBits.push(fig.originShown ? 'O = origin (0, 0).' : 'The origin (0, 0) lies outside the figure.');
     // The figure with its caption and the revision block beside it, as on a drawing sheet; the
     // side column wraps below the figure when the figure leaves no room for it.

@@ -25,10 +25,18 @@ export function renderTorsionSection(t: SectionTorsion, units: Units, size: numb
   }
   const r = t.result;
   const c = r.convergence;
-  const rows = torsionRows(r, units, size, centroid).map(
-    (row) =>
-      `<tr data-prop="${e(row.key)}"><td>${e(row.label)}</td><td>${e(row.symbol)}</td><td class="num" data-value="${e(row.text)}">${e(row.text)}</td><td>${e(row.unit)}</td></tr>`,
-  );
+  const rows: string[] = [];
+  let group = '';
+  for (const row of torsionRows(r, units, size, centroid)) {
+    if (row.group !== group) {
+      group = row.group;
+      rows.push(`<tr class="group"><th colspan="4">${e(group)}</th></tr>`);
+    }
+    rows.push(`<tr data-prop="${e(row.key)}"><td>${e(row.label)}</td><td>${e(row.symbol)}</td><td class="num" data-value="${e(row.text)}">${e(row.text)}</td><td>${e(row.unit)}</td></tr>`);
+  }
+  // Two columns, like the property tables: J and the shear centre left, the rest right.
+  const split = rows.findIndex((x, k) => k > 0 && x.startsWith('<tr class="group"><th colspan="4">Warping'));
+  const table = (part: string[]) => `<table class="props"><thead><tr><th>Property</th><th>Symbol</th><th>Value</th><th>Unit</th></tr></thead><tbody>${part.join('')}</tbody></table>`;
   const J = (v: number) => formatQuantity(v, 4, size);
   const settings =
     `Computed when this report was made: ${t.settings.density} mesh density, ${r.mesh.nodes} nodes and ${r.mesh.elements} quadratic elements on the finer mesh ` +
@@ -43,7 +51,7 @@ export function renderTorsionSection(t: SectionTorsion, units: Units, size: numb
   return (
     `<section class="block torsion" data-torsion="ok" data-density="${e(t.settings.density)}">${head}` +
     `<p class="small" data-note="torsion-settings">${e(settings)}</p>` +
-    `<table class="props"><thead><tr><th>Property</th><th>Symbol</th><th>Value</th><th>Unit</th></tr></thead><tbody>${rows.join('')}</tbody></table>` +
+    `<div class="cols">${table(rows.slice(0, split))}${table(rows.slice(split))}</div>` +
     `<p class="small" data-note="torsion-convergence">${e(convergence)}</p>` +
     `<p class="small">${e(stress)}</p>` +
     `<ul class="small torsion-cautions">${t.cautions.map((x) => `<li>${e(x)}</li>`).join('')}</ul>` +

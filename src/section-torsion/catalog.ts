@@ -9,6 +9,7 @@ import type { TorsionResult } from '../torsion';
 
 export interface TorsionRowInfo {
   key: string;
+  group: TorsionGroup;
   label: string;
   symbol: string;
   /** Power of length (J 4, Cw 6, a position 1); 'count' for mesh sizes, 'percent' for the estimate. */
@@ -16,24 +17,27 @@ export interface TorsionRowInfo {
   get(r: TorsionResult, centroid: { x: number; y: number }): number;
 }
 
+export type TorsionGroup = 'Torsion' | 'Shear centre' | 'Warping, about the centre of twist' | 'Shear stress' | 'Mesh and convergence';
+
 export const TORSION_CATALOG: readonly TorsionRowInfo[] = [
-  { key: 'torsion.J', label: 'Torsion constant', symbol: 'J', power: 4, get: (r) => r.J },
-  { key: 'torsion.shearCentre.x', label: 'Shear centre x', symbol: 'xs', power: 1, get: (r) => r.shearCentre.x },
-  { key: 'torsion.shearCentre.y', label: 'Shear centre y', symbol: 'ys', power: 1, get: (r) => r.shearCentre.y },
-  { key: 'torsion.shearCentre.dx', label: 'Shear centre from the centroid, x', symbol: 'x0', power: 1, get: (r, c) => r.shearCentre.x - c.x },
-  { key: 'torsion.shearCentre.dy', label: 'Shear centre from the centroid, y', symbol: 'y0', power: 1, get: (r, c) => r.shearCentre.y - c.y },
-  { key: 'torsion.Cw', label: 'Warping constant, about the centre of twist', symbol: 'Cw', power: 6, get: (r) => r.Cw },
-  { key: 'torsion.centreOfTwist.x', label: 'Centre of twist x', symbol: 'xt', power: 1, get: (r) => r.centreOfTwist.x },
-  { key: 'torsion.centreOfTwist.y', label: 'Centre of twist y', symbol: 'yt', power: 1, get: (r) => r.centreOfTwist.y },
-  { key: 'torsion.tauMax', label: 'Peak shear stress per unit torque', symbol: 'τmax/T', power: 'per-torque', get: (r) => r.stress.max },
-  { key: 'torsion.mesh.nodes', label: 'Mesh nodes (finer mesh)', symbol: 'nodes', power: 'count', get: (r) => r.mesh.nodes },
-  { key: 'torsion.mesh.elements', label: 'Quadratic elements (finer mesh)', symbol: 'elements', power: 'count', get: (r) => r.mesh.elements },
-  { key: 'torsion.convergence.change', label: 'Change of J, coarse to finer mesh', symbol: 'ΔJ', power: 'percent', get: (r) => 100 * r.convergence.relativeChange },
-  { key: 'torsion.convergence.error', label: 'Estimated error of J', symbol: 'εJ', power: 'percent', get: (r) => 100 * r.convergence.estimatedError },
+  { key: 'torsion.J', group: 'Torsion', label: 'Torsion constant', symbol: 'J', power: 4, get: (r) => r.J },
+  { key: 'torsion.shearCentre.x', group: 'Shear centre', label: 'Shear centre x', symbol: 'xs', power: 1, get: (r) => r.shearCentre.x },
+  { key: 'torsion.shearCentre.y', group: 'Shear centre', label: 'Shear centre y', symbol: 'ys', power: 1, get: (r) => r.shearCentre.y },
+  { key: 'torsion.shearCentre.dx', group: 'Shear centre', label: 'Offset from the centroid, x', symbol: 'x0', power: 1, get: (r, c) => r.shearCentre.x - c.x },
+  { key: 'torsion.shearCentre.dy', group: 'Shear centre', label: 'Offset from the centroid, y', symbol: 'y0', power: 1, get: (r, c) => r.shearCentre.y - c.y },
+  { key: 'torsion.Cw', group: 'Warping, about the centre of twist', label: 'Warping constant', symbol: 'Cw', power: 6, get: (r) => r.Cw },
+  { key: 'torsion.centreOfTwist.x', group: 'Warping, about the centre of twist', label: 'Centre of twist x', symbol: 'xt', power: 1, get: (r) => r.centreOfTwist.x },
+  { key: 'torsion.centreOfTwist.y', group: 'Warping, about the centre of twist', label: 'Centre of twist y', symbol: 'yt', power: 1, get: (r) => r.centreOfTwist.y },
+  { key: 'torsion.tauMax', group: 'Shear stress', label: 'Peak |τ| per unit torque', symbol: 'τmax/T', power: 'per-torque', get: (r) => r.stress.max },
+  { key: 'torsion.mesh.nodes', group: 'Mesh and convergence', label: 'Nodes, finer mesh', symbol: 'nodes', power: 'count', get: (r) => r.mesh.nodes },
+  { key: 'torsion.mesh.elements', group: 'Mesh and convergence', label: '6-node elements, finer mesh', symbol: 'elem.', power: 'count', get: (r) => r.mesh.elements },
+  { key: 'torsion.convergence.change', group: 'Mesh and convergence', label: 'Change of J, coarse to finer', symbol: 'ΔJ', power: 'percent', get: (r) => 100 * r.convergence.relativeChange },
+  { key: 'torsion.convergence.error', group: 'Mesh and convergence', label: 'Estimated error of J', symbol: 'εJ', power: 'percent', get: (r) => 100 * r.convergence.estimatedError },
 ];
 
 export interface TorsionRow {
   key: string;
+  group: TorsionGroup;
   label: string;
   symbol: string;
   text: string;
@@ -60,6 +64,6 @@ export function torsionRows(r: TorsionResult, units: Units, size: number, centro
       text = formatQuantity(value, info.power, size);
       unit = unitText(units, info.power);
     }
-    return { key: info.key, label: info.label, symbol: info.symbol, text, unit, value };
+    return { key: info.key, group: info.group, label: info.label, symbol: info.symbol, text, unit, value };
   });
 }
