@@ -205,3 +205,35 @@ describe('torsion settings in the document', () => {
     }
   });
 });
+
+describe('the stress map picture', () => {
+  it('covers every pixel of a meshed square once, with no cracks along shared edges, and interpolates |τ|', async () => {
+    const { rasteriseStress } = await import('../app/paint/stress-map');
+    const { rampColour } = await import('../app/paint/stress-ramp');
+    // A 10 × 10 square (world units) as two triangles, |τ| rising from 0 on the left to the peak on the right.
+    const stress = {
+      xy: new Float64Array([0, 0, 10, 0, 10, 10, 0, 10]),
+      triangles: new Uint32Array([0, 1, 2, 0, 2, 3]),
+      magnitude: new Float64Array([0, 2, 2, 0]),
+      max: 2,
+      at: { x: 10, y: 0 },
+    };
+    const W = 20, H = 20;
+    const px = new Uint32Array(W * H);
+    // 1 px per unit, world origin at screen (5, 15): the square covers screen x 5–15, y 5–15.
+    rasteriseStress(px, W, H, stress, { scale: 1, ox: 5, oy: 15 }, 1);
+    let inside = 0;
+    for (let y = 0; y < H; y++)
+      for (let x = 0; x < W; x++) {
+        const covered = x >= 5 && x < 15 && y >= 5 && y < 15;
+        expect(px[y * W + x] !== 0, `pixel ${x}, ${y}`).toBe(covered);
+        if (covered) inside++;
+      }
+    expect(inside).toBe(100);
+    // Left column pale, right column dark: the colours of the ramp at 1/20 and 19/20 of the peak.
+    const rgba = (w: number) => [w & 255, (w >>> 8) & 255, (w >>> 16) & 255];
+    const near = (a: number[], b: number[]) => a.every((v, k) => Math.abs(v - b[k]) <= 3);
+    expect(near(rgba(px[10 * W + 5]), rampColour(0.05))).toBe(true);
+    expect(near(rgba(px[10 * W + 14]), rampColour(0.95))).toBe(true);
+  });
+});

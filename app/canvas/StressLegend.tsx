@@ -33,7 +33,7 @@ export function StressLegend() {
             </span>
           </div>
           <div className="stress-legend-note">
-            τ = value × T (T in N·{u} gives τ in N/{u}²)
+            τ = value × T (T in force·{u} gives τ in force/{u}²)
           </div>
         </>
       ) : (

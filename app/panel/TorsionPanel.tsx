@@ -4,7 +4,7 @@
  * the shear centre, Cw, the mesh and the convergence estimate, each with data-prop and data-value.
  * A result for an earlier section stays shown, greyed and marked, until the new one arrives.
  */
-import { formatNumber, poissonText, TORSION_DENSITIES, torsionRows, type TorsionStage } from '../../src';
+import { formatNumber, percentText, poissonText, TORSION_DENSITIES, torsionRows, type TorsionStage } from '../../src';
 import { useEditor, useTorsion } from '../context';
 import { CommandButton } from '../fields/CommandButton';
 import { NumberField } from '../fields/NumberField';
@@ -122,7 +122,7 @@ function Values({ shown, stale }: { shown: ShownTorsion; stale: boolean }) {
         </div>
       ))}
       <p className="torsion-note" data-testid="torsion-convergence">
-        J on the coarse mesh {formatNumber(c.Jcoarse)}, on the finer {formatNumber(c.Jfine)} {shown.units}⁴; extrapolated at order {formatNumber(c.order, 3)}, about {formatNumber(100 * c.estimatedError, 2)} % may be left in J.
+        J on the coarse mesh {formatNumber(c.Jcoarse)}, on the finer {formatNumber(c.Jfine)} {shown.units}⁴; extrapolated at order {formatNumber(c.order, 3)}, about {percentText(100 * c.estimatedError)} % may be left in J.
         Cw is taken about the centre of twist (the shear centre for ν = 0). S on the canvas is the shear centre.
         {t.basis.reference && ` J and Cw are in the reference material ${t.basis.reference.name}.`}
       </p>

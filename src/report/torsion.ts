@@ -5,7 +5,7 @@
  */
 import type { Units } from '../document/types';
 import { formatNumber, formatQuantity, unitText } from '../properties/catalog';
-import { poissonText, torsionRows, TORSION_METHOD, type SectionTorsion } from '../section-torsion';
+import { percentText, poissonText, torsionRows, TORSION_METHOD, type SectionTorsion } from '../section-torsion';
 import { escapeHtml } from './escape';
 
 const e = escapeHtml;
@@ -44,9 +44,9 @@ export function renderTorsionSection(t: SectionTorsion, units: Units, size: numb
     (t.basis.reference ? `; J and Cw are expressed in the reference material ${t.basis.reference.name} (G = ${formatNumber(t.basis.referenceG)})` : '') +
     '.';
   const convergence =
-    `Convergence: J = ${J(c.Jcoarse)} ${unitText(units, 4)} on the coarser mesh and ${J(c.Jfine)} ${unitText(units, 4)} on the finer, a change of ${formatNumber(100 * c.relativeChange, 2)} %. ` +
-    `Extrapolated at ${orderText(c.order)}, the error left in J is about ${formatNumber(100 * c.estimatedError, 2)} % (J → ${J(c.Jextrapolated)} ${unitText(units, 4)}). ` +
-    `Between the meshes the shear centre moved ${formatNumber(100 * c.shearCentreShift, 2)} % of the section size and Cw changed ${formatNumber(100 * c.CwChange, 2)} %.`;
+    `Convergence: J = ${J(c.Jcoarse)} ${unitText(units, 4)} on the coarser mesh and ${J(c.Jfine)} ${unitText(units, 4)} on the finer, a change of ${percentText(100 * c.relativeChange)} %. ` +
+    `Extrapolated at ${orderText(c.order)}, the error left in J is about ${percentText(100 * c.estimatedError)} % (J → ${J(c.Jextrapolated)} ${unitText(units, 4)}). ` +
+    `Between the meshes the shear centre moved ${percentText(100 * c.shearCentreShift)} % of the section size and Cw changed ${percentText(100 * c.CwChange)} %.`;
   const stress = `Peak shear stress under a torque T: τmax = ${formatNumber(r.stress.max)} × T ${e(units)}⁻³, at (${formatQuantity(r.stress.at.x, 1, size)}, ${formatQuantity(r.stress.at.y, 1, size)}).`;
   return (
     `<section class="block torsion" data-torsion="ok" data-density="${e(t.settings.density)}">${head}` +

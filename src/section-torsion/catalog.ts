@@ -35,6 +35,11 @@ export const TORSION_CATALOG: readonly TorsionRowInfo[] = [
   { key: 'torsion.convergence.error', group: 'Mesh and convergence', label: 'Estimated error of J', symbol: 'εJ', power: 'percent', get: (r) => 100 * r.convergence.estimatedError },
 ];
 
+/** A small percentage as people read it: 2 significant figures, and "< 0.001" below that (no powers of ten). */
+export function percentText(v: number): string {
+  return Number.isFinite(v) && Math.abs(v) < 0.001 ? (v === 0 ? '0' : '< 0.001') : formatNumber(v, 2);
+}
+
 export interface TorsionRow {
   key: string;
   group: TorsionGroup;
@@ -55,7 +60,7 @@ export function torsionRows(r: TorsionResult, units: Units, size: number, centro
       text = String(value);
       unit = '';
     } else if (info.power === 'percent') {
-      text = formatNumber(value, 2);
+      text = percentText(value);
       unit = '%';
     } else if (info.power === 'per-torque') {
       text = formatNumber(value);

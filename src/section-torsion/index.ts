@@ -6,6 +6,6 @@
 export { sectionPieces, shearModulus, type SectionPieces, type PieceMaterial } from './pieces';
 export { resolveTorsionSettings, poissonText, DEFAULT_POISSON, type ResolvedTorsionSettings } from './settings';
 export { computeSectionTorsion, sectionTorsion, basisOf, type SectionTorsion, type TorsionBasis } from './compute';
-export { TORSION_CATALOG, torsionRows, type TorsionRow, type TorsionRowInfo, type TorsionGroup } from './catalog';
+export { TORSION_CATALOG, torsionRows, percentText, type TorsionRow, type TorsionRowInfo, type TorsionGroup } from './catalog';
 export { torsionJson } from './json';
 export { TORSION_SCOPE, TORSION_MIXED, TORSION_METHOD, torsionCautions } from './cautions';

@@ -75,7 +75,8 @@ function ShearCentreNode({ at, v, stale }: { at: { x: number; y: number }; v: Vi
         ctx.arc(x, y, 1.8, 0, 2 * Math.PI);
         ctx.fill();
         ctx.font = '11px ui-sans-serif, system-ui, sans-serif';
-        ctx.fillText(stale ? 'S (earlier section)' : 'S', x + 9, y - 8);
+        // Below right: the centroid's C sits above right, and S is often on or near C.
+        ctx.fillText(stale ? 'S (earlier section)' : 'S', x + 9, y + 15);
         ctx.globalAlpha = 1;
       }}
     />
