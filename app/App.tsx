@@ -9,6 +9,7 @@ import { CutPanel } from './panel/CutPanel';
 import { LineResults } from './panel/LineResults';
 import { Caution, ResultsPanel } from './panel/ResultsPanel';
 import { SelectionPanel } from './panel/SelectionPanel';
+import { TorsionPanel } from './panel/TorsionPanel';
 import { ShapeList } from './panel/ShapeList';
 import { StatusBar, ToolRail, TopBar } from './ui/Bars';
 import { Notice } from './ui/Notice';
@@ -74,6 +75,7 @@ export function App({ editor }: { editor: EditorHandle }) {
             <LineResults />
             <MaterialResults />
             <LoadsPanel />
+            <TorsionPanel />
             <CutPanel />
             <CautionsPanel />
             <NetSectionPanel />

@@ -31,6 +31,7 @@ import {
 import { setTitleField, type TitleField } from './ops/title';
 import { addRevision, deleteRevision, setChecked, setNotes, setRevisionField, type CheckedField, type RevisionField } from './ops/checker';
 import { fitView, toggleOverlay } from './ops/view';
+import { hasTorsion, setTorsionDensity, setTorsionPoisson, toggleTorsion } from './ops/torsion';
 import { SHAPE_EDITORS } from './shapes';
 import { canRedo, canUndo, redo, undo } from './store/history';
 import type { EditorState, Overlays } from './store/store';
@@ -144,6 +145,16 @@ function registerView(r: CommandRegistry): void {
   r.register({ name: 'notice.dismiss', label: 'Dismiss', group: 'view', perform: (c) => c.store.setState({ notice: null }) });
 }
 
+/** Torsion by finite elements (app/torsion/): part of the results or not, its settings, runs. */
+function registerTorsion(r: CommandRegistry): void {
+  r.register({ name: 'torsion.include', label: 'Torsion', group: 'view', hint: 'Include J, the shear centre and Cw by finite elements in the results and the report', active: hasTorsion, perform: toggleTorsion });
+  r.register({ name: 'torsion.density', label: 'Torsion mesh density', group: 'view', perform: setTorsionDensity });
+  r.register({ name: 'torsion.poisson', label: "Poisson's ratio for the shear centre", group: 'view', perform: (c, v) => void setTorsionPoisson(c, v) });
+  r.register({ name: 'view.stressMap', label: 'Stress map', group: 'view', hint: 'Shade the shear stress |τ| under a unit torque (with torsion included)', enabled: hasTorsion, active: (c) => c.store.getState().overlays.stressMap, perform: (c) => toggleOverlay(c, 'stressMap') });
+  r.register({ name: 'torsion.compute', label: 'Compute', group: 'view', hint: 'Run the torsion analysis now', enabled: hasTorsion, perform: (c) => c.torsion?.compute() });
+  r.register({ name: 'torsion.cancel', label: 'Cancel', group: 'view', hint: 'Stop the torsion run (automatic runs pause until Compute)', perform: (c) => c.torsion?.cancel() });
+}
+
 function registerFiles(r: CommandRegistry): void {
   r.register({ name: 'units.set', label: 'Units', group: 'units', perform: setUnits });
   r.register({
@@ -240,6 +251,7 @@ export function buildRegistry(): CommandRegistry {
   registerTools(r);
   registerEdits(r);
   registerView(r);
+  registerTorsion(r);
   registerFiles(r);
   registerMaterials(r);
   registerChecker(r);

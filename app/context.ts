@@ -10,10 +10,13 @@ import type { ResultsHandle, LiveResults } from './store/evaluation';
 import type { EditorState, EditorStore } from './store/store';
 import type { Transient, TransientStore } from './store/transient';
 import type { Tool, ToolEnv } from './tools/types';
+import type { TorsionHandle, TorsionView } from './torsion/live';
 
 export interface EditorHandle {
   store: EditorStore;
   results: ResultsHandle;
+  /** Live torsion by finite elements (its own worker). */
+  torsion: TorsionHandle;
   transient: TransientStore;
   env: ToolEnv;
   ctx: CommandContext;
@@ -49,4 +52,8 @@ export function useResults<T>(selector: (r: LiveResults) => T): T {
 
 export function useTransient<T>(selector: (t: Transient) => T): T {
   return useStore(useEditor().transient, selector);
+}
+
+export function useTorsion<T>(selector: (v: TorsionView) => T): T {
+  return useStore(useEditor().torsion.view, selector);
 }

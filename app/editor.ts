@@ -12,6 +12,7 @@ import { SelectTool } from './select';
 import { TOOL_SPECS } from './shapes';
 import { commit } from './store/history';
 import { createLiveResults } from './store/evaluation';
+import { createLiveTorsion } from './torsion/live';
 import { createEditorStore } from './store/store';
 import { createTransientStore } from './store/transient';
 import type { Tool, ToolEnv } from './tools/types';
@@ -24,6 +25,7 @@ export type Editor = EditorHandle;
 export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule?: (cb: () => void) => void; worker?: boolean } = {}): Editor {
   const store = createEditorStore(doc);
   const results = createLiveResults(store, { schedule: opts.schedule, worker: opts.worker });
+  const torsion = createLiveTorsion(store, results, { worker: opts.worker });
   const transient = createTransientStore();
   const tools: Record<string, Tool> = { select: new SelectTool() };
   for (const t of TOOL_SPECS) tools[t.id] = t.create();
@@ -64,7 +66,7 @@ export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule
       transient.setState({ inputError: text });
     },
   };
-  const ctx: CommandContext = { store, evaluate: results.evaluate, shapesOf: results.shapesOf, io: opts.io };
+  const ctx: CommandContext = { store, evaluate: results.evaluate, shapesOf: results.shapesOf, io: opts.io, torsion };
   const tool = () => tools[store.getState().tool] ?? tools.select;
   const updatePrompt = () => transient.setState({ prompt: tool().prompt(env) });
   updatePrompt();
@@ -92,6 +94,7 @@ export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule
   return {
     store,
     results,
+    torsion,
     transient,
     env,
     ctx,
@@ -107,6 +110,7 @@ export function createEditor(doc: SectionDocument, opts: { io?: FileIO; schedule
     dispose() {
       unsub();
       unsubT();
+      torsion.dispose();
       results.dispose();
     },
   };

@@ -3,7 +3,7 @@
  * and its evaluation; the editor shows it in an overlay iframe and prints it for "Save as PDF".
  * Loaded on demand so the editor starts without it.
  */
-import type { Evaluation, SectionDocument } from '../src';
+import type { Evaluation, SectionDocument, SectionTorsion } from '../src';
 
 export interface ReportRequest {
   doc: SectionDocument;
@@ -14,6 +14,7 @@ export interface ReportRequest {
   kern?: boolean;
   /** The proposal to check against the baseline (default: the one shown, else the first; null: none). */
   variant?: string | null;
+  torsion?: SectionTorsion | null;
 }
 
 export type ReportRenderer = (input: ReportRequest) => string;

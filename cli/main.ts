@@ -30,6 +30,8 @@ const USAGE = `Usage:
   kern props FILE [--json] [--variant NAME]
                                            section properties of a section document (.json): its
                                            baseline, or the proposal NAME
+      [--torsion [--density coarse|normal|fine] [--poisson NU]]
+                                           also J, shear centre and Cw by finite elements
   kern cut FILE (--y VALUE | --x VALUE) [--json]
                                            width, area, centroid and Q of the part above y = VALUE
                                            (or right of x = VALUE)
@@ -166,14 +168,18 @@ export async function main(argv: string[]): Promise<number> {
   const [cmd, ...rest] = argv;
   try {
     if (cmd === 'props') {
-      const a = parseArgs(rest, ['units', 'variant']);
+      const a = parseArgs(rest, ['units', 'variant', 'density', 'poisson']);
+      const tor = a.flags.has('torsion') || a.flags.has('density') || a.flags.has('poisson') ? await import('./torsion') : null;
+      const req = tor?.torsionRequest(a.flags) ?? null;
       const r = await evaluateFile(a.positional[0], a.flags, true);
       if (!r) return 2;
       const lines = await import('./lines');
       const props = r.props;
+      const t = tor && req && props ? tor.runTorsion(a.positional[0], r.doc, r.ev, req) : null;
+      if (req && props && !t) return 2;
       if (a.flags.has('json')) {
         const area = props ? propsJson(r.doc, r.ev, props, r.warnings) : { units: r.doc.units, area_properties: 'absent', message: r.ev.message, warnings: [...r.warnings, ...r.ev.warnings.map(formatIssue)] };
-        out(JSON.stringify({ ...area, ...lines.linesJson(r.ev) }, null, 2));
+        out(JSON.stringify({ ...area, ...lines.linesJson(r.ev), ...(t ? tor!.torsionJson(t) : {}) }, null, 2));
         return 0;
       }
       out(`${r.doc.name ?? a.positional[0]} (${r.doc.units})`);
@@ -185,6 +191,7 @@ export async function main(argv: string[]): Promise<number> {
         out(table(rows));
       } else out(`Area properties: absent. ${r.ev.message ?? ''}`.trim());
       for (const line of (await import('./materials-props')).materialsPropsText(r.doc, r.ev)) out(line);
+      if (t && props) out(tor!.torsionText(t, r.doc, props));
       if (r.ev.lines.length) out(lines.linesTable(r.ev, r.doc.units));
       for (const w of [...r.warnings, ...r.ev.warnings.map((i) => formatShapeIssue(i, r.doc.shapes))]) out(`warning: ${w}`);
       out(CAUTION_TEXT);

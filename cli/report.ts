@@ -9,8 +9,9 @@ import { existsSync, writeFileSync } from 'node:fs';
 import { evaluateDocument, formatShapeIssue } from '../src';
 import { renderReportHtml } from '../src/report';
 import { loadSectionFile } from './dxf-input';
+import { reportTorsion, reportTorsionRequest } from './torsion';
 
-const USAGE = 'usage: kern report FILE [--out report.html] [--pdf out.pdf] [--units mm|cm|m|in|ft] [--cut y=VALUE|x=VALUE] [--paper a4|letter] [--variant NAME]';
+const USAGE = 'usage: kern report FILE [--out report.html] [--pdf out.pdf] [--units mm|cm|m|in|ft] [--cut y=VALUE|x=VALUE] [--paper a4|letter] [--variant NAME] [--torsion [--density coarse|normal|fine] [--poisson NU]]';
 
 export const CHROMIUM_ARGS = [
   '--no-sandbox',
@@ -30,7 +31,7 @@ export const CHROMIUM_MISSING = (path: string) =>
   `  Install it with:  apt-get install -y chromium\n` +
   `  or point KERN_CHROMIUM at a Chromium or Chrome executable.`;
 
-const VALUED = ['out', 'pdf', 'units', 'cut', 'paper', 'variant'];
+const VALUED = ['out', 'pdf', 'units', 'cut', 'paper', 'variant', 'density', 'poisson'];
 
 function parse(args: string[]): { file?: string; flags: Map<string, string> } | string {
   const flags = new Map<string, string>();
@@ -40,6 +41,10 @@ function parse(args: string[]): { file?: string; flags: Map<string, string> } | 
     if (a.startsWith('--')) {
       const eq = a.indexOf('=');
       const name = eq > 0 ? a.slice(2, eq) : a.slice(2);
+      if (name === 'torsion' && eq < 0) {
+        flags.set(name, '');
+        continue;
+      }
       if (!VALUED.includes(name)) return `unknown option --${name}`;
       if (eq > 0) flags.set(name, a.slice(eq + 1));
       else if (i + 1 < args.length) flags.set(name, args[++i]);
@@ -104,6 +109,11 @@ export async function reportCommand(args: string[]): Promise<number> {
       return 2;
     }
   }
+  const torsion = reportTorsionRequest(flags);
+  if (typeof torsion === 'string') {
+    err(`kern report: ${torsion}`);
+    return 2;
+  }
   if (pdf && !existsSync(chromiumPath())) {
     err(CHROMIUM_MISSING(chromiumPath()));
     return 2;
@@ -127,7 +137,7 @@ export async function reportCommand(args: string[]): Promise<number> {
   // An empty or degenerate section still gets its report: a page that says so, with no figure.
   if (!evaluation.props && evaluation.lines.length > 0) err(`note: ${file}: line elements only; the report gives the line groups, and says that the area properties are absent`);
   else if (!evaluation.props) err(`warning: ${file}: ${(evaluation.message ?? 'the section has no area').replace(/\.$/, '')}; the report says so and has no figure`);
-  const html = renderReportHtml({ doc: loaded.doc, evaluation, cut, variant, generated: new Date().toISOString().replace(/\.\d+Z$/, 'Z') });
+  const html = renderReportHtml({ doc: loaded.doc, evaluation, cut, variant, generated: new Date().toISOString().replace(/\.\d+Z$/, 'Z'), torsion: reportTorsion(loaded.doc, evaluation, torsion) });
   try {
     if (out) writeFileSync(out, html);
   } catch (e) {

@@ -64,3 +64,4 @@ export * from './lines';
 export * from './materials';
 export * from './torsion';
 export * from './analysis';
+export * from './section-torsion';

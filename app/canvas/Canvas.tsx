@@ -22,6 +22,8 @@ import { GravityLayer } from './layers/Gravity';
 import { BaselineLayer } from './layers/Baseline';
 import { CautionMarksLayer } from './layers/CautionMarks';
 import { NetLinesLayer } from './layers/NetLines';
+import { TorsionLayer } from './layers/Torsion';
+import { StressLegend } from './StressLegend';
 
 function isField(t: EventTarget | null): boolean {
   return t instanceof HTMLInputElement || t instanceof HTMLTextAreaElement || t instanceof HTMLSelectElement;
@@ -117,6 +119,7 @@ export function Canvas() {
           <ShapesLayer />
           <MaterialsLayer />
           <StressMapLayer />
+          <TorsionLayer />
           <OverlayLayer />
           <WeldLayer />
           <KernLayer />
@@ -128,6 +131,7 @@ export function Canvas() {
           <InteractionLayer />
         </Layer>
       </Stage>
+      <StressLegend />
     </div>
   );
 }

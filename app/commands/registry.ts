@@ -5,6 +5,7 @@
  */
 import type { Evaluation, SectionDocument, ShapeResult } from '../../src';
 import type { EditorStore } from '../store/store';
+import type { TorsionHandle } from '../torsion/live';
 
 export interface FileIO {
   /** Ask the user for a file and return its text (null when cancelled). */
@@ -20,6 +21,8 @@ export interface CommandContext {
   io?: FileIO;
   /** Opens the report overlay (wired by the app). */
   openReport?(): void;
+  /** Live torsion (runs, cancel, the stress map). */
+  torsion?: TorsionHandle;
 }
 
 export interface Command {

@@ -61,6 +61,8 @@ export interface Overlays {
   stress: boolean;
   /** Dimensions of holes, notches and plates, as on the report's figure (app/canvas/layers/Dimensions.tsx). */
   dimensions: boolean;
+  /** The shaded shear-stress map of the torsion result (drawn when there is one). */
+  stressMap: boolean;
 }
 
 export interface Notice {
@@ -115,7 +117,7 @@ export function createEditorStore(doc: SectionDocument): EditorStore {
     oy: 400,
     width: 800,
     height: 600,
-    overlays: { centroid: true, principal: false, fibres: false, cut: false, kern: false, stress: true, dimensions: false },
+    overlays: { centroid: true, principal: false, fibres: false, cut: false, kern: false, stress: true, dimensions: false, stressMap: false },
     cutAxis: 'y',
     cutAt: null,
     notice: null,

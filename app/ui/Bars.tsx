@@ -83,6 +83,7 @@ export function ToolRail() {
         <CommandButton name="view.kern" />
         <CommandButton name="view.stress" />
         <CommandButton name="view.dimensions" />
+        <CommandButton name="view.stressMap">Stress map</CommandButton>
         <CommandButton name="view.fit" />
       </div>
     </nav>

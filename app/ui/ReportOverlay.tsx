@@ -1,7 +1,8 @@
 /** The report in an overlay: the report module's HTML in an iframe, printed for "Save as PDF". */
 import { useEffect, useRef, useState } from 'react';
+import { computeSectionTorsion, type SectionTorsion } from '../../src';
 import { loadReportRenderer } from '../report';
-import { useEditor, useEditorState } from '../context';
+import { useEditor, useEditorState, useTorsion } from '../context';
 import { withPaperSize, type Paper } from '../exchange/paper';
 import { CommandButton } from '../fields/CommandButton';
 
@@ -13,13 +14,20 @@ export function ReportOverlay() {
   const [html, setHtml] = useState<string | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
   const frame = useRef<HTMLIFrameElement>(null);
+  const torsionRunning = useTorsion((t) => t.status === 'running');
+  const torsionProgress = useTorsion((t) => t.progress);
   useEffect(() => {
     if (!open) return;
     let live = true;
     setHtml(null);
     setProblem(null);
-    loadReportRenderer()
-      .then((render) => {
+    // Torsion (when the document includes it) is run for the report now, or taken when current.
+    // The report describes the baseline: with a proposal shown, the live result belongs to the
+    // proposal, so the baseline's is computed for the report (after a frame, so the overlay shows).
+    const baselineTorsion = () =>
+      new Promise<SectionTorsion | null>((resolve) => setTimeout(() => resolve(doc.torsion ? computeSectionTorsion(doc, editor.results.evaluateBaseline(doc)) : null), 30));
+    Promise.all([loadReportRenderer(), doc.activeVariant ? baselineTorsion() : editor.torsion.forReport(doc)])
+      .then(([render, torsion]) => {
         if (!live) return;
         if (!render) {
           setProblem('The report module is not available in this build.');
@@ -28,7 +36,7 @@ export function ReportOverlay() {
         const s = editor.store.getState();
         const cut = s.overlays.cut && s.cutAt !== null ? { axis: s.cutAxis, at: s.cutAt } : null;
         // The report describes the baseline; a proposal (the one shown, else the first) gets its cutout check after it.
-        setHtml(render({ doc: s.doc, evaluation: editor.results.evaluateBaseline(s.doc), cut, kern: s.overlays.kern, generated: new Date().toISOString().slice(0, 16).replace('T', ' ') }));
+        setHtml(render({ doc: s.doc, evaluation: editor.results.evaluateBaseline(s.doc), cut, kern: s.overlays.kern, generated: new Date().toISOString().slice(0, 16).replace('T', ' '), torsion }));
       })
       .catch((e) => live && setProblem(`The report could not be made: ${(e as Error).message}`));
     return () => {
@@ -58,7 +66,7 @@ export function ReportOverlay() {
         </div>
         {problem && <p className="hint">{problem}</p>}
         {html && <iframe ref={frame} title="Section report" className="report-frame" srcDoc={withPaperSize(html, paper)} sandbox="allow-same-origin allow-modals" />}
-        {!html && !problem && <p className="hint">Preparing the report…</p>}
+        {!html && !problem && <p className="hint">Preparing the report…{torsionRunning && ` Computing torsion (${Math.round(100 * torsionProgress)} %).`}</p>}
       </div>
     </div>
   );

@@ -30,6 +30,7 @@ import { STRIP_CORNERS, type StripShape } from '../shapes/strip';
 import { FORMAT, UNITS, type Revision, type SectionDocument, type TitleBlock, type Variant } from './types';
 import type { WeldLoad as WeldLoadCase } from './weld-loads';
 import type { NetLine } from './net-lines';
+import { TORSION_DENSITIES } from './torsion-settings';
 
 /** A JSON Schema as plain data. */
 export type JsonSchema = { [keyword: string]: unknown };
@@ -253,6 +254,15 @@ function documentProperties(v: SchemaVersion): Partial<DocumentKeys> {
     checked: ref('checked'),
     weldLoads: list(ref('weldLoad'), 'Forces on line groups (weld groups).'),
     netLines: list(ref('netLine'), 'Straight lines across the section for the net length through holes (tension checks).'),
+    torsion: {
+      type: 'object',
+      description: 'When present, the results include J, the shear centre and Cw by finite elements, with these settings.',
+      properties: {
+        density: { enum: [...TORSION_DENSITIES], description: 'Mesh density; normal when absent.' },
+        poisson: { type: 'number', minimum: 0, exclusiveMaximum: 0.5, description: 'Poisson’s ratio for the elastic shear centre; the reference material’s, else 0.3, when absent.' },
+      },
+      additionalProperties: false,
+    },
   };
   return all;
 }

@@ -85,6 +85,9 @@ import type { ForceUnit, StressUnit } from '../materials/units';
 /** A straight line across the section for its net section (src/document/net-lines.ts). */
 export type { NetLine } from './net-lines';
 import type { NetLine } from './net-lines';
+/** Torsion by finite elements in the results, with its mesh density and Poisson's ratio (src/document/torsion-settings.ts). */
+export { TORSION_DENSITIES, type TorsionSettings, type TorsionDensitySetting } from './torsion-settings';
+import type { TorsionSettings } from './torsion-settings';
 
 export interface SectionDocument {
   format: typeof FORMAT;
@@ -116,6 +119,8 @@ export interface SectionDocument {
   loads?: Loads;
   /** Forces on line groups (weld groups): force in `forceUnit`, moment in force × `momentLength`. */
   weldLoads?: WeldLoadCase[];
+  /** When present, the results include J, the shear centre and Cw by finite elements, with these settings. */
+  torsion?: TorsionSettings;
   /** The checker's fields. */
   revisions?: Revision[];
   notes?: string;

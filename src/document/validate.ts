@@ -9,6 +9,7 @@ import { validateCheckerFields, validateLimits, validateMaterials } from './fiel
 import { validateVariants } from './variants';
 import { validateWeldLoads } from './weld-loads';
 import { validateNetLines } from './net-lines';
+import { validateTorsionSettings } from './torsion-settings';
 import { migrate, KNOWN_VERSIONS } from './migrate';
 import { CURRENT_VERSION, FORMAT, UNITS, type SectionDocument } from './types';
 
@@ -73,6 +74,7 @@ export function validateDocument(value: unknown): DocResult {
   validateMaterials(doc, allShapes, errors);
   validateLimits(doc, errors);
   validateNetLines(doc, errors);
+  validateTorsionSettings(doc, errors);
   validateCheckerFields(doc, errors);
   validateWeldLoads(doc, errors, warnings);
   if (doc.name !== undefined && typeof doc.name !== 'string') errors.push({ path: 'name', message: 'name must be text' });

@@ -26,6 +26,8 @@ export interface FigureOptions {
   cuts?: readonly Region[];
   /** Dimension holes, openings, notches and plates (default true); the overall size always is. */
   dimensions?: boolean;
+  /** The shear centre, marked S (from the torsion analysis, when the report has one). */
+  shearCentre?: { x: number; y: number } | null;
 }
 
 export interface Figure {
@@ -63,15 +65,24 @@ function arrowHead(x: number, y: number, dx: number, dy: number): string {
 }
 
 /** The drawn frame (world units) for a layout: the layout's extent plus the origin marker when near. */
-function frameFor(layout: DimensionLayout, near: boolean, k: number) {
+function frameFor(layout: DimensionLayout, near: boolean, k: number, mark?: { x: number; y: number } | null) {
   const e = layout.extent;
   const arm = (ORIGIN_ARM + 3) / k;
-  return {
+  const fr = {
     x0: near ? Math.min(e.xmin, -3.5 / k) : e.xmin,
     x1: near ? Math.max(e.xmax, arm) : e.xmax,
     y0: near ? Math.min(e.ymin, -3.5 / k) : e.ymin,
     y1: near ? Math.max(e.ymax, arm) : e.ymax,
   };
+  // A shear centre outside the section (a channel's) stays inside the frame with its label.
+  if (mark) {
+    const b = shearCentreBox(mark, 1 / k);
+    fr.x0 = Math.min(fr.x0, b.xmin);
+    fr.x1 = Math.max(fr.x1, b.xmax);
+    fr.y0 = Math.min(fr.y0, b.ymin);
+    fr.y1 = Math.max(fr.y1, b.ymax);
+  }
+  return fr;
 }
 
 /**
@@ -100,6 +111,20 @@ function drawnMarks(props: SectionProperties | null, cut: FigureOptions['cut'], 
   return { lines, boxes };
 }
 
+/** The room the shear-centre mark and its label take (world units; `mm` world units per paper millimetre). */
+function shearCentreBox(s: { x: number; y: number }, mm: number) {
+  return { xmin: s.x - 2 * mm, xmax: s.x + 5 * mm, ymin: s.y - 2 * mm, ymax: s.y + 5 * mm };
+}
+
+/** The shear-centre mark at paper (x, y): an open diamond with a dot, labelled S (the centroid is a quartered circle). */
+function shearCentreMark(x: number, y: number): string {
+  const r = 1.9;
+  return (
+    `<g class="shear-centre"><path d="M${f(x - r)} ${f(y)} L${f(x)} ${f(y - r)} L${f(x + r)} ${f(y)} L${f(x)} ${f(y + r)} Z" class="thin" fill="#fff"/>` +
+    `<circle cx="${f(x)}" cy="${f(y)}" r="0.5" class="ink"/></g><text x="${f(x + 2.3)}" y="${f(y - 1.6)}">S</text>`
+  );
+}
+
 export function renderSectionFigure(region: Region, props: SectionProperties | null, units: Units, opts: FigureOptions): Figure | null {
   const b = regionBounds(region);
   if (!b) return null;
@@ -119,13 +144,15 @@ export function renderSectionFigure(region: Region, props: SectionProperties | n
   for (let i = STANDARD_SCALES.indexOf(first); i < STANDARD_SCALES.length; i++) {
     scale = STANDARD_SCALES[Math.max(0, i)];
     const k = scale.ratio * unitMm;
-    layout = layoutDimensions(features, region, { mm: 1 / k, textMm: FONT, avoid: drawnMarks(props, opts.cut ?? null, near, ext, 1 / k) });
-    const fr = frameFor(layout, near, k);
+    const avoid = drawnMarks(props, opts.cut ?? null, near, ext, 1 / k);
+    if (opts.shearCentre) avoid.boxes.push(shearCentreBox(opts.shearCentre, 1 / k));
+    layout = layoutDimensions(features, region, { mm: 1 / k, textMm: FONT, avoid });
+    const fr = frameFor(layout, near, k, opts.shearCentre);
     if ((fr.x1 - fr.x0) * k <= boxW && (fr.y1 - fr.y0) * k <= boxH) break;
   }
   const dims = layout!;
   const k = scale.ratio * unitMm; // paper mm per drawing unit
-  const fr = frameFor(dims, near, k);
+  const fr = frameFor(dims, near, k, opts.shearCentre);
   const fx0 = fr.x0, fx1 = fr.x1, fy0 = fr.y0, fy1 = fr.y1;
   const LEFT = PAD_L, RIGHT = PAD_R, TOP = PAD_T, BOTTOM = PAD_B;
   const W = (fx1 - fx0) * k + LEFT + RIGHT, H = (fy1 - fy0) * k + TOP + BOTTOM;
@@ -193,6 +220,8 @@ export function renderSectionFigure(region: Region, props: SectionProperties | n
       `<text x="${f(cx + 2.4)}" y="${f(cy + 3.6)}">C</text>`,
     );
   }
+
+  if (opts.shearCentre) parts.push(shearCentreMark(X(opts.shearCentre.x), Y(opts.shearCentre.y)));
 
   // Origin.
   if (near) {

@@ -32,6 +32,8 @@ import { renderLineReport } from './lines';
 import { frameNotes, listingSummary, paramsText, renderScheduleTables, shapeSchedule } from './schedule';
 import { MATERIALS_CSS, renderMaterialsReport } from './materials';
 import { COMPARISON_CSS, renderComparisonSection, reportProposal } from './comparison';
+import { renderTorsionSection } from './torsion';
+import type { SectionTorsion } from '../section-torsion';
 
 export interface ReportInput {
   doc: SectionDocument;
@@ -49,6 +51,8 @@ export interface ReportInput {
    * the baseline's.
    */
   variant?: string | null;
+  /** Torsion by finite elements, run when the report is made (the document's `torsion` settings); none when absent. */
+  torsion?: SectionTorsion | null;
 }
 
 export const METHOD_NOTE =
@@ -255,7 +259,7 @@ export function renderReportHtml(input: ReportInput): string {
   const heading = doc.name ?? doc.title?.section ?? 'Section';
 
   const size = sectionSize(props?.bounds ?? null);
-  const fig = props ? renderSectionFigure(evaluation.region, props, units, { maxWidthMm: 180, maxHeightMm: 150, cut, cuts: subtractedRegions(input) }) : null;
+  const fig = props ? renderSectionFigure(evaluation.region, props, units, { maxWidthMm: 180, maxHeightMm: 150, cut, cuts: subtractedRegions(input), shearCentre: input.torsion?.ok ? input.torsion.result.shearCentre : null }) : null;
   let sectionBlock: string;
   if (fig && props) {
     const shown = (key: string) => formatProperty(PROPERTY_CATALOG.find((i) => i.key === key)!, props, units).text;
@@ -266,6 +270,10 @@ export function renderReportHtml(input: ReportInput): string {
     const left = fig.dimensions.omitted.length;
     if (left > 0) captionBits.push(`${left} dimension${left === 1 ? ' was' : 's were'} left off to keep the figure legible; the geometry schedule lists every coordinate.`);
     captionBits.push(`C = centroid (${shown('centroid.x')}, ${shown('centroid.y')}); 1, 2 = principal axes, θ = ${shown('theta')}°.`);
+    if (input.torsion?.ok) {
+      const sc = input.torsion.result.shearCentre;
+      captionBits.push(`S = shear centre (${formatQuantity(sc.x, 1, size)}, ${formatQuantity(sc.y, 1, size)}), see Torsion.`);
+    }
     captionBits.push(fig.originShown ? 'O = origin (0, 0).' : 'The origin (0, 0) lies outside the figure.');
     // The figure with its caption and the revision block beside it, as on a drawing sheet; the
     // side column wraps below the figure when the figure leaves no room for it.
@@ -288,6 +296,7 @@ export function renderReportHtml(input: ReportInput): string {
   if (props) body.push(propertyTable(input));
   if (props && cut) body.push(renderQbDiagram(evaluation.region, props, units, cut));
   if (props) body.push(renderMaterialsReport(input));
+  if (props && input.torsion) body.push(renderTorsionSection(input.torsion, units, size, props.centroid));
   const lines = renderLineReport(input);
   if (lines) body.push(lines);
   // The caution closes the method block, so a page break never leaves it alone on a last page.
