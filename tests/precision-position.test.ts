@@ -23,12 +23,18 @@
  *   Z = 4(r2³ − r1³)/3. The right triangle's Z = (bh²/3)(1 − 1/√2) follows from Z = A(c1 + c2)/2
  *   with the equal-area axis at h/√2 below the apex (derived here, no table value).
  */
-import { afterAll, describe, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { contourFrom, type Contour, type Region } from '../src/geometry/contour';
 import { cutSection, sectionProperties } from '../src/properties/section';
 import { close, worst } from './helpers';
 
 const TOL = 1e-9;
+
+/** A world coordinate within 1e-9 of a 10-unit part, or within two units in its last place. */
+function nearCoordinate(got: number, want: number): void {
+  const ulp = Math.abs(want) * Number.EPSILON;
+  expect(Math.abs(got - want), `coordinate ${got}, expected ${want}`).toBeLessThanOrEqual(Math.max(TOL * 10, 2 * ulp));
+}
 const OFFSETS = [0, 1e3, 1e6, 1e9];
 
 /** An exact rotation: (c, s) with c² + s² = 1 in exact arithmetic for the coordinates used. */
@@ -163,9 +169,10 @@ describe('closed forms at any position and turn', () => {
           const want = rotated(k.Ix, k.Iy, k.Ixy, t.c, t.s);
           const J = k.Ix + k.Iy;
           close(p.area, k.A, TOL);
-          // The centroid is compared relative to the part (its offset from the placement point).
-          close(p.centroid.x - ox, t.c * k.gx - t.s * k.gy, TOL, 10);
-          close(p.centroid.y - oy, t.s * k.gx + t.c * k.gy, TOL, 10);
+          // The centroid is a world coordinate: 1e-9 of the part's size, or its last two digits
+          // (a double near 1e9 holds 1.2e-7), whichever is larger.
+          nearCoordinate(p.centroid.x, ox + (t.c * k.gx - t.s * k.gy));
+          nearCoordinate(p.centroid.y, oy + (t.s * k.gx + t.c * k.gy));
           close(p.Ix, want.Ix, TOL);
           close(p.Iy, want.Iy, TOL);
           close(p.Ixy, want.Ixy, TOL, J);

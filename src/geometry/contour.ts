@@ -168,6 +168,24 @@ export function rotateRegion(r: Region, theta: number, ox = 0, oy = 0): Region {
   return r.map((c) => transformContour(c, cs, -sn, sn, cs, ox - cs * ox + sn * oy, oy - sn * ox - cs * oy));
 }
 
+/**
+ * The region turned by a quarter turn about the origin, exactly (coordinates are swapped and
+ * negated, never multiplied by a rounded cos(π/2)): sense +1 maps (x, y) to (−y, x), −1 maps
+ * (x, y) to (y, −x). A turn keeps every loop's sense, so the bulges stay as they are.
+ */
+export function quarterTurnRegion(r: Region, sense: 1 | -1): Region {
+  return r.map((c) => {
+    const n = c.xy.length >> 1;
+    const xy = new Float64Array(2 * n);
+    for (let i = 0; i < n; i++) {
+      const x = c.xy[2 * i], y = c.xy[2 * i + 1];
+      xy[2 * i] = sense > 0 ? -y : y;
+      xy[2 * i + 1] = sense > 0 ? x : -x;
+    }
+    return { xy, bulge: c.bulge ? Float64Array.from(c.bulge) : null };
+  });
+}
+
 export interface Bounds {
   xmin: number;
   xmax: number;

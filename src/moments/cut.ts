@@ -9,8 +9,8 @@
  * case. The cut width is the summed length of the closing pieces, Σ x_entry − Σ x_exit.
  */
 import type { Contour, Region } from '../geometry/contour';
-import { arcFromChord } from '../geometry/contour';
-import { addCircularSegment, regionReference, shiftMoments, type RawMoments } from './kernel';
+import { arcFromChord, regionBounds } from '../geometry/contour';
+import { addCircularSegment, regionMomentsAbout, regionReference, shiftMoments, type RawMoments } from './kernel';
 
 export interface HalfPlaneMoments extends RawMoments {
   /** Total length of the cut line inside the region (the width b at the cut). */
@@ -149,26 +149,69 @@ function splitFlatArc(ax: number, ay: number, bx: number, by: number, phi: numbe
 }
 
 /**
- * Moments (about the origin) of the part of the region where y > yc, and the cut width b.
- * The work is done relative to a reference point on the cut line to keep sums well conditioned.
+ * A region prepared for many cuts: each loop's y-range and its whole moments (about its first
+ * vertex). A loop wholly above a cut adds its whole moments, a loop wholly below adds nothing,
+ * and only the loops the line crosses are split, so a cut through a plate with thousands of holes
+ * costs about the holes on that line.
  */
-export function momentsAbove(region: Region, yc: number): HalfPlaneMoments {
-  const [ox] = regionReference(region);
+export interface CutPlan {
+  readonly contours: readonly Contour[];
+  readonly ymin: Float64Array;
+  readonly ymax: Float64Array;
+  /** Per loop: A, ∫x, ∫y, ∫x², ∫y², ∫xy about its first vertex. */
+  readonly whole: readonly Float64Array[];
+}
+
+export function planCuts(region: Region): CutPlan {
+  const contours: Contour[] = [];
+  for (const c of region) if (c.xy.length >= 4) contours.push(c);
+  const ymin = new Float64Array(contours.length), ymax = new Float64Array(contours.length);
+  const whole: Float64Array[] = [];
+  contours.forEach((c, k) => {
+    const b = regionBounds([c]);
+    ymin[k] = b ? b.ymin : 0;
+    ymax[k] = b ? b.ymax : 0;
+    const m = regionMomentsAbout([c], c.xy[0], c.xy[1]);
+    whole.push(Float64Array.of(m.m00, m.m10, m.m01, m.m20, m.m02, m.m11));
+  });
+  return { contours, ymin, ymax, whole };
+}
+
+/**
+ * Moments of the part of the region where y > yc, about the point (ox, yc) on the cut line, and
+ * the cut width b. Nothing is moved to the origin, so the result keeps its digits however far
+ * the part lies from it: ∫(y − yc) dA is the first moment about the cut line itself.
+ */
+export function momentsAboveAbout(plan: CutPlan, yc: number, ox: number): HalfPlaneMoments {
   const acc = new Float64Array(6);
   let width = 0;
   const pieces: Piece[] = [];
-  for (const c of region) {
+  const { contours, ymin, ymax, whole } = plan;
+  for (let k = 0; k < contours.length; k++) {
+    if (ymax[k] <= yc) continue; // wholly below (or touching from below): nothing above the line
+    const c = contours[k];
+    if (ymin[k] > yc) {
+      // Wholly above: the loop's own moments, carried from its first vertex to (ox, yc).
+      const w = whole[k];
+      const dx = c.xy[0] - ox, dy = c.xy[1] - yc;
+      acc[0] += w[0];
+      acc[1] += w[1] + dx * w[0];
+      acc[2] += w[2] + dy * w[0];
+      acc[3] += w[3] + 2 * dx * w[1] + dx * dx * w[0];
+      acc[4] += w[4] + 2 * dy * w[2] + dy * dy * w[0];
+      acc[5] += w[5] + dx * w[2] + dy * w[1] + dx * dy * w[0];
+      continue;
+    }
     const n = c.xy.length >> 1;
-    if (n < 2) continue;
     pieces.length = 0;
     for (let i = 0; i < n; i++) splitSegment(c, i, ox, yc, pieces);
     const m = pieces.length;
-    for (let k = 0; k < m; k++) {
-      const p = pieces[k];
-      const prev = pieces[(k + m - 1) % m];
+    for (let q = 0; q < m; q++) {
+      const p = pieces[q];
+      const prev = pieces[(q + m - 1) % m];
       // Where the boundary enters the upper side a closing piece of the cut line ends; where it
-      // leaves, one starts. On the local cut line y = 0 every F_k above vanishes except F for
-      // nothing: all six G carry a factor y, so closing pieces add no moment, only width.
+      // leaves, one starts. All six G carry a factor y, so closing pieces on y = 0 add no
+      // moment, only width.
       if (p.above && !prev.above) width += p.x0;
       else if (!p.above && prev.above) width -= p.x0;
       if (!p.above) continue;
@@ -176,8 +219,18 @@ export function momentsAbove(region: Region, yc: number): HalfPlaneMoments {
       else arcDx(p.x0, p.y0, p.x1, p.y1, p.sweep, acc);
     }
   }
-  const local6 = { m00: acc[0], m10: acc[1], m01: acc[2], m20: acc[3], m02: acc[4], m11: acc[5] };
-  return { ...shiftMoments(local6, ox, yc), width };
+  return { m00: acc[0], m10: acc[1], m01: acc[2], m20: acc[3], m02: acc[4], m11: acc[5], width };
+}
+
+/**
+ * Moments (about the origin) of the part of the region where y > yc, and the cut width b.
+ * Far from the origin these origin moments are huge: quantities measured from the cut line or
+ * the centroid come from momentsAboveAbout instead.
+ */
+export function momentsAbove(region: Region, yc: number): HalfPlaneMoments {
+  const [ox] = regionReference(region);
+  const h = momentsAboveAbout(planCuts(region), yc, ox);
+  return { ...shiftMoments(h, ox, yc), width: h.width };
 }
 
 /** −∫ G dx along the straight piece, for each of the six G. Exact (Gauss–Legendre, 3 nodes, degree ≤ 5). */
