@@ -3,8 +3,8 @@
  * section by up to 1e8 leaves its centroidal moments, its plastic moduli and the Q of a cut
  * through its centroid unchanged, to 1e-9 relative.
  *
- * The sections are star-shaped loops with optional arcs and an optional hole, on a dyadic grid,
- * and the moves are whole numbers: every moved coordinate is then an exact double, so the check
+ * The sections are valid (simple) star-shaped loops with optional arcs and an optional hole, on
+ * a dyadic grid, and the moves are whole numbers: every moved coordinate is then an exact double, so the check
  * measures the engine rather than the rounding of the input.
  */
 import { describe, expect, it } from 'vitest';
@@ -14,17 +14,22 @@ import { cutSection, sectionProperties } from '../src/properties/section';
 
 const TOL = 1e-9;
 
-/** A star-shaped loop (vertices at increasing angles), with bulges, scaled by 2^k on a 2^k/1024 grid. */
+/**
+ * A valid section: a loop star-shaped about the origin (vertices at increasing angles), scaled
+ * by 2^k on a 2^k/1024 grid, whose edges may be arcs that stay inside their own wedge from the
+ * origin (so the loop never crosses itself), and optionally a circular hole about the origin
+ * clear of every edge.
+ */
 const section = fc
   .record({
     k: fc.integer({ min: -2, max: 10 }),
-    n: fc.integer({ min: 3, max: 12 }),
+    n: fc.integer({ min: 4, max: 12 }), // gaps between vertex angles stay under π: the origin is inside
     radii: fc.array(fc.integer({ min: 300, max: 1024 }), { minLength: 12, maxLength: 12 }),
     jitter: fc.array(fc.double({ min: 0.1, max: 0.9, noNaN: true }), { minLength: 12, maxLength: 12 }),
-    bulges: fc.array(fc.oneof(fc.constant(0), fc.double({ min: -0.3, max: 0.3, noNaN: true })), { minLength: 12, maxLength: 12 }),
+    bends: fc.array(fc.oneof(fc.constant(0), fc.double({ min: -1, max: 1, noNaN: true })), { minLength: 12, maxLength: 12 }),
     hole: fc.boolean(),
   })
-  .map(({ k, n, radii, jitter, bulges, hole }): Region => {
+  .map(({ k, n, radii, jitter, bends, hole }): Region => {
     const size = 2 ** k, grid = size / 1024;
     const xy: number[] = [];
     for (let i = 0; i < n; i++) {
@@ -32,10 +37,26 @@ const section = fc
       const r = (radii[i] / 1024) * size;
       xy.push(Math.round((r * Math.cos(t)) / grid) * grid, Math.round((r * Math.sin(t)) / grid) * grid);
     }
-    const outer = contourFrom(xy, bulges.slice(0, n));
-    if (!hole) return [outer];
-    // A hole well inside: the outer loop reaches in by at most 0.15 of a chord below its vertices.
-    return [outer, reverseContour(circleContour(grid * 3, -grid * 5, size / 16))];
+    const bulge: number[] = [];
+    let clear = Infinity; // distance from the origin to the nearest edge
+    for (let i = 0; i < n; i++) {
+      const ax = xy[2 * i], ay = xy[2 * i + 1], bx = xy[(2 * i + 2) % (2 * n)], by = xy[(2 * i + 3) % (2 * n)];
+      const L = Math.hypot(bx - ax, by - ay);
+      // Angles of the triangle (origin, a, b) at a and at b.
+      const angA = Math.acos(Math.max(-1, Math.min(1, (-ax * (bx - ax) - ay * (by - ay)) / (Math.hypot(ax, ay) * L))));
+      const angB = Math.acos(Math.max(-1, Math.min(1, (-bx * (ax - bx) - by * (ay - by)) / (Math.hypot(bx, by) * L))));
+      // An arc leaves its chord at half its sweep: inwards it must stay under both angles,
+      // outwards under their supplements, to stay in its wedge (with a margin of 0.9).
+      const limit = 0.9 * (bends[i] < 0 ? Math.min(angA, angB) : Math.min(Math.PI - angA, Math.PI - angB, Math.PI / 2));
+      const phi = 2 * limit * bends[i]; // positive: outwards for this CCW loop
+      bulge.push(Math.tan(phi / 4));
+      const chordDist = Math.abs(ax * by - ay * bx) / L;
+      clear = Math.min(clear, chordDist - (phi < 0 ? (L / 2) * Math.tan(-phi / 4) : 0));
+    }
+    const outer = contourFrom(xy, bulge);
+    const rh = Math.floor((0.5 * clear) / grid) * grid;
+    if (!hole || !(rh > 0)) return [outer];
+    return [outer, reverseContour(circleContour(0, 0, rh))];
   });
 
 const move = fc.tuple(fc.integer({ min: -1e8, max: 1e8 }), fc.integer({ min: -1e8, max: 1e8 }));

@@ -65,6 +65,18 @@ describe('vertices of different loops', () => {
     }
   });
 
+  it('the same hole while a cut through the outer circle sends every loop through the grid', () => {
+    // Cutting the segment x < −0.9 off the outer circle makes it meet another loop, so the
+    // hole's loop goes through clipper too; its vertex must still not move onto the outer
+    // circle's vertex at the same grid point. Circular segment of half-angle α = acos(0.9):
+    // A = r²(α − sinα cosα) (Roark Table A.1).
+    const r = 1, ri = 0.5, gap = 2e-8, hx = r - ri - gap;
+    const cut = polygonContour([[-2, -2], [-0.9, -2], [-0.9, 2], [-2, 2]]);
+    const out = booleanRegions([circleContour(0, 0, r)], [[circleContour(hx, 0, ri)], [cut]], 'difference');
+    const alpha = Math.acos(0.9);
+    close(regionMoments(out).m00, PI * r * r - PI * ri * ri - (alpha - Math.sin(alpha) * Math.cos(alpha)), TOL);
+  });
+
   it('two loops of one union that round to one grid point stay apart', () => {
     // A ring (R = 1, r = 0.5) and a disc of r = 0.5 − 2e-8 in its hole: they do not touch, so
     // the union is the three loops as they are (Roark Table A.1, hollow circle plus solid circle).
@@ -111,6 +123,24 @@ describe('every input vertex kept', () => {
   });
 });
 
+describe('edges shorter than the grid', () => {
+  it('a zigzag of 1e-9 edges inside one grid cell comes back vertex for vertex (collapsed vertices restored)', () => {
+    // A unit square whose bottom edge carries 41 vertices 2.5e-9 apart, alternately 1e-10 below
+    // the edge, united with a rectangle that overlaps the square: the zigzag is far below the
+    // grid (1/4e7 of the extent) and must come back as drawn. Area by the shoelace formula
+    // (Gere & Goodno, composite areas): the square's own area plus the rectangle's part outside it.
+    const pts: [number, number][] = [[0, 0]];
+    for (let i = 0; i <= 40; i++) pts.push([0.5 + i * 2.5e-9, i % 2 === 1 ? -1e-10 : 0]);
+    pts.push([1, 0], [1, 1], [0, 1]);
+    const sq = polygonContour(pts);
+    const out = booleanRegions([sq], [[polygonContour([[0.8, 0.2], [1.5, 0.2], [1.5, 0.6], [0.8, 0.6]])]], 'union');
+    const got = new Set<string>();
+    for (const c of out) for (let i = 0; i < c.xy.length; i += 2) got.add(`${c.xy[i]},${c.xy[i + 1]}`);
+    for (const [x, y] of pts) expect(got.has(`${x},${y}`), `vertex (${x}, ${y})`).toBe(true);
+    close(regionMoments(out).m00, regionMoments([sq]).m00 + 0.5 * 0.4, 1e-13);
+  });
+});
+
 describe('below what the grid resolves', () => {
   it('a very flat arc closed by its chord keeps its area (the flat arc that vanished)', () => {
     // Circular segment (Roark Table A.1) of half-angle α on a chord L: A = r²(α − sinα cosα)
@@ -128,6 +158,10 @@ describe('below what the grid resolves', () => {
       format: 'kern-section', version: 1, units: 'mm',
       shapes: [{ id: 's', type: 'path', start: [0, 0], segments: [{ to: [L, 0], via: [L / 2, -sag] }, { to: [0, 0] }] }],
     };
+    // Touching a square at its end (so it goes through the grid with it): still there.
+    const withSquare = booleanRegions([flat], [[polygonContour([[L, 0], [L + 1, 0], [L + 1, 1], [L, 1]])]], 'union');
+    close(regionMoments(withSquare).m00, A + 1, 1e-15);
+    close(regionMoments(withSquare.filter((c) => c.xy.length === 4)).m00, A, TOL);
     const ev = evaluateDocument(doc);
     expect(ev.props, ev.message ?? '').not.toBeNull();
     close(ev.props!.area, A, 1e-6); // the via point is rounded: 1e-6 is its own precision
@@ -139,6 +173,13 @@ describe('below what the grid resolves', () => {
     const lens = booleanRegions([circleContour(0, 0, 10)], [[circleContour(20 - 1e-8, 0, 10)]], 'intersection');
     expect(lens.length).toBe(1);
     close(regionMoments(lens).m00, 4.2163707365376757113e-12, TOL);
+    // The same with each circle drawn from its top point, so that no vertex lies in the lens:
+    // the lens is then two single chords on one pair of nodes (a digon) for clipper.
+    const fromTop = (cx: number, r: number) => contourFrom([cx, r, cx, -r], [1, 1]);
+    const lens2 = booleanRegions([fromTop(0, 10)], [[fromTop(20 - 1e-8, 10)]], 'intersection');
+    close(regionMoments(lens2).m00, 4.2163707365376757113e-12, TOL);
+    const rest2 = booleanRegions([fromTop(0, 10)], [[fromTop(20 - 1e-8, 10)]], 'difference');
+    close(regionMoments(rest2).m00, PI * 100 - 4.2163707365376757113e-12, 1e-14);
     // And the difference keeps the full circle less exactly that lens.
     const rest = booleanRegions([circleContour(0, 0, 10)], [[circleContour(20 - 1e-8, 0, 10)]], 'difference');
     close(regionMoments(rest).m00, PI * 100 - 4.2163707365376757113e-12, 1e-14);

@@ -2,7 +2,7 @@
  * Steps 1 and 2: exact carriers from the source contours, then every contact between carriers
  * (crossings, touches, overlaps) computed once and shared as an exact node by both sides.
  */
-import { arcFromChord, pushArc } from '../geometry/contour';
+import { arcFromBulge, pushArc } from '../geometry/contour';
 import {
   ARC, curveIntersections, distToCarrier, implicitAt, makeArc, makeLine, paramOf, polishIntersection,
   sameCurve, type Carrier,
@@ -64,9 +64,9 @@ export function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
         const phi = b !== 0 ? 4 * Math.atan(b) : 0;
         const rr = phi !== 0 ? L / (2 * Math.sin(Math.abs(phi) / 2)) : Infinity;
         if (phi !== 0 && rr <= FLAT_RADIUS * ctx.ext) {
-          const { cx, cy, r } = arcFromChord(ax, ay, bx, by, phi);
-          car = makeArc(id, g.group, ax, ay, bx, by, cx, cy, r, phi);
-        } else car = makeLine(id, g.group, ax, ay, bx, by, phi);
+          const { cx, cy, r } = arcFromBulge(ax, ay, bx, by, b);
+          car = makeArc(id, g.group, ax, ay, bx, by, cx, cy, r, phi, b);
+        } else car = makeLine(id, g.group, ax, ay, bx, by, phi, b);
         car.n0 = nodes[i];
         car.n1 = nodes[j];
         ctx.carriers.push(car);
@@ -78,7 +78,9 @@ export function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
         ctx.ncar[nodes[j]].push(id);
         ids.push(id);
       }
+      for (let k = 0; k < ids.length; k++) ctx.loopOf.push(ctx.loops.length);
       ctx.loops.push({ group: g.group, ids });
+      ctx.touched.push(0);
       for (let k = 0; k < ids.length; k++) {
         ctx.loopLo.push(ids[0]);
         ctx.loopHi.push(ids[ids.length - 1]);
@@ -99,17 +101,24 @@ function addSplit(ctx: Ctx, c: Carrier, node: number): void {
   ctx.ncar[node].push(c.id);
 }
 
+/** Carriers a and b meet away from a vertex they share: their loops interact. */
+function touch(ctx: Ctx, a: Carrier, b: Carrier): void {
+  ctx.contact = true;
+  ctx.touched[ctx.loopOf[a.id]] = 1;
+  ctx.touched[ctx.loopOf[b.id]] = 1;
+}
+
 /** A common point p of carriers a and b: share it as one exact node. */
 function sharePoint(ctx: Ctx, a: Carrier, b: Carrier, x: number, y: number): void {
   const ea = endpointNode(ctx, a, x, y), eb = endpointNode(ctx, b, x, y);
   if (ea >= 0 && eb >= 0) {
     if (find(ctx, ea) !== find(ctx, eb)) {
       union(ctx, ea, eb);
-      ctx.contact = true;
+      touch(ctx, a, b);
     }
     return;
   }
-  ctx.contact = true;
+  touch(ctx, a, b);
   if (ea >= 0) addSplit(ctx, b, ea);
   else if (eb >= 0) addSplit(ctx, a, eb);
   else {

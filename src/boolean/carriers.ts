@@ -3,6 +3,7 @@
  * that every boolean output edge is traced back to, with parameters, distances, exact
  * intersections and the exact point classification used to settle ties.
  */
+import { arcPointAtAngle } from '../geometry/contour';
 
 export const LINE = 0;
 export const ARC = 1;
@@ -91,7 +92,7 @@ export function polishIntersection(a: Carrier, b: Carrier, x: number, y: number)
 /** One constructor for both kinds, so every carrier has the same shape (fast property access). */
 function makeCarrier(
   id: number, kind: 0 | 1, group: number, ax: number, ay: number, bx: number, by: number,
-  cx: number, cy: number, r: number, phi: number, flat: number,
+  cx: number, cy: number, r: number, phi: number, flat: number, bulge: number,
 ): Carrier {
   const dx = bx - ax, dy = by - ay;
   const L = Math.hypot(dx, dy);
@@ -99,25 +100,40 @@ function makeCarrier(
   const sw = kind === ARC ? phi : flat;
   const sg = sw >= 0 ? 1 : -1;
   const half = Math.abs(sw) / 2;
+  // sin and cos of the half sweep from the bulge itself (exact for a half circle, b = ±1).
+  const b2 = bulge * bulge;
+  const sinHalf = bulge === 0 ? Math.sin(half) : (2 * Math.abs(bulge)) / (1 + b2);
+  const cosHalf = bulge === 0 ? Math.cos(half) : (1 - b2) / (1 + b2);
   const t0 = kind === ARC ? Math.atan2(ay - cy, ax - cx) : 0;
   return {
     id, kind, group, ax, ay, bx, by, cx, cy, r, phi, t0, tm: t0 + phi / 2, flat,
     mx: (ax + bx) / 2, my: (ay + by) / 2, nx: (sg * dy) / Ls, ny: (-sg * dx) / Ls,
-    ks: half === 0 ? 0 : Math.sin(half) / Ls, kc: half === 0 ? 1 : Math.cos(half),
+    ks: half === 0 ? 0 : sinHalf / Ls, kc: half === 0 ? 1 : cosHalf,
     len: kind === ARC ? r * Math.abs(phi) : L, n0: -1, n1: -1,
     xmin: ax < bx ? ax : bx, xmax: ax > bx ? ax : bx, ymin: ay < by ? ay : by, ymax: ay > by ? ay : by,
   };
 }
 
-export function makeLine(id: number, group: number, ax: number, ay: number, bx: number, by: number, flat = 0): Carrier {
-  return makeCarrier(id, LINE, group, ax, ay, bx, by, 0, 0, 0, 0, flat);
+/** A line; `flat` (with its source bulge) for a nearly flat arc kept as its chord. */
+export function makeLine(id: number, group: number, ax: number, ay: number, bx: number, by: number, flat = 0, bulge = 0): Carrier {
+  const c = makeCarrier(id, LINE, group, ax, ay, bx, by, 0, 0, 0, 0, flat, flat === 0 ? 0 : bulge);
+  if (flat !== 0) {
+    // The box holds the flat arc's bulge too (its height above the chord is (L/2)·tan(sweep/4)).
+    const h = (c.len / 2) * Math.abs(Math.tan(flat / 4));
+    c.xmin -= h;
+    c.xmax += h;
+    c.ymin -= h;
+    c.ymax += h;
+  }
+  return c;
 }
 
+/** An arc of sweep phi (at most π in size); `bulge` = tan(phi/4) as given, when known. */
 export function makeArc(
   id: number, group: number, ax: number, ay: number, bx: number, by: number,
-  cx: number, cy: number, r: number, phi: number,
+  cx: number, cy: number, r: number, phi: number, bulge = 0,
 ): Carrier {
-  const c = makeCarrier(id, ARC, group, ax, ay, bx, by, cx, cy, r, phi, 0);
+  const c = makeCarrier(id, ARC, group, ax, ay, bx, by, cx, cy, r, phi, 0, bulge);
   // Axis extremes inside the sweep.
   const half = Math.abs(phi) / 2;
   for (let k = 0; k < 4; k++) {
@@ -151,6 +167,17 @@ export function pointAt(c: Carrier, u: number): [number, number] {
   return [c.cx + c.r * Math.cos(t), c.cy + c.r * Math.sin(t)];
 }
 
+/**
+ * Point of the true curve at parameter u: pointAt for lines and arcs; for a flat arc kept as its
+ * chord, the arc's own point over the chord point at u (chord frame, no centre involved).
+ */
+export function curvePoint(c: Carrier, u: number): [number, number] {
+  if (c.kind === ARC || c.flat === 0) return pointAt(c, u);
+  const sa = Math.sin(Math.abs(c.flat) / 2);
+  const th = Math.asin(Math.max(-1, Math.min(1, (2 * u - 1) * sa)));
+  return arcPointAtAngle(c.ax, c.ay, c.bx, c.by, c.flat, th);
+}
+
 /** Distance from (x, y) to the carrier's full line or full circle. */
 export function distToCurve(c: Carrier, x: number, y: number): number {
   if (c.kind === LINE) {
@@ -173,7 +200,12 @@ export function distToCarrier(c: Carrier, x: number, y: number): number {
 export function sameCurve(a: Carrier, b: Carrier, tol: number): boolean {
   if (a.kind !== b.kind) return false;
   if (a.kind === ARC) return Math.abs(a.r - b.r) <= tol && Math.hypot(a.cx - b.cx, a.cy - b.cy) <= tol;
-  return distToCurve(a, b.ax, b.ay) <= tol && distToCurve(a, b.bx, b.by) <= tol;
+  if (!(distToCurve(a, b.ax, b.ay) <= tol && distToCurve(a, b.bx, b.by) <= tol)) return false;
+  if (a.flat === 0 && b.flat === 0) return true;
+  // A flat arc is not its chord: the middle of b's true curve must lie on a's true curve too.
+  const [mx, my] = curvePoint(b, 0.5);
+  const [f, gx, gy] = implicitAt(a, mx, my);
+  return Math.abs(f) <= tol * Math.hypot(gx, gy);
 }
 
 /**
@@ -255,20 +287,30 @@ export function nearestPoint(pts: number[], x: number, y: number): number {
 /**
  * Winding contribution of carrier c about point (x, y): the crossing rule for its chord plus the
  * circular segment between chord and arc (+1 or -1 when the point lies inside it).
+ *
+ * The half-open crossing rule counts an end exactly at the ray's height as below the point, as
+ * if the point sat at (x + ε², y + ε). Every test here uses that same nudged point, so a point on
+ * a chord's line (the diameter of a circle made of two half arcs, say) is inside exactly one of
+ * the pieces the loop is split into, and the pieces still add up to the loop's winding.
  */
 export function windingOf(c: Carrier, x: number, y: number): number {
   let w = 0;
   const { ax, ay, bx, by } = c;
+  let side = (bx - ax) * (y - ay) - (x - ax) * (by - ay);
+  if (side === 0) side = bx !== ax ? bx - ax : ay - by;
   if (ay <= y) {
-    if (by > y && (bx - ax) * (y - ay) - (x - ax) * (by - ay) > 0) w++;
-  } else if (by <= y && (bx - ax) * (y - ay) - (x - ax) * (by - ay) < 0) w--;
+    if (by > y && side > 0) w++;
+  } else if (by <= y && side < 0) w--;
   if (c.kind === ARC) {
-    if (Math.hypot(x - c.cx, y - c.cy) < c.r) {
-      // Inside the circle and on the arc's side of the chord: inside the circular segment.
-      const side = (bx - ax) * (y - ay) - (by - ay) * (x - ax);
-      // For phi > 0 the arc bulges to the right of a->b.
-      if ((c.phi > 0 && side < 0) || (c.phi < 0 && side > 0)) w += c.phi > 0 ? 1 : -1;
-    }
+    const d = Math.hypot(x - c.cx, y - c.cy);
+    const inCircle = d < c.r || (d === c.r && (y < c.cy || (y === c.cy && x < c.cx)));
+    // Inside the circle and on the arc's side of the chord (for phi > 0 the arc bulges to the
+    // right of a->b): inside the circular segment.
+    if (inCircle && ((c.phi > 0 && side < 0) || (c.phi < 0 && side > 0))) w += c.phi > 0 ? 1 : -1;
+  } else if (c.flat !== 0) {
+    // A flat arc kept as its chord: its thin segment is where the point lies on the bulge side
+    // of the chord and inside the circle (implicit form below zero), with no centre involved.
+    if (((c.flat > 0 && side < 0) || (c.flat < 0 && side > 0)) && implicitAt(c, x, y)[0] < 0) w += c.flat > 0 ? 1 : -1;
   }
   return w;
 }

@@ -35,11 +35,17 @@ function mergeRecord(ctx: Ctx, id: number, x: number, y: number, exact: boolean,
   ctx.rCar[id] = merged;
 }
 
-/** Step 3: integer chord paths, one per source contour. */
-export function buildPaths(ctx: Ctx): { subj: IntPoint[][]; clip: IntPoint[][] } {
+/** A map key for an integer point (numbers while they stay exact, text beyond). */
+function pointKey(X: number, Y: number): number | string {
+  return Math.abs(X) < 4e7 && Math.abs(Y) < 4e7 ? X * 1e8 + Y : `${X},${Y}`;
+}
+
+/** Step 3: integer chord paths, one per source contour of the given loops. */
+export function buildPaths(ctx: Ctx, loops: readonly number[]): { subj: IntPoint[][]; clip: IntPoint[][] } {
   const subj: IntPoint[][] = [], clip: IntPoint[][] = [];
   const cs = ctx.carriers;
-  for (const loop of ctx.loops) {
+  for (const l of loops) {
+    const loop = ctx.loops[l];
     const path: IntPoint[] = [];
     for (const id of loop.ids) {
       const c = cs[id];
@@ -60,7 +66,10 @@ export function buildPaths(ctx: Ctx): { subj: IntPoint[][]; clip: IntPoint[][] }
       for (let k = 0; k + 1 < seq.length; k++) {
         const nd = seq[k].n;
         pushVertex(ctx, path, ctx.nx[nd], ctx.ny[nd], true, ctx.ncar[nd]);
-        if (c.kind !== ARC) continue;
+        if (c.kind !== ARC) {
+          ctx.chordPieces.push(id, nd, seq[k + 1].n);
+          continue;
+        }
         const ua = seq[k].u, ub = seq[k + 1].u;
         const dphi = Math.abs(c.phi) * (ub - ua);
         // Finer chords only when both sides are demanded (see arrangement.ts).
@@ -70,6 +79,7 @@ export function buildPaths(ctx: Ctx): { subj: IntPoint[][]; clip: IntPoint[][] }
         let cnt = Math.ceil(dphi / step);
         // At least two chords while the piece is visibly curved at the integer scale.
         if (cnt < 2 && c.r * (1 - Math.cos(dphi / 2)) * ctx.scale > 0.5) cnt = 2;
+        if (cnt <= 1) ctx.chordPieces.push(id, nd, seq[k + 1].n);
         const half = dphi / Math.max(cnt, 1) / 2;
         const dev = ctx.side[id] === CIRCUMSCRIBE ? 1.5 * c.r * (1 / Math.cos(half) - 1) : c.r * (1 - Math.cos(half));
         if (dev > ctx.chordSag[id]) ctx.chordSag[id] = dev;
@@ -102,21 +112,27 @@ export function buildPaths(ctx: Ctx): { subj: IntPoint[][]; clip: IntPoint[][] }
     if (path.length < 3) continue;
     (loop.group === 0 ? subj : clip).push(path);
   }
-  // Records of different loops at one integer point (clipper keeps one tag there): each gets
-  // the carriers of all of them.
-  const at = new Map<number, number>();
+  // Records of different loops at one integer point stay apart (each keeps its own exact point
+  // and carriers); every one of them learns the others, because clipper keeps one tag there.
+  const at = new Map<number | string, number[]>();
   for (let r = 0; r < ctx.rX.length; r++) {
-    const key = ctx.rX[r] * 1e8 + ctx.rY[r];
-    const first = at.get(key);
-    if (first === undefined) at.set(key, r);
-    else {
-      const merged = ctx.rCar[first].slice();
-      for (const c of ctx.rCar[r]) if (!merged.includes(c)) merged.push(c);
-      ctx.rCar[first] = merged;
-      ctx.rCar[r] = merged;
-      ctx.shared.push(first, r);
+    const key = pointKey(ctx.rX[r], ctx.rY[r]);
+    const list = at.get(key);
+    if (list) list.push(r);
+    else at.set(key, [r]);
+  }
+  for (let r = 0; r < ctx.rX.length; r++) {
+    ctx.rAll.push(ctx.rCar[r]);
+    ctx.rAlt.push(null);
+  }
+  for (const list of at.values()) {
+    if (list.length < 2) continue;
+    const all: number[] = [];
+    for (const r of list) for (const c of ctx.rCar[r]) if (!all.includes(c)) all.push(c);
+    for (const r of list) {
+      ctx.rAll[r] = all;
+      ctx.rAlt[r] = list;
     }
   }
-  for (let k = 0; k < ctx.shared.length; k += 2) ctx.rCar[ctx.shared[k + 1]] = ctx.rCar[ctx.shared[k]];
   return { subj, clip };
 }

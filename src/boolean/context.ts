@@ -2,6 +2,7 @@
  * Shared state of one boolean call: tolerances, carriers, exact nodes (with union-find for
  * coincident points), per-carrier split points and the vertex records behind clipper's Z tags.
  */
+import type Flatbush from 'flatbush';
 import type { Carrier } from './carriers';
 import type { Contour } from '../geometry/contour';
 
@@ -19,6 +20,22 @@ export const FLAT_RADIUS = 1e5;
 /** Exact-geometry tolerance relative to the extent: points closer than this are one point. */
 export const REL_EPS = 1e-10;
 
+/**
+ * Two carrier pieces joining the same two nodes with one chord each: clipper sees one edge
+ * where the exact geometry has a thin two-sided loop (a lens, a flat arc on its own chord).
+ */
+export interface Digon {
+  /** The carriers and the nodes they join. */
+  c1: number;
+  c2: number;
+  n1: number;
+  n2: number;
+  /** The carrier that bounds the result when exactly one of them does, else −1. */
+  pick: number;
+  /** The digon's inside belongs to the result. */
+  inside: boolean;
+}
+
 export interface SourceGroup {
   contours: readonly Contour[];
   group: number;
@@ -35,6 +52,14 @@ export interface Ctx {
   carriers: Carrier[];
   /** Per contour: the carrier ids in order. */
   loops: { group: number; ids: number[] }[];
+  /** Per carrier: its loop (index into loops). */
+  loopOf: number[];
+  /** Per loop: 1 when it meets another loop or itself anywhere but at its own vertices. */
+  touched: number[];
+  /** The carriers' spatial index (spatial.ts), built on first use. */
+  index: Flatbush | null;
+  /** Largest carrier tolerance of the trace (trace.ts), −1 until computed. */
+  maxTol: number;
   /** Per carrier: first and last carrier id of its loop (ids of one loop are consecutive). */
   loopLo: number[];
   loopHi: number[];
@@ -58,9 +83,20 @@ export interface Ctx {
   rX: number[];
   rY: number[];
   rExact: boolean[];
+  /** Per record: the carriers through its own exact point. */
   rCar: number[][];
-  /** Pairs (first record, later record) of records at the same integer point. */
-  shared: number[];
+  /**
+   * Per record: the carriers of every record at its integer point (clipper keeps one tag where
+   * points of several loops round together; the edges there may belong to any of them).
+   */
+  rAll: number[][];
+  /** Per record: every record at its integer point, when there are several (else null). */
+  rAlt: (number[] | null)[];
+  /** Carrier pieces drawn as one single chord: triples (carrier, from node, to node). */
+  chordPieces: number[];
+  /** Sub-grid two-sided loops (digons.ts) found among those pieces. */
+  digons: Digon[];
+  digonsOf: Map<number, Digon[]>;
   // ZFill records: four vertex Zs per crossing.
   zf: number[];
 }

@@ -9,6 +9,9 @@
  *   4. Clipper runs; new crossings get Z through ZFillFunction (side table of crossing edges).
  *   5. Tracing: each output edge is traced to its carrier; runs on one carrier become one exact
  *      segment; run ends are placed on exact nodes or exact carrier intersections.
+ *
+ * Loops that touch no other loop skip steps 3 to 5: exact winding numbers settle them
+ * (isolated.ts). Only clusters of loops that meet go through the grid.
  */
 import ClipperLib from 'clipper-lib';
 import type { IntPoint } from 'clipper-lib';
@@ -16,6 +19,9 @@ import type { Contour, Region } from '../geometry/contour';
 import { buildArrangement, buildCarriers } from './arrangement';
 import { buildPaths } from './chords';
 import { INT_RANGE, REL_EPS, type Ctx, type Mode, type SourceGroup } from './context';
+import { digonLoops, findDigons } from './digons';
+import { chooseGrid } from './grid';
+import { partitionLoops, settleFreeLoops } from './isolated';
 import { tracePath } from './trace';
 
 export type { Mode, SourceGroup } from './context';
@@ -54,29 +60,36 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
   const scale = INT_RANGE / ext;
   const ctx: Ctx = {
     mode, ext, eps: REL_EPS * ext, unit: 1 / scale, ox: (xmin + xmax) / 2, oy: (ymin + ymax) / 2, scale,
-    carriers: [], loops: [], nx: [], ny: [], ncar: [], parent: [], splits: [], sag: [], side: [], chordSag: [], contact: false, loopLo: [], loopHi: [], trustLoops: mode !== 'evenodd',
-    rx: [], ry: [], rX: [], rY: [], rExact: [], rCar: [], shared: [], zf: [],
+    carriers: [], loops: [], loopOf: [], touched: [], index: null, maxTol: -1, nx: [], ny: [], ncar: [], parent: [], splits: [], sag: [], side: [], chordSag: [], contact: false, loopLo: [], loopHi: [], trustLoops: mode !== 'evenodd',
+    rx: [], ry: [], rX: [], rY: [], rExact: [], rCar: [], rAll: [], rAlt: [], chordPieces: [], digons: [], digonsOf: new Map(), zf: [],
   };
   buildCarriers(ctx, groups);
   buildArrangement(ctx);
-  const { subj, clip } = buildPaths(ctx);
-  ClipperLib.use_xyz = true; // module-wide flag: set again in case another user turned it off
-  const cpr = new ClipperLib.Clipper();
-  cpr.ZFillFunction = (b1, t1, b2, t2, pt) => {
-    ctx.zf.push(b1.Z ?? 0, t1.Z ?? 0, b2.Z ?? 0, t2.Z ?? 0);
-    pt.Z = -(ctx.zf.length / 4);
-  };
-  const PT = ClipperLib.PolyType, PF = ClipperLib.PolyFillType, CT = ClipperLib.ClipType;
-  if (subj.length) cpr.AddPaths(subj, PT.ptSubject, true);
-  if (clip.length) cpr.AddPaths(clip, PT.ptClip, true);
-  const sol: IntPoint[][] = [];
-  const ct = mode === 'union' || mode === 'evenodd' ? CT.ctUnion : mode === 'difference' ? CT.ctDifference : CT.ctIntersection;
-  const fill = mode === 'evenodd' ? PF.pftEvenOdd : PF.pftNonZero;
-  cpr.Execute(ct, sol, fill, fill);
+  const { clipped, free } = partitionLoops(ctx);
   const region: Contour[] = [];
-  for (const p of sol) {
-    const c = tracePath(ctx, p);
-    if (c) region.push(c);
+  if (clipped.length) {
+    chooseGrid(ctx, clipped);
+    const { subj, clip } = buildPaths(ctx, clipped);
+    findDigons(ctx);
+    ClipperLib.use_xyz = true; // module-wide flag: set again in case another user turned it off
+    const cpr = new ClipperLib.Clipper();
+    cpr.ZFillFunction = (b1, t1, b2, t2, pt) => {
+      ctx.zf.push(b1.Z ?? 0, t1.Z ?? 0, b2.Z ?? 0, t2.Z ?? 0);
+      pt.Z = -(ctx.zf.length / 4);
+    };
+    const PT = ClipperLib.PolyType, PF = ClipperLib.PolyFillType, CT = ClipperLib.ClipType;
+    if (subj.length) cpr.AddPaths(subj, PT.ptSubject, true);
+    if (clip.length) cpr.AddPaths(clip, PT.ptClip, true);
+    const sol: IntPoint[][] = [];
+    const ct = mode === 'union' || mode === 'evenodd' ? CT.ctUnion : mode === 'difference' ? CT.ctDifference : CT.ctIntersection;
+    const fill = mode === 'evenodd' ? PF.pftEvenOdd : PF.pftNonZero;
+    cpr.Execute(ct, sol, fill, fill);
+    for (const p of sol) {
+      const c = tracePath(ctx, p);
+      if (c) region.push(c);
+    }
+    for (const c of digonLoops(ctx)) region.push(c);
   }
+  for (const c of settleFreeLoops(ctx, free)) region.push(c);
   return { region, contact: ctx.contact };
 }

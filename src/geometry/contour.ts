@@ -77,6 +77,23 @@ export function arcFromChord(ax: number, ay: number, bx: number, by: number, phi
   return { cx, cy, r, sweep: phi };
 }
 
+/**
+ * Centre and radius of the arc from a to b with bulge b = tan(sweep/4), from the bulge itself:
+ * with α the half sweep, cos α = (1 − b²)/(1 + b²) and sin α = 2|b|/(1 + b²), so a half circle
+ * (b = ±1) has its centre exactly on the chord's middle, where going through the rounded sweep
+ * 4·atan(b) leaves it 1e-16·r off (which a near-tangent intersection magnifies).
+ */
+export function arcFromBulge(ax: number, ay: number, bx: number, by: number, bulge: number) {
+  const dx = bx - ax, dy = by - ay;
+  const L = Math.hypot(dx, dy);
+  const ab = Math.abs(bulge), b2 = bulge * bulge;
+  const r = (L * (1 + b2)) / (4 * ab);
+  const d = (L * (1 - b2)) / (4 * ab); // r cos α, negative past a half circle
+  const s = bulge > 0 ? 1 : -1;
+  const ux = (s * dy) / L, uy = (-s * dx) / L;
+  return { cx: (ax + bx) / 2 - ux * d, cy: (ay + by) / 2 - uy * d, r, sweep: 4 * Math.atan(bulge) };
+}
+
 /** Signed sweep of the arc that starts at a, passes through m and ends at b; NaN if collinear. */
 export function sweepThrough(ax: number, ay: number, mx: number, my: number, bx: number, by: number): number {
   // The inscribed-angle theorem: the sweep is twice the angle between the chords at the middle

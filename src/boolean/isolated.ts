@@ -1,0 +1,94 @@
+/**
+ * Loops that meet no other loop need no grid. The arrangement knows exactly which loops touch
+ * (another loop or themselves, anywhere but at their own vertices); a loop that touches nothing
+ * has every other loop's winding constant along it, so whether it bounds the result follows
+ * from two exact winding numbers, one on each side of it. Such a loop comes back exactly as it
+ * went in (turned round when the result lies on its right), however thin or close to another
+ * loop it is: a hole 2e-8·r inside its outer circle, a disc in a ring's hole, a flat arc on its
+ * own chord, a plate with thousands of separate holes, a simple polygon of any size.
+ *
+ * Only the loops that touch, and the untouched loops whose boxes meet theirs (they may enclose
+ * them, and clipper must then see them), go to clipper. No loop left out encloses a point of a
+ * loop that goes in (its box would meet that loop's box), so clipper's answer along its loops is
+ * the whole answer there.
+ */
+import Flatbush from 'flatbush';
+import { reverseContour, type Contour } from '../geometry/contour';
+import { regionMomentsAbout } from '../moments/kernel';
+import { ARC, type Carrier } from './carriers';
+import type { Ctx } from './context';
+import { inResult, windingsAt } from './spatial';
+
+/** Loop indices: `clipped` go through clipper, `free` are settled exactly. */
+export function partitionLoops(ctx: Ctx): { clipped: number[]; free: number[] } {
+  const L = ctx.loops.length;
+  const box = new Float64Array(4 * L);
+  for (let l = 0; l < L; l++) {
+    let x0 = Infinity, y0 = Infinity, x1 = -Infinity, y1 = -Infinity;
+    for (const id of ctx.loops[l].ids) {
+      const c = ctx.carriers[id];
+      if (c.xmin < x0) x0 = c.xmin;
+      if (c.ymin < y0) y0 = c.ymin;
+      if (c.xmax > x1) x1 = c.xmax;
+      if (c.ymax > y1) y1 = c.ymax;
+    }
+    box.set([x0, y0, x1, y1], 4 * l);
+  }
+  const touched: number[] = [];
+  for (let l = 0; l < L; l++) if (ctx.touched[l]) touched.push(l);
+  if (touched.length === 0) return { clipped: [], free: [...Array(L).keys()] };
+  const idx = new Flatbush(touched.length);
+  for (const l of touched) idx.add(box[4 * l], box[4 * l + 1], box[4 * l + 2], box[4 * l + 3]);
+  idx.finish();
+  const clipped: number[] = [], free: number[] = [];
+  const pad = ctx.eps;
+  for (let l = 0; l < L; l++) {
+    const meets = ctx.touched[l] || idx.collides(box[4 * l] - pad, box[4 * l + 1] - pad, box[4 * l + 2] + pad, box[4 * l + 3] + pad);
+    (meets ? clipped : free).push(l);
+  }
+  return { clipped, free };
+}
+
+/** The loop's exact contour, from its carriers (arcs over 180° already split in two). */
+export function loopContour(ctx: Ctx, l: number): Contour {
+  const ids = ctx.loops[l].ids;
+  const xy = new Float64Array(2 * ids.length);
+  const bulge = new Float64Array(ids.length);
+  let anyArc = false;
+  ids.forEach((id, k) => {
+    const c: Carrier = ctx.carriers[id];
+    xy[2 * k] = c.ax;
+    xy[2 * k + 1] = c.ay;
+    const sweep = c.kind === ARC ? c.phi : c.flat;
+    if (sweep !== 0) {
+      bulge[k] = Math.tan(sweep / 4);
+      anyArc = true;
+    }
+  });
+  return { xy, bulge: anyArc ? bulge : null };
+}
+
+/**
+ * The free loops that bound the result, each oriented with the result on its left. The other
+ * loops' windings are taken at the loop's first vertex (no other loop passes there); the loop's
+ * own winding steps by +1 from its right to its left, from 0 outside it.
+ */
+export function settleFreeLoops(ctx: Ctx, free: readonly number[]): Contour[] {
+  const out: Contour[] = [];
+  for (const l of free) {
+    const c = loopContour(ctx, l);
+    if (c.xy.length < 4) continue;
+    const A = regionMomentsAbout([c], c.xy[0], c.xy[1]).m00;
+    if (!(A !== 0) || !Number.isFinite(A)) continue;
+    const [w0, w1] = windingsAt(ctx, c.xy[0], c.xy[1], (k) => ctx.loopOf[k.id] === l);
+    // CCW (A > 0): left is inside (own winding 1), right outside (0). CW: left outside (0),
+    // right inside (−1).
+    const right = A > 0 ? 0 : -1, left = right + 1;
+    const g = ctx.loops[l].group;
+    const inLeft = inResult(ctx, g === 0 ? w0 + left : w0, g === 0 ? w1 : w1 + left);
+    const inRight = inResult(ctx, g === 0 ? w0 + right : w0, g === 0 ? w1 : w1 + right);
+    if (inLeft === inRight) continue;
+    out.push(inLeft ? c : reverseContour(c));
+  }
+  return out;
+}
