@@ -12,17 +12,36 @@ import { ARC, curvePoint, paramOf, sameCurve, wrapAngle, type Carrier } from './
 import { find, type Ctx } from './context';
 import { classify } from './spatial';
 
-/** Finds the digons among the single-chord pieces and settles each (before tracing). */
+/**
+ * Finds the digons among the single-chord pieces and settles each (before tracing). Two plain
+ * line pieces on one pair of nodes are one segment, never a digon: only pairs with an arc or a
+ * flat arc in them are looked for, so the many line pieces of a dense outline cost one lookup.
+ */
 export function findDigons(ctx: Ctx): void {
-  const byPair = new Map<string, number[]>();
   const P = ctx.chordPieces;
-  for (let k = 0; k < P.length; k += 3) {
+  const nn = ctx.nx.length;
+  const pairKey = (k: number): number => {
     const a = find(ctx, P[k + 1]), b = find(ctx, P[k + 2]);
-    if (a === b) continue;
-    const key = a < b ? `${a},${b}` : `${b},${a}`;
+    return a === b ? -1 : a < b ? a * nn + b : b * nn + a;
+  };
+  const plain = (k: number): boolean => {
+    const c = ctx.carriers[P[k]];
+    return c.kind !== ARC && c.flat === 0;
+  };
+  const byPair = new Map<number, number[]>();
+  for (let k = 0; k < P.length; k += 3) {
+    if (plain(k)) continue;
+    const key = pairKey(k);
+    if (key < 0) continue;
     const list = byPair.get(key);
     if (list) list.push(k);
     else byPair.set(key, [k]);
+  }
+  if (byPair.size === 0) return;
+  for (let k = 0; k < P.length; k += 3) {
+    if (!plain(k)) continue;
+    const list = byPair.get(pairKey(k));
+    if (list) list.push(k);
   }
   for (const list of byPair.values()) {
     if (list.length < 2) continue;

@@ -14,8 +14,8 @@ const NODE_UNITS = 8;
 /** Finest grid: integer coordinates up to this size keep clipper's double arithmetic exact to well under a unit. */
 const FINE_RANGE = 1e12;
 
-/** Cells per row in the bucket key (the extent spans INT_RANGE / NODE_UNITS cells at most). */
-const CELL_KEY = 1e8;
+/** Nodes kept per cell for comparison. */
+const CROWD = 16;
 
 /** Sets ctx.scale and ctx.unit for the loops that go through clipper. */
 export function chooseGrid(ctx: Ctx, loops: readonly number[]): void {
@@ -30,42 +30,65 @@ export function chooseGrid(ctx: Ctx, loops: readonly number[]): void {
 
 /**
  * The smallest distance between two distinct nodes (roots) of the given loops, if below `limit`
- * (else `limit`): nodes are bucketed in cells of size `limit`, and only neighbouring cells are
- * compared, so the work is linear in the node count for any input.
+ * (else `limit`). Nodes are hashed into cells of size `limit` (open addressing on typed arrays,
+ * chains through `next`) and each is compared with the nodes of its 3 × 3 cells, so the work is
+ * linear in the node count. A cell holding many nodes is below the grid wherever they sit: past
+ * CROWD of them, further ones are not compared.
  */
 function closestNodes(ctx: Ctx, loops: readonly number[], limit: number): number {
-  const seen = new Set<number>();
-  const cells = new Map<number, number[]>();
-  let best = limit;
-  const visit = (nd: number) => {
+  const nn = ctx.nx.length;
+  const mark = new Uint8Array(nn);
+  const roots: number[] = [];
+  const take = (nd: number) => {
     const r = find(ctx, nd);
-    if (seen.has(r)) return;
-    seen.add(r);
+    if (!mark[r]) {
+      mark[r] = 1;
+      roots.push(r);
+    }
+  };
+  for (const l of loops) {
+    for (const id of ctx.loops[l].ids) {
+      take(ctx.carriers[id].n0);
+      for (const s of ctx.splits[id] ?? []) take(s);
+    }
+  }
+  const m = roots.length;
+  let size = 1;
+  while (size < 2 * m) size <<= 1;
+  const ci = new Int32Array(size), cj = new Int32Array(size), head = new Int32Array(size).fill(-1), count = new Int32Array(size);
+  const next = new Int32Array(m).fill(-1);
+  const slot = (i: number, j: number, insert: boolean): number => {
+    let h = (Math.imul(i, 0x27d4eb2d) ^ Math.imul(j, 0x165667b1)) & (size - 1);
+    for (;;) {
+      if (head[h] < 0) return insert ? h : -1;
+      if (ci[h] === i && cj[h] === j) return h;
+      h = (h + 1) & (size - 1);
+    }
+  };
+  let best = limit;
+  for (let k = 0; k < m; k++) {
+    const r = roots[k];
     const x = ctx.nx[r], y = ctx.ny[r];
     const i = Math.floor((x - ctx.ox) / limit), j = Math.floor((y - ctx.oy) / limit);
     for (let di = -1; di <= 1; di++) {
       for (let dj = -1; dj <= 1; dj++) {
-        const list = cells.get((i + di) * CELL_KEY + (j + dj));
-        if (!list) continue;
-        for (const o of list) {
-          const dd = Math.hypot(ctx.nx[o] - x, ctx.ny[o] - y);
-          if (dd > 0 && dd < best) best = dd;
+        const h = slot(i + di, j + dj, false);
+        if (h < 0) continue;
+        for (let o = head[h]; o >= 0; o = next[o]) {
+          const q = roots[o];
+          const d = Math.hypot(ctx.nx[q] - x, ctx.ny[q] - y);
+          if (d > 0 && d < best) best = d;
         }
       }
     }
-    const key = i * CELL_KEY + j;
-    const list = cells.get(key);
-    if (list) {
-      // A crowded cell is below the grid wherever its nodes sit: comparing more adds nothing.
-      if (list.length < 16) list.push(r);
-    } else cells.set(key, [r]);
-  };
-  for (const l of loops) {
-    for (const id of ctx.loops[l].ids) {
-      const c = ctx.carriers[id];
-      visit(c.n0);
-      for (const s of ctx.splits[id] ?? []) visit(s);
-    }
+    const h = slot(i, j, true);
+    if (head[h] < 0) {
+      ci[h] = i;
+      cj[h] = j;
+    } else if (count[h] >= CROWD) continue;
+    next[k] = head[h];
+    head[h] = k;
+    count[h]++;
   }
   return best;
 }

@@ -80,7 +80,8 @@ export function settleFreeLoops(ctx: Ctx, free: readonly number[]): Contour[] {
     if (c.xy.length < 4) continue;
     const A = regionMomentsAbout([c], c.xy[0], c.xy[1]).m00;
     if (!(A !== 0) || !Number.isFinite(A)) continue;
-    const [w0, w1] = windingsAt(ctx, c.xy[0], c.xy[1], (k) => ctx.loopOf[k.id] === l);
+    // Alone: nothing else winds about it. A few loops: one pass each; many: the index.
+    const [w0, w1] = ctx.loops.length === 1 ? [0, 0] : windingsAt(ctx, c.xy[0], c.xy[1], (k) => ctx.loopOf[k.id] === l, free.length <= 8);
     // CCW (A > 0): left is inside (own winding 1), right outside (0). CW: left outside (0),
     // right inside (−1).
     const right = A > 0 ? 0 : -1, left = right + 1;

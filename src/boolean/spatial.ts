@@ -31,12 +31,22 @@ export function carriersInBox(ctx: Ctx, x0: number, y0: number, x1: number, y1: 
  * that ray, plus the circular segment of an arc, which lies inside the arc's box).
  * `skip(c)` leaves carriers out (a loop's own carriers, when it is classified from a point on it).
  */
-export function windingsAt(ctx: Ctx, x: number, y: number, skip?: (c: Carrier) => boolean): [number, number] {
+export function windingsAt(ctx: Ctx, x: number, y: number, skip?: (c: Carrier) => boolean, scan = false): [number, number] {
   let w0 = 0, w1 = 0;
   const cs = ctx.carriers;
   if (cs.length === 0) return [0, 0];
-  const idx = carrierIndex(ctx);
-  for (const k of idx.search(x, y, Math.max(x, idx.maxX), y)) {
+  // A few questions are answered by one pass over the carriers' boxes (`scan`), cheaper than
+  // building the index; many go through the index.
+  let near: Iterable<number>;
+  if (scan && !ctx.index) {
+    const list: number[] = [];
+    for (const c of cs) if (c.xmax >= x && c.ymin <= y && c.ymax >= y) list.push(c.id);
+    near = list;
+  } else {
+    const idx = carrierIndex(ctx);
+    near = idx.search(x, y, Math.max(x, idx.maxX), y);
+  }
+  for (const k of near) {
     const c = cs[k];
     if (skip && skip(c)) continue;
     const w = windingOf(c, x, y);

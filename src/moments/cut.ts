@@ -202,24 +202,56 @@ export function momentsAboveAbout(plan: CutPlan, yc: number, ox: number): HalfPl
       acc[5] += w[5] + dx * w[2] + dy * w[1] + dx * dy * w[0];
       continue;
     }
-    const n = c.xy.length >> 1;
-    pieces.length = 0;
-    for (let i = 0; i < n; i++) splitSegment(c, i, ox, yc, pieces);
-    const m = pieces.length;
-    for (let q = 0; q < m; q++) {
-      const p = pieces[q];
-      const prev = pieces[(q + m - 1) % m];
-      // Where the boundary enters the upper side a closing piece of the cut line ends; where it
-      // leaves, one starts. All six G carry a factor y, so closing pieces on y = 0 add no
-      // moment, only width.
-      if (p.above && !prev.above) width += p.x0;
-      else if (!p.above && prev.above) width -= p.x0;
-      if (!p.above) continue;
-      if (p.sweep === 0) lineDx(p.x0, p.y0, p.x1, p.y1, acc);
-      else arcDx(p.x0, p.y0, p.x1, p.y1, p.sweep, acc);
-    }
+    width += crossedLoop(c, ox, yc, acc, pieces);
   }
   return { m00: acc[0], m10: acc[1], m01: acc[2], m20: acc[3], m02: acc[4], m11: acc[5], width };
+}
+
+/**
+ * One loop that the line crosses: its pieces above the line integrated into acc, and its share
+ * of the cut width returned. Straight segments are split inline (no piece records); arcs go
+ * through splitSegment. Where the boundary enters the upper side a closing piece of the cut
+ * line ends; where it leaves, one starts. All six G carry a factor y, so closing pieces on y = 0
+ * add no moment, only width.
+ */
+function crossedLoop(c: Contour, ox: number, yc: number, acc: Float64Array, pieces: Piece[]): number {
+  const xy = c.xy, bulge = c.bulge;
+  const n = xy.length >> 1;
+  let width = 0;
+  let started = false, firstAbove = false, firstX = 0, prevAbove = false;
+  const piece = (above: boolean, x0: number, y0: number, x1: number, y1: number, sweep: number) => {
+    if (!started) {
+      started = true;
+      firstAbove = above;
+      firstX = x0;
+    } else if (above && !prevAbove) width += x0;
+    else if (!above && prevAbove) width -= x0;
+    prevAbove = above;
+    if (!above) return;
+    if (sweep === 0) lineDx(x0, y0, x1, y1, acc);
+    else arcDx(x0, y0, x1, y1, sweep, acc);
+  };
+  for (let i = 0; i < n; i++) {
+    if (bulge && bulge[i] !== 0) {
+      pieces.length = 0;
+      splitSegment(c, i, ox, yc, pieces);
+      for (const p of pieces) piece(p.above, p.x0, p.y0, p.x1, p.y1, p.sweep);
+      continue;
+    }
+    const j = i + 1 === n ? 0 : i + 1;
+    const ax = xy[2 * i] - ox, ay = xy[2 * i + 1] - yc, bx = xy[2 * j] - ox, by = xy[2 * j + 1] - yc;
+    if (ay * by < 0) {
+      const xm = ax + (-ay / (by - ay)) * (bx - ax);
+      piece(ay > 0, ax, ay, xm, 0, 0);
+      piece(by > 0, xm, 0, bx, by, 0);
+    } else piece(ay + by > 0, ax, ay, bx, by, 0);
+  }
+  // The first piece's own transition, against the last piece.
+  if (started) {
+    if (firstAbove && !prevAbove) width += firstX;
+    else if (!firstAbove && prevAbove) width -= firstX;
+  }
+  return width;
 }
 
 /**
