@@ -48,6 +48,33 @@ describe('far from the origin', () => {
   });
 });
 
+describe('a small part far from a large one', () => {
+  // An invented bracket near the origin (an L of two plates with a bolt hole) and a 1 × 1
+  // square typed at (5e7, 5e7). Once: the square added 0.5 or 1.23 to A depending on the shape
+  // order (sums about one point near the bracket), and 0 when it went through the grid with the
+  // bracket (a later intersect shape): the grid step was 0.625 there and a sliver filter of
+  // 4 grid cells dropped it. Composite area (Gere & Goodno): the square adds exactly 1, and its
+  // own Ix = bh³/12 = 1/12.
+  const bracket: SectionDocument['shapes'] = [
+    { id: 'web', type: 'rectangle', at: [0, 0], width: 12, height: 150 },
+    { id: 'flange', type: 'rectangle', at: [0, 0], width: 90, height: 10 },
+    { id: 'bolt', type: 'circle', center: [50, 5], radius: 3, op: 'subtract' },
+  ];
+  const square = { id: 'far', type: 'rectangle' as const, at: [5e7, 5e7] as [number, number], width: 1, height: 1 };
+  const keep = { id: 'keep', type: 'rectangle' as const, at: [-1e3, -1e3] as [number, number], width: 6e7, height: 6e7, op: 'intersect' as const };
+  const doc = (shapes: SectionDocument['shapes']): SectionDocument => ({ format: 'kern-section', version: 1, units: 'mm', shapes });
+  const areaOf = (shapes: SectionDocument['shapes']) => evaluateDocument(doc(shapes)).props!.area;
+  it('adds exactly its own area in any order and through an intersect run', () => {
+    const base = areaOf(bracket);
+    close(areaOf([...bracket, square]) - base, 1, 1e-9);
+    close(areaOf([square, ...bracket]) - base, 1, 1e-9);
+    close(areaOf([...bracket, square, keep]) - areaOf([...bracket, keep]), 1, 1e-9);
+    const p = evaluateDocument(doc([square])).props!;
+    close(p.Ix, 1 / 12, 1e-9);
+    close(p.Zx, 1 / 4, 1e-9);
+  });
+});
+
 describe('vertices of different loops', () => {
   it('a hole 2e-8·r from its outer circle keeps its own vertices (merged vertices of different loops)', () => {
     // Roark Table A.1, hollow circle, with the hole off centre (composite area, parallel-axis
