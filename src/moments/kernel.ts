@@ -26,31 +26,57 @@ export interface RawMoments {
 
 export const ZERO_MOMENTS: RawMoments = Object.freeze({ m00: 0, m10: 0, m01: 0, m20: 0, m02: 0, m11: 0 });
 
-/** Moments about (ox, oy) accumulated into acc (a 6-slot array: A, ∫x, ∫y, ∫x², ∫y², ∫xy). */
+/** Vertices per block of the polygon sums (see accumulateContour). */
+const BLOCK = 64;
+
+/** acc[i] += v with a Neumaier compensation term kept in comp[i]. */
+function addCompensated(acc: Float64Array, comp: Float64Array, i: number, v: number): void {
+  const s = acc[i], t = s + v;
+  comp[i] += Math.abs(s) >= Math.abs(v) ? s - t + v : v - t + s;
+  acc[i] = t;
+}
+
+/**
+ * Moments about (ox, oy) accumulated into acc (a 6-slot array: A, ∫x, ∫y, ∫x², ∫y², ∫xy).
+ * The straight part is summed in blocks of BLOCK vertices whose sums are added with a
+ * compensation term, so a dense outline (2e5 vertices) does not lose 1e-12 to the running sum.
+ */
 function accumulateContour(c: Contour, ox: number, oy: number, acc: Float64Array): void {
   const xy = c.xy;
   const n = xy.length >> 1;
   if (n < 2) return;
-  let a = 0, sx = 0, sy = 0, sxx = 0, syy = 0, sxy = 0;
+  const tot = new Float64Array(6), comp = new Float64Array(6);
   let x0 = xy[2 * n - 2] - ox, y0 = xy[2 * n - 1] - oy;
-  for (let k = 0; k < 2 * n; k += 2) {
-    const x1 = xy[k] - ox, y1 = xy[k + 1] - oy;
-    const cr = x0 * y1 - x1 * y0;
-    a += cr;
-    sx += cr * (x0 + x1);
-    sy += cr * (y0 + y1);
-    sxx += cr * (x0 * x0 + x0 * x1 + x1 * x1);
-    syy += cr * (y0 * y0 + y0 * y1 + y1 * y1);
-    sxy += cr * (x0 * (2 * y0 + y1) + x1 * (y0 + 2 * y1));
-    x0 = x1;
-    y0 = y1;
+  for (let k = 0; k < 2 * n; ) {
+    const end = Math.min(2 * n, k + 2 * BLOCK);
+    let a = 0, sx = 0, sy = 0, sxx = 0, syy = 0, sxy = 0;
+    for (; k < end; k += 2) {
+      const x1 = xy[k] - ox, y1 = xy[k + 1] - oy;
+      // x0·y1 − x1·y0 written with the edge (x1 − x0, y1 − y0): for a dense outline the two
+      // products are R² against a result of R²·(edge/R), and this form does not cancel.
+      const cr = x0 * (y1 - y0) - y0 * (x1 - x0);
+      a += cr;
+      sx += cr * (x0 + x1);
+      sy += cr * (y0 + y1);
+      sxx += cr * (x0 * x0 + x0 * x1 + x1 * x1);
+      syy += cr * (y0 * y0 + y0 * y1 + y1 * y1);
+      sxy += cr * (x0 * (2 * y0 + y1) + x1 * (y0 + 2 * y1));
+      x0 = x1;
+      y0 = y1;
+    }
+    addCompensated(tot, comp, 0, a);
+    addCompensated(tot, comp, 1, sx);
+    addCompensated(tot, comp, 2, sy);
+    addCompensated(tot, comp, 3, sxx);
+    addCompensated(tot, comp, 4, syy);
+    addCompensated(tot, comp, 5, sxy);
   }
-  acc[0] += a / 2;
-  acc[1] += sx / 6;
-  acc[2] += sy / 6;
-  acc[3] += sxx / 12;
-  acc[4] += syy / 12;
-  acc[5] += sxy / 24;
+  acc[0] += (tot[0] + comp[0]) / 2;
+  acc[1] += (tot[1] + comp[1]) / 6;
+  acc[2] += (tot[2] + comp[2]) / 6;
+  acc[3] += (tot[3] + comp[3]) / 12;
+  acc[4] += (tot[4] + comp[4]) / 12;
+  acc[5] += (tot[5] + comp[5]) / 24;
   const bulge = c.bulge;
   if (!bulge) return;
   for (let i = 0; i < n; i++) {
