@@ -6,6 +6,7 @@ import type { IntPoint } from 'clipper-lib';
 import { ARC, paramOf, pointAt } from './carriers';
 import { CIRCUMSCRIBE, INSCRIBE } from './arrangement';
 import { type Ctx, find, MAX_STEP, SAG_MAX } from './context';
+import { sortIndex } from './sort';
 
 function pushVertex(ctx: Ctx, path: IntPoint[], x: number, y: number, exact: boolean, car: number[]): void {
   const X = Math.round((x - ctx.ox) * ctx.scale), Y = Math.round((y - ctx.oy) * ctx.scale);
@@ -35,11 +36,6 @@ function mergeRecord(ctx: Ctx, id: number, x: number, y: number, exact: boolean,
   ctx.rCar[id] = merged;
 }
 
-/** A map key for an integer point (numbers while they stay exact, text beyond). */
-function pointKey(X: number, Y: number): number | string {
-  return Math.abs(X) < 4e7 && Math.abs(Y) < 4e7 ? X * 1e8 + Y : `${X},${Y}`;
-}
-
 /** Step 3: integer chord paths, one per source contour of the given loops. */
 export function buildPaths(ctx: Ctx, loops: readonly number[]): { subj: IntPoint[][]; clip: IntPoint[][] } {
   const subj: IntPoint[][] = [], clip: IntPoint[][] = [];
@@ -51,6 +47,12 @@ export function buildPaths(ctx: Ctx, loops: readonly number[]): { subj: IntPoint
       const c = cs[id];
       const r0 = find(ctx, c.n0), r1 = find(ctx, c.n1);
       if (r0 === r1) continue; // collapsed by merging
+      if (c.kind !== ARC && !ctx.splits[id]) {
+        // A straight edge with no node inside: its start vertex is all clipper needs.
+        pushVertex(ctx, path, ctx.nx[r0], ctx.ny[r0], true, ctx.ncar[r0]);
+        ctx.chordPieces.push(id, r0, r1);
+        continue;
+      }
       const own = [id];
       const inner: { u: number; n: number }[] = [];
       for (const s of ctx.splits[id] ?? []) {
@@ -114,25 +116,27 @@ export function buildPaths(ctx: Ctx, loops: readonly number[]): { subj: IntPoint
   }
   // Records of different loops at one integer point stay apart (each keeps its own exact point
   // and carriers); every one of them learns the others, because clipper keeps one tag there.
-  const at = new Map<number | string, number[]>();
-  for (let r = 0; r < ctx.rX.length; r++) {
-    const key = pointKey(ctx.rX[r], ctx.rY[r]);
-    const list = at.get(key);
-    if (list) list.push(r);
-    else at.set(key, [r]);
-  }
-  for (let r = 0; r < ctx.rX.length; r++) {
+  // Records sorted by their integer point put those at one point next to each other.
+  const nr = ctx.rX.length;
+  for (let r = 0; r < nr; r++) {
     ctx.rAll.push(ctx.rCar[r]);
     ctx.rAlt.push(null);
   }
-  for (const list of at.values()) {
-    if (list.length < 2) continue;
-    const all: number[] = [];
-    for (const r of list) for (const c of ctx.rCar[r]) if (!all.includes(c)) all.push(c);
-    for (const r of list) {
-      ctx.rAll[r] = all;
-      ctx.rAlt[r] = list;
+  const order = sortIndex(Float64Array.from(ctx.rX), Float64Array.from(ctx.rY));
+  for (let i = 0; i < nr; ) {
+    let j = i + 1;
+    const X = ctx.rX[order[i]], Y = ctx.rY[order[i]];
+    while (j < nr && ctx.rX[order[j]] === X && ctx.rY[order[j]] === Y) j++;
+    if (j - i > 1) {
+      const list = Array.from(order.subarray(i, j));
+      const all: number[] = [];
+      for (const r of list) for (const c of ctx.rCar[r]) if (!all.includes(c)) all.push(c);
+      for (const r of list) {
+        ctx.rAll[r] = all;
+        ctx.rAlt[r] = list;
+      }
     }
+    i = j;
   }
   return { subj, clip };
 }

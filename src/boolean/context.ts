@@ -3,7 +3,7 @@
  * coincident points), per-carrier split points and the vertex records behind clipper's Z tags.
  */
 import type Flatbush from 'flatbush';
-import type { Carrier } from './carriers';
+import type { Carrier, CarrierStore } from './carriers';
 import type { Contour } from '../geometry/contour';
 
 export type Mode = 'union' | 'difference' | 'intersection' | 'evenodd';
@@ -50,6 +50,8 @@ export interface Ctx {
   oy: number;
   scale: number;
   carriers: Carrier[];
+  /** The carriers' numbers (carriers.ts). */
+  store: CarrierStore;
   /** Per contour: the carrier ids in order. */
   loops: { group: number; ids: number[] }[];
   /** Per carrier: its loop (index into loops). */

@@ -17,6 +17,7 @@ import ClipperLib from 'clipper-lib';
 import type { IntPoint } from 'clipper-lib';
 import type { Contour, Region } from '../geometry/contour';
 import { buildArrangement, buildCarriers } from './arrangement';
+import { CarrierStore, hyp } from './carriers';
 import { buildPaths } from './chords';
 import { INT_RANGE, REL_EPS, type Ctx, type Mode, type SourceGroup } from './context';
 import { digonLoops, findDigons } from './digons';
@@ -33,9 +34,11 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
   // Extent: vertex bounds widened by each arc's bulge height (a cheap upper bound of the exact
   // bounds; only the integer scale depends on it).
   let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
+  let vertices = 0;
   for (const g of groups) {
     for (const c of g.contours) {
       const xy = c.xy, n = xy.length >> 1;
+      vertices += n;
       for (let i = 0; i < n; i++) {
         const x = xy[2 * i], y = xy[2 * i + 1];
         if (!Number.isFinite(x) || !Number.isFinite(y)) continue;
@@ -43,7 +46,7 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
         const b = c.bulge ? c.bulge[i] : 0;
         if (b !== 0 && Number.isFinite(b)) {
           const j = i + 1 === n ? 0 : i + 1;
-          const L = Math.hypot(xy[2 * j] - x, xy[2 * j + 1] - y);
+          const L = hyp(xy[2 * j] - x, xy[2 * j + 1] - y);
           // Height of the arc above its chord, or its whole diameter for a sweep over 180 deg.
           h = Math.abs(b) <= 1 ? (Math.abs(b) * L) / 2 : (L / 2) * (Math.abs(b) + 1 / Math.abs(b));
           if (!Number.isFinite(h)) h = 0;
@@ -60,12 +63,12 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
   const scale = INT_RANGE / ext;
   const ctx: Ctx = {
     mode, ext, eps: REL_EPS * ext, unit: 1 / scale, ox: (xmin + xmax) / 2, oy: (ymin + ymax) / 2, scale,
-    carriers: [], loops: [], loopOf: [], touched: [], index: null, maxTol: -1, nx: [], ny: [], ncar: [], parent: [], splits: [], sag: [], side: [], chordSag: [], contact: false, loopLo: [], loopHi: [], trustLoops: mode !== 'evenodd',
+    carriers: [], store: new CarrierStore(vertices + 16), loops: [], loopOf: [], touched: [], index: null, maxTol: -1, nx: [], ny: [], ncar: [], parent: [], splits: [], sag: [], side: [], chordSag: [], contact: false, loopLo: [], loopHi: [], trustLoops: mode !== 'evenodd',
     rx: [], ry: [], rX: [], rY: [], rExact: [], rCar: [], rAll: [], rAlt: [], chordPieces: [], digons: [], digonsOf: new Map(), zf: [],
   };
   buildCarriers(ctx, groups);
   buildArrangement(ctx);
-  const { clipped, free } = partitionLoops(ctx);
+  const { clipped, free, box } = partitionLoops(ctx);
   const region: Contour[] = [];
   if (clipped.length) {
     chooseGrid(ctx, clipped);
@@ -90,6 +93,6 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
     }
     for (const c of digonLoops(ctx)) region.push(c);
   }
-  for (const c of settleFreeLoops(ctx, free)) region.push(c);
+  for (const c of settleFreeLoops(ctx, free, box)) region.push(c);
   return { region, contact: ctx.contact };
 }

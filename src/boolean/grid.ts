@@ -7,6 +7,7 @@
  * arithmetic by itself; it is slower, so only such inputs pay for it. Nodes closer than the
  * exact tolerance (eps) were merged by the arrangement and never ask for a finer grid.
  */
+import { hyp } from './carriers';
 import { find, INT_RANGE, type Ctx } from './context';
 
 /** Distinct nodes closer than this many grid units refine the grid. */
@@ -39,56 +40,52 @@ function closestNodes(ctx: Ctx, loops: readonly number[], limit: number): number
   const nn = ctx.nx.length;
   const mark = new Uint8Array(nn);
   const roots: number[] = [];
-  const take = (nd: number) => {
-    const r = find(ctx, nd);
-    if (!mark[r]) {
-      mark[r] = 1;
-      roots.push(r);
-    }
-  };
   for (const l of loops) {
     for (const id of ctx.loops[l].ids) {
-      take(ctx.carriers[id].n0);
-      for (const s of ctx.splits[id] ?? []) take(s);
+      const splits = ctx.splits[id];
+      const k0 = splits ? splits.length : 0;
+      for (let k = -1; k < k0; k++) {
+        const r = find(ctx, k < 0 ? ctx.carriers[id].n0 : (splits as number[])[k]);
+        if (mark[r]) continue;
+        mark[r] = 1;
+        roots.push(r);
+      }
     }
   }
   const m = roots.length;
   let size = 1;
   while (size < 2 * m) size <<= 1;
+  const mask = size - 1;
   const ci = new Int32Array(size), cj = new Int32Array(size), head = new Int32Array(size).fill(-1), count = new Int32Array(size);
   const next = new Int32Array(m).fill(-1);
-  const slot = (i: number, j: number, insert: boolean): number => {
-    let h = (Math.imul(i, 0x27d4eb2d) ^ Math.imul(j, 0x165667b1)) & (size - 1);
-    for (;;) {
-      if (head[h] < 0) return insert ? h : -1;
-      if (ci[h] === i && cj[h] === j) return h;
-      h = (h + 1) & (size - 1);
-    }
-  };
+  const nx = ctx.nx, ny = ctx.ny, ox = ctx.ox, oy = ctx.oy;
   let best = limit;
   for (let k = 0; k < m; k++) {
     const r = roots[k];
-    const x = ctx.nx[r], y = ctx.ny[r];
-    const i = Math.floor((x - ctx.ox) / limit), j = Math.floor((y - ctx.oy) / limit);
+    const x = nx[r], y = ny[r];
+    const i = Math.floor((x - ox) / limit), j = Math.floor((y - oy) / limit);
+    let home = -1;
     for (let di = -1; di <= 1; di++) {
       for (let dj = -1; dj <= 1; dj++) {
-        const h = slot(i + di, j + dj, false);
-        if (h < 0) continue;
+        const a = i + di, b = j + dj;
+        // Open addressing: probe from the cell's hash to its slot or the first empty one.
+        let h = (Math.imul(a, 0x27d4eb2d) ^ Math.imul(b, 0x165667b1)) & mask;
+        while (head[h] >= 0 && !(ci[h] === a && cj[h] === b)) h = (h + 1) & mask;
+        if (di === 0 && dj === 0) home = h;
         for (let o = head[h]; o >= 0; o = next[o]) {
           const q = roots[o];
-          const d = Math.hypot(ctx.nx[q] - x, ctx.ny[q] - y);
+          const d = hyp(nx[q] - x, ny[q] - y);
           if (d > 0 && d < best) best = d;
         }
       }
     }
-    const h = slot(i, j, true);
-    if (head[h] < 0) {
-      ci[h] = i;
-      cj[h] = j;
-    } else if (count[h] >= CROWD) continue;
-    next[k] = head[h];
-    head[h] = k;
-    count[h]++;
+    if (head[home] < 0) {
+      ci[home] = i;
+      cj[home] = j;
+    } else if (count[home] >= CROWD) continue;
+    next[k] = head[home];
+    head[home] = k;
+    count[home]++;
   }
   return best;
 }

@@ -15,12 +15,12 @@
 import Flatbush from 'flatbush';
 import { reverseContour, type Contour } from '../geometry/contour';
 import { regionMomentsAbout } from '../moments/kernel';
-import { ARC, type Carrier } from './carriers';
+import { ARC, windingOf, type Carrier } from './carriers';
 import type { Ctx } from './context';
 import { inResult, windingsAt } from './spatial';
 
-/** Loop indices: `clipped` go through clipper, `free` are settled exactly. */
-export function partitionLoops(ctx: Ctx): { clipped: number[]; free: number[] } {
+/** Loop indices: `clipped` go through clipper, `free` are settled exactly; each loop's box. */
+export function partitionLoops(ctx: Ctx): { clipped: number[]; free: number[]; box: Float64Array } {
   const L = ctx.loops.length;
   const box = new Float64Array(4 * L);
   for (let l = 0; l < L; l++) {
@@ -36,7 +36,7 @@ export function partitionLoops(ctx: Ctx): { clipped: number[]; free: number[] } 
   }
   const touched: number[] = [];
   for (let l = 0; l < L; l++) if (ctx.touched[l]) touched.push(l);
-  if (touched.length === 0) return { clipped: [], free: [...Array(L).keys()] };
+  if (touched.length === 0) return { clipped: [], free: [...Array(L).keys()], box };
   const idx = new Flatbush(touched.length);
   for (const l of touched) idx.add(box[4 * l], box[4 * l + 1], box[4 * l + 2], box[4 * l + 3]);
   idx.finish();
@@ -46,7 +46,7 @@ export function partitionLoops(ctx: Ctx): { clipped: number[]; free: number[] } 
     const meets = ctx.touched[l] || idx.collides(box[4 * l] - pad, box[4 * l + 1] - pad, box[4 * l + 2] + pad, box[4 * l + 3] + pad);
     (meets ? clipped : free).push(l);
   }
-  return { clipped, free };
+  return { clipped, free, box };
 }
 
 /** The loop's exact contour, from its carriers (arcs over 180° already split in two). */
@@ -68,20 +68,53 @@ export function loopContour(ctx: Ctx, l: number): Contour {
   return { xy, bulge: anyArc ? bulge : null };
 }
 
+/** Loops with more carriers than this are not scanned whole for one point (see below). */
+const SCAN_LIMIT = 256;
+
 /**
  * The free loops that bound the result, each oriented with the result on its left. The other
  * loops' windings are taken at the loop's first vertex (no other loop passes there); the loop's
  * own winding steps by +1 from its right to its left, from 0 outside it.
+ *
+ * Only loops whose box holds the point can wind about it: an index of the loops' boxes finds
+ * them. A small one is scanned whole (a plate's outline is four edges); the large ones are
+ * answered together by one ray through the carriers' index. A plate with N holes then costs
+ * about N log N, where rays over all carriers would cross every hole of a row.
  */
-export function settleFreeLoops(ctx: Ctx, free: readonly number[]): Contour[] {
+export function settleFreeLoops(ctx: Ctx, free: readonly number[], box: Float64Array): Contour[] {
   const out: Contour[] = [];
+  const L = ctx.loops.length;
+  const loopIdx = new Flatbush(Math.max(1, L));
+  for (let l = 0; l < L; l++) loopIdx.add(box[4 * l], box[4 * l + 1], box[4 * l + 2], box[4 * l + 3]);
+  if (L === 0) loopIdx.add(0, 0, 0, 0);
+  loopIdx.finish();
+  const big = new Uint8Array(L);
   for (const l of free) {
     const c = loopContour(ctx, l);
     if (c.xy.length < 4) continue;
     const A = regionMomentsAbout([c], c.xy[0], c.xy[1]).m00;
     if (!(A !== 0) || !Number.isFinite(A)) continue;
-    // Alone: nothing else winds about it. A few loops: one pass each; many: the index.
-    const [w0, w1] = ctx.loops.length === 1 ? [0, 0] : windingsAt(ctx, c.xy[0], c.xy[1], (k) => ctx.loopOf[k.id] === l, free.length <= 8);
+    const x = c.xy[0], y = c.xy[1];
+    let w0 = 0, w1 = 0, anyBig = false;
+    for (const o of loopIdx.search(x, y, x, y)) {
+      if (o === l) continue;
+      const ids = ctx.loops[o].ids;
+      if (ids.length > SCAN_LIMIT) {
+        big[o] = 1;
+        anyBig = true;
+        continue;
+      }
+      let w = 0;
+      for (const id of ids) w += windingOf(ctx.carriers[id], x, y);
+      if (ctx.loops[o].group === 0) w0 += w;
+      else w1 += w;
+    }
+    if (anyBig) {
+      const [b0, b1] = windingsAt(ctx, x, y, (k) => !big[ctx.loopOf[k.id]]);
+      w0 += b0;
+      w1 += b1;
+      big.fill(0);
+    }
     // CCW (A > 0): left is inside (own winding 1), right outside (0). CW: left outside (0),
     // right inside (−1).
     const right = A > 0 ? 0 : -1, left = right + 1;

@@ -6,6 +6,7 @@
 import Flatbush from 'flatbush';
 import { windingOf, type Carrier } from './carriers';
 import type { Ctx } from './context';
+import { sortIndex } from './sort';
 
 /** The index over ctx.carriers (item k is carrier k), built on first use. */
 export function carrierIndex(ctx: Ctx): Flatbush {
@@ -71,4 +72,73 @@ export function inResult(ctx: Ctx, w0: number, w1: number): boolean {
 export function classify(ctx: Ctx, x: number, y: number): boolean {
   const [w0, w1] = windingsAt(ctx, x, y);
   return inResult(ctx, w0, w1);
+}
+
+/** First index in the sorted array s with s[i] >= v (or s[i] > v when `after`). */
+function bound(s: Float64Array, v: number, after: boolean): number {
+  let lo = 0, hi = s.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (s[mid] < v || (after && s[mid] === v)) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
+
+/**
+ * Every pair of carriers whose boxes (widened by eps) meet, each pair once. A sweep along one
+ * axis is the cheapest broad phase for outlines (each box meets few others along the axis),
+ * but a row of holes or a comb of long edges makes it quadratic: the cost of a sweep along x
+ * and along y is counted first (binary searches over the sorted box starts), and when both are
+ * large the index answers one box query per carrier instead.
+ */
+export function forEachNearPair(ctx: Ctx, visit: (a: Carrier, b: Carrier) => void): void {
+  const cs = ctx.carriers, n = cs.length, eps = ctx.eps;
+  if (n < 2) return;
+  const xlo = new Float64Array(n), xhi = new Float64Array(n), ylo = new Float64Array(n), yhi = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const c = cs[i];
+    xlo[i] = c.xmin;
+    xhi[i] = c.xmax;
+    ylo[i] = c.ymin;
+    yhi[i] = c.ymax;
+  }
+  // Cost of a sweep along an axis: for each box, the boxes that start within its extent.
+  const sweep = (lo: Float64Array, hi: Float64Array): { order: Uint32Array; cost: number } => {
+    const order = sortIndex(lo);
+    const s = new Float64Array(n);
+    for (let i = 0; i < n; i++) s[i] = lo[order[i]];
+    let cost = 0;
+    for (let i = 0; i < n; i++) cost += bound(s, hi[i] + eps, true) - bound(s, lo[i], false);
+    return { order, cost };
+  };
+  const cheap = 16 * n + 1024;
+  let axis = sweep(xlo, xhi);
+  let [lo, hi, olo, ohi] = [xlo, xhi, ylo, yhi];
+  if (axis.cost > cheap) {
+    const ay = sweep(ylo, yhi);
+    if (ay.cost < axis.cost) {
+      axis = ay;
+      [lo, hi, olo, ohi] = [ylo, yhi, xlo, xhi];
+    }
+  }
+  if (axis.cost <= cheap) {
+    const order = axis.order;
+    for (let p = 0; p < n; p++) {
+      const a = order[p];
+      for (let q = p + 1; q < n; q++) {
+        const b = order[q];
+        if (lo[b] > hi[a] + eps) break;
+        if (olo[b] > ohi[a] + eps || ohi[b] < olo[a] - eps) continue;
+        visit(cs[a], cs[b]);
+      }
+    }
+    return;
+  }
+  const idx = carrierIndex(ctx);
+  for (let a = 0; a < n; a++) {
+    for (const b of idx.search(xlo[a] - eps, ylo[a] - eps, xhi[a] + eps, yhi[a] + eps)) {
+      if (b > a) visit(cs[a], cs[b]);
+    }
+  }
 }

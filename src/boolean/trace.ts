@@ -8,7 +8,7 @@ import { pushArc, type Contour } from '../geometry/contour';
 import { regionMomentsAbout } from '../moments/kernel';
 import {
   ARC, LINE, curveIntersections, curvePoint, distToCurve, nearestPoint, paramOf, polishIntersection,
-  sameCurve, wrapAngle, type Carrier,
+  sameCurve, wrapAngle, hyp, type Carrier,
 } from './carriers';
 import { type Ctx, find } from './context';
 import { digonPick, pieceSweep } from './digons';
@@ -66,7 +66,7 @@ function resolveTie(ctx: Ctx, all: number[], px: number, py: number, qx: number,
   // A digon (two pieces on one chord, digons.ts) knows exactly which of its pieces bounds.
   const pick = digonPick(ctx, cands, px, py, qx, qy);
   if (pick >= 0) return pick;
-  const L = Math.hypot(qx - px, qy - py);
+  const L = hyp(qx - px, qy - py);
   if (!(L > 0)) return cands[0];
   const nx = -(qy - py) / L, ny = (qx - px) / L; // left normal; the tangent at a piece middle is parallel to q - p
   const mids = cands.map((c) => pieceMid(cs[c], px, py, qx, qy));
@@ -76,7 +76,7 @@ function resolveTie(ctx: Ctx, all: number[], px: number, py: number, qx: number,
     let delta = 0.25 * L;
     for (let o = 0; o < cands.length; o++) {
       if (o === k) continue;
-      const d = Math.hypot(mids[o][0] - mx, mids[o][1] - my);
+      const d = hyp(mids[o][0] - mx, mids[o][1] - my);
       if (d > 100 * ctx.eps) delta = Math.min(delta, 0.25 * d);
     }
     if (!(delta > 10 * ctx.eps)) continue;
@@ -105,23 +105,29 @@ function onCarrier(ctx: Ctx, c: Carrier, x: number, y: number): boolean {
   return distToCurve(c, x, y) <= carrierTol(ctx, c);
 }
 
+/**
+ * The clipper edge p -> q is one chord of carrier c: its ends and its middle lie on c to chord
+ * accuracy (this tells an arc from a line that joins the same two points).
+ */
+function fitsEdge(ctx: Ctx, c: Carrier, px: number, py: number, qx: number, qy: number): boolean {
+  return onCarrier(ctx, c, (px + qx) / 2, (py + qy) / 2) && onCarrier(ctx, c, px, py) && onCarrier(ctx, c, qx, qy);
+}
+
 function assignEdge(ctx: Ctx, si: number[], sj: number[], px: number, py: number, qx: number, qy: number): number {
   const cs = ctx.carriers;
   // The clipper edge is one chord: its ends and its middle lie on the carrier to chord accuracy
   // (this tells an arc from a line that joins the same two points).
   const mx = (px + qx) / 2, my = (py + qy) / 2;
-  const fits = (c: number): boolean =>
-    onCarrier(ctx, cs[c], mx, my) && onCarrier(ctx, cs[c], px, py) && onCarrier(ctx, cs[c], qx, qy);
   // Fast path: both ends are plain chord points (or nodes) of one and the same carrier.
   if (si.length === 1 && sj.length === 1 && si[0] === sj[0]) return si[0];
   let common = intersectLists(si, sj);
-  if (common.length === 1 && fits(common[0])) return common[0];
-  common = common.filter(fits);
+  if (common.length === 1 && fitsEdge(ctx, cs[common[0]], px, py, qx, qy)) return common[0];
+  common = common.filter((c) => fitsEdge(ctx, cs[c], px, py, qx, qy));
   // Collinear vertices dropped by clipper: the edge may span several carriers of one line.
   const pool = common.length ? common : unionLists(si, sj);
-  let fit = common.length ? common : pool.filter(fits);
+  let fit = common.length ? common : pool.filter((c) => fitsEdge(ctx, cs[c], px, py, qx, qy));
   // Tags of coincident points can name other carriers: look at every carrier through the middle.
-  if (fit.length === 0) fit = carriersNear(ctx, mx, my).filter(fits);
+  if (fit.length === 0) fit = carriersNear(ctx, mx, my).filter((c) => fitsEdge(ctx, cs[c], px, py, qx, qy));
   if (fit.length === 1) return fit[0];
   if (fit.length > 1) return resolveTie(ctx, fit, px, py, qx, qy);
   // Nothing fits within tolerance: the carrier nearest to both ends (the carriers near the
@@ -156,7 +162,7 @@ function placeVertex(ctx: Ctx, a: number, b: number, px: number, py: number, rec
   for (const na of [ca.n0, ca.n1]) {
     const ra = find(ctx, na);
     if (ra !== find(ctx, cb.n0) && ra !== find(ctx, cb.n1)) continue;
-    const d = Math.hypot(ctx.nx[ra] - px, ctx.ny[ra] - py);
+    const d = hyp(ctx.nx[ra] - px, ctx.ny[ra] - py);
     if (d <= bd) {
       bd = d;
       best = ra;
@@ -175,18 +181,18 @@ function placeVertex(ctx: Ctx, a: number, b: number, px: number, py: number, rec
       let lim = 8 * ctx.unit;
       if (ca.kind === ARC) lim += 0.2 * ca.r;
       if (cb.kind === ARC) lim += 0.2 * cb.r;
-      if (Math.hypot(x - px, y - py) <= lim) return [x, y];
+      if (hyp(x - px, y - py) <= lim) return [x, y];
     }
     // Near-tangent circles with no common point: the point of closest approach.
     if (ca.kind === ARC && cb.kind === ARC) {
-      const d = Math.hypot(cb.cx - ca.cx, cb.cy - ca.cy);
+      const d = hyp(cb.cx - ca.cx, cb.cy - ca.cy);
       if (d > 0) {
         // Apart: towards the other centre. Nested: the small circle's far side, the big one's near side.
         const nested = d < Math.abs(ca.r - cb.r) + ctx.eps;
         const sgn = !nested || ca.r >= cb.r ? 1 : -1;
         const ux = (cb.cx - ca.cx) / d, uy = (cb.cy - ca.cy) / d;
         const x = ca.cx + sgn * ca.r * ux, y = ca.cy + sgn * ca.r * uy;
-        if (Math.hypot(x - px, y - py) <= 0.2 * Math.min(ca.r, cb.r) + 8 * ctx.unit) return [x, y];
+        if (hyp(x - px, y - py) <= 0.2 * Math.min(ca.r, cb.r) + 8 * ctx.unit) return [x, y];
       }
     }
   }
@@ -202,7 +208,7 @@ function projectOnto(c: Carrier, x: number, y: number): [number, number] {
     const u = paramOf(c, x, y);
     return [c.ax + u * (c.bx - c.ax), c.ay + u * (c.by - c.ay)];
   }
-  const d = Math.hypot(x - c.cx, y - c.cy);
+  const d = hyp(x - c.cx, y - c.cy);
   if (d === 0) return [c.ax, c.ay];
   return [c.cx + ((x - c.cx) * c.r) / d, c.cy + ((y - c.cy) * c.r) / d];
 }
@@ -396,7 +402,7 @@ export function tracePath(ctx: Ctx, path: IntPoint[]): Contour | null {
   for (let k = 0; k < R; k++) {
     const k2 = (k + 1) % R;
     const ax = vx[k], ay = vy[k], bx = vx[k2], by = vy[k2];
-    if (Math.hypot(bx - ax, by - ay) <= ctx.eps) continue;
+    if (hyp(bx - ax, by - ay) <= ctx.eps) continue;
     const c = ctx.carriers[runC[k]];
     oxy.push(ax, ay);
     const d = pieceSweep(c, ax, ay, bx, by);
