@@ -236,6 +236,7 @@ function refineNearVertex(ctx: Ctx, a: Carrier, b: Carrier): void {
 
 /** Step 2: all pairwise contacts; the broad phase is spatial.ts forEachNearPair. */
 export function buildArrangement(ctx: Ctx): void {
+  ctx.crowded = new Uint8Array(ctx.carriers.length);
   forEachNearPair(ctx, (a, b) => {
     if (ctx.loopLo[a.id] === ctx.loopLo[b.id]) {
       const d = Math.abs(a.id - b.id);
@@ -243,11 +244,17 @@ export function buildArrangement(ctx: Ctx): void {
       // straight edges on any loop, which cannot meet twice unless they overlap) only a far end
       // lying on the other one (a pinched loop, a spike) is left to find.
       const lines = a.kind !== ARC && b.kind !== ARC && a.flat === 0 && b.flat === 0;
-      if ((ctx.trustLoops || lines) && (d === 1 || d === ctx.loopHi[a.id] - ctx.loopLo[a.id])) {
-        touchEnds(ctx, a, b);
+      if (d === 1 || d === ctx.loopHi[a.id] - ctx.loopLo[a.id]) {
+        if (ctx.trustLoops || lines) {
+          touchEnds(ctx, a, b);
+          return;
+        }
+        intersectPair(ctx, a, b);
         return;
       }
     }
+    ctx.crowded[a.id] = 1;
+    ctx.crowded[b.id] = 1;
     intersectPair(ctx, a, b);
   });
   // Merged nodes: the representative carries every member's carriers.

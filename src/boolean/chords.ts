@@ -5,7 +5,7 @@
 import type { IntPoint } from 'clipper-lib';
 import { ARC, paramOf, pointAt } from './carriers';
 import { CIRCUMSCRIBE, INSCRIBE } from './arrangement';
-import { type Ctx, find, MAX_STEP, SAG_MAX } from './context';
+import { type Ctx, find, FREE_STEP, MAX_STEP, SAG_MAX } from './context';
 import { sortIndex } from './sort';
 
 function pushVertex(ctx: Ctx, path: IntPoint[], x: number, y: number, exact: boolean, car: number[]): void {
@@ -77,7 +77,7 @@ export function buildPaths(ctx: Ctx, loops: readonly number[]): { subj: IntPoint
         // Finer chords only when both sides are demanded (see arrangement.ts).
         const both = ctx.side[id] === (INSCRIBE | CIRCUMSCRIBE);
         const sr = both ? ctx.sag[id] / c.r : SAG_MAX;
-        const step = sr >= SAG_MAX ? MAX_STEP : 2 * Math.acos(1 - sr);
+        const step = !ctx.crowded[id] && ctx.side[id] === 0 ? FREE_STEP : sr >= SAG_MAX ? MAX_STEP : 2 * Math.acos(1 - sr);
         let cnt = Math.ceil(dphi / step);
         // At least two chords while the piece is visibly curved at the integer scale.
         if (cnt < 2 && c.r * (1 - Math.cos(dphi / 2)) * ctx.scale > 0.5) cnt = 2;

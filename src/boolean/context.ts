@@ -13,6 +13,12 @@ export const INT_RANGE = 4e7;
 /** Largest angle (radians) spanned by one chord: sagitta <= (1 - cos(0.1)) r ~ 5e-3 r. */
 export const MAX_STEP = 0.2;
 export const SAG_MAX = 1 - Math.cos(MAX_STEP / 2);
+/**
+ * Largest angle spanned by one chord of an arc whose box meets no carrier but its own loop
+ * neighbours (a fillet inside a profile): nothing can come between such an arc and its chords,
+ * so coarse chords decide the same topology, and the arc is restored exactly on output.
+ */
+export const FREE_STEP = Math.PI / 4;
 /** Smallest relative sagitta used when refining near-tangent arcs (caps the chord count). */
 export const SAG_FLOOR = 1e-6;
 /** Arcs with a radius above this multiple of the extent are traced as their chords. */
@@ -74,6 +80,8 @@ export interface Ctx {
   splits: (number[] | null)[];
   /** Per carrier: largest chord sagitta allowed (absolute). */
   sag: number[];
+  /** Per carrier: 1 when its box meets a carrier other than its loop neighbours (arrangement.ts). */
+  crowded: Uint8Array;
   /** Per carrier: sides demanded for its chords (INSCRIBE | CIRCUMSCRIBE bits, arrangement.ts). */
   side: number[];
   /** Per carrier: largest distance between its chords and the exact arc (set when chording). */

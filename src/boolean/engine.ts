@@ -63,7 +63,7 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
   const scale = INT_RANGE / ext;
   const ctx: Ctx = {
     mode, ext, eps: REL_EPS * ext, unit: 1 / scale, ox: (xmin + xmax) / 2, oy: (ymin + ymax) / 2, scale,
-    carriers: [], store: new CarrierStore(vertices + 16), loops: [], loopOf: [], touched: [], index: null, maxTol: -1, nx: [], ny: [], ncar: [], parent: [], splits: [], sag: [], side: [], chordSag: [], contact: false, loopLo: [], loopHi: [], trustLoops: mode !== 'evenodd',
+    carriers: [], store: new CarrierStore(vertices + 16), loops: [], loopOf: [], touched: [], index: null, maxTol: -1, crowded: new Uint8Array(0), nx: [], ny: [], ncar: [], parent: [], splits: [], sag: [], side: [], chordSag: [], contact: false, loopLo: [], loopHi: [], trustLoops: mode !== 'evenodd',
     rx: [], ry: [], rX: [], rY: [], rExact: [], rCar: [], rAll: [], rAlt: [], chordPieces: [], digons: [], digonsOf: new Map(), zf: [],
   };
   buildCarriers(ctx, groups);

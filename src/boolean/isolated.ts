@@ -7,10 +7,10 @@
  * loop it is: a hole 2e-8·r inside its outer circle, a disc in a ring's hole, a flat arc on its
  * own chord, a plate with thousands of separate holes, a simple polygon of any size.
  *
- * Only the loops that touch, and the untouched loops whose boxes meet theirs (they may enclose
- * them, and clipper must then see them), go to clipper. No loop left out encloses a point of a
- * loop that goes in (its box would meet that loop's box), so clipper's answer along its loops is
- * the whole answer there.
+ * Only the loops that touch, and the untouched loops that enclose one of them (their winding
+ * counts along it, so clipper must see them), go to clipper. An untouched loop either encloses a
+ * touched loop or has winding zero all along it, so clipper's answer along its loops is the
+ * whole answer there.
  */
 import Flatbush from 'flatbush';
 import { reverseContour, type Contour } from '../geometry/contour';
@@ -41,10 +41,27 @@ export function partitionLoops(ctx: Ctx): { clipped: number[]; free: number[]; b
   for (const l of touched) idx.add(box[4 * l], box[4 * l + 1], box[4 * l + 2], box[4 * l + 3]);
   idx.finish();
   const clipped: number[] = [], free: number[] = [];
-  const pad = ctx.eps;
   for (let l = 0; l < L; l++) {
-    const meets = ctx.touched[l] || idx.collides(box[4 * l] - pad, box[4 * l + 1] - pad, box[4 * l + 2] + pad, box[4 * l + 3] + pad);
-    (meets ? clipped : free).push(l);
+    if (ctx.touched[l]) {
+      clipped.push(l);
+      continue;
+    }
+    // Untouched: only a loop that encloses a touched loop changes the windings clipper must see.
+    // Enclosing needs the other box inside this one; then one vertex of it tells.
+    const x0 = box[4 * l], y0 = box[4 * l + 1], x1 = box[4 * l + 2], y1 = box[4 * l + 3];
+    let encloses = false;
+    for (const k of idx.search(x0, y0, x1, y1)) {
+      const t = touched[k];
+      if (box[4 * t] < x0 || box[4 * t + 1] < y0 || box[4 * t + 2] > x1 || box[4 * t + 3] > y1) continue;
+      const c = ctx.carriers[ctx.loops[t].ids[0]];
+      let w = 0;
+      for (const id of ctx.loops[l].ids) w += windingOf(ctx.carriers[id], c.ax, c.ay);
+      if (w !== 0) {
+        encloses = true;
+        break;
+      }
+    }
+    (encloses ? clipped : free).push(l);
   }
   return { clipped, free, box };
 }

@@ -10,39 +10,45 @@ export function sortIndex(ka: Float64Array, kb: Float64Array | null = null): Uin
   const n = ka.length;
   const idx = new Uint32Array(n);
   for (let i = 0; i < n; i++) idx[i] = i;
-  const less = (i: number, j: number): boolean => ka[i] < ka[j] || (kb !== null && ka[i] === ka[j] && kb[i] < kb[j]);
-  // Explicit stack of ranges; the larger half is pushed, the smaller one processed first.
-  const stack: number[] = [0, n - 1];
-  while (stack.length) {
-    let hi = stack.pop() as number;
-    let lo = stack.pop() as number;
+  // With one key, the second compares equal everywhere.
+  const kb2 = kb ?? new Float64Array(n);
+  const stack = new Int32Array(2 * 64);
+  let top = 0;
+  stack[top++] = 0;
+  stack[top++] = n - 1;
+  while (top > 0) {
+    let hi = stack[--top];
+    let lo = stack[--top];
     while (hi - lo > 16) {
       const mid = (lo + hi) >> 1;
       // Median of three as the pivot; Hoare's partition splits runs of equal keys evenly.
-      if (less(idx[mid], idx[lo])) swap(idx, mid, lo);
-      if (less(idx[hi], idx[lo])) swap(idx, hi, lo);
-      if (less(idx[hi], idx[mid])) swap(idx, hi, mid);
-      const p = idx[mid];
+      if (before(ka, kb2, idx[mid], idx[lo])) swap(idx, mid, lo);
+      if (before(ka, kb2, idx[hi], idx[lo])) swap(idx, hi, lo);
+      if (before(ka, kb2, idx[hi], idx[mid])) swap(idx, hi, mid);
+      const pa = ka[idx[mid]], pb = kb2[idx[mid]];
       let i = lo, j = hi;
       while (i <= j) {
-        while (less(idx[i], p)) i++;
-        while (less(p, idx[j])) j--;
+        while (ka[idx[i]] < pa || (ka[idx[i]] === pa && kb2[idx[i]] < pb)) i++;
+        while (pa < ka[idx[j]] || (pa === ka[idx[j]] && pb < kb2[idx[j]])) j--;
         if (i <= j) swap(idx, i++, j--);
       }
-      // [lo, j] and [i, hi] remain: the larger is pushed, the smaller continues.
+      // [lo, j] and [i, hi] remain: the larger is pushed (the stack stays under 2·log2 n), the
+      // smaller continues.
       if (j - lo < hi - i) {
-        stack.push(i, hi);
+        stack[top++] = i;
+        stack[top++] = hi;
         hi = j;
       } else {
-        stack.push(lo, j);
+        stack[top++] = lo;
+        stack[top++] = j;
         lo = i;
       }
     }
     // Insertion sort for the short range.
     for (let i = lo + 1; i <= hi; i++) {
-      const v = idx[i];
+      const v = idx[i], va = ka[v], vb = kb2[v];
       let j = i - 1;
-      while (j >= lo && less(v, idx[j])) {
+      while (j >= lo && (va < ka[idx[j]] || (va === ka[idx[j]] && vb < kb2[idx[j]]))) {
         idx[j + 1] = idx[j];
         j--;
       }
@@ -50,6 +56,10 @@ export function sortIndex(ka: Float64Array, kb: Float64Array | null = null): Uin
     }
   }
   return idx;
+}
+
+function before(ka: Float64Array, kb: Float64Array, i: number, j: number): boolean {
+  return ka[i] < ka[j] || (ka[i] === ka[j] && kb[i] < kb[j]);
 }
 
 function swap(a: Uint32Array, i: number, j: number): void {

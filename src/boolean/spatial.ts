@@ -106,6 +106,7 @@ export function forEachNearPair(ctx: Ctx, visit: (a: Carrier, b: Carrier) => voi
   // Cost of a sweep along an axis: for each box, the boxes that start within its extent.
   const sweep = (lo: Float64Array, hi: Float64Array): { order: Uint32Array; cost: number } => {
     const order = sortIndex(lo);
+    if (n <= 256) return { order, cost: 0 }; // few boxes: any sweep is cheap
     const s = new Float64Array(n);
     for (let i = 0; i < n; i++) s[i] = lo[order[i]];
     let cost = 0;

@@ -14,6 +14,23 @@ import { type Ctx, find } from './context';
 import { digonPick, pieceSweep } from './digons';
 import { carrierIndex, carriersInBox, classify } from './spatial';
 
+/** Whether two short lists share an element (no allocation). */
+function shareAny(a: readonly number[], b: readonly number[]): boolean {
+  for (let i = 0; i < a.length; i++) if (b.includes(a[i])) return true;
+  return false;
+}
+
+/** The one element the lists share, −1 when none, −2 when several (no allocation). */
+function shareOne(a: readonly number[], b: readonly number[]): number {
+  let found = -1;
+  for (let i = 0; i < a.length; i++) {
+    if (!b.includes(a[i]) || a[i] === found) continue;
+    if (found >= 0) return -2;
+    found = a[i];
+  }
+  return found;
+}
+
 function intersectLists(a: number[], b: number[]): number[] {
   const out: number[] = [];
   for (const x of a) if (b.includes(x)) out.push(x);
@@ -120,8 +137,9 @@ function assignEdge(ctx: Ctx, si: number[], sj: number[], px: number, py: number
   const mx = (px + qx) / 2, my = (py + qy) / 2;
   // Fast path: both ends are plain chord points (or nodes) of one and the same carrier.
   if (si.length === 1 && sj.length === 1 && si[0] === sj[0]) return si[0];
-  let common = intersectLists(si, sj);
-  if (common.length === 1 && fitsEdge(ctx, cs[common[0]], px, py, qx, qy)) return common[0];
+  const one = shareOne(si, sj);
+  if (one >= 0 && fitsEdge(ctx, cs[one], px, py, qx, qy)) return one;
+  let common = one === -1 ? [] : intersectLists(si, sj);
   common = common.filter((c) => fitsEdge(ctx, cs[c], px, py, qx, qy));
   // Collinear vertices dropped by clipper: the edge may span several carriers of one line.
   const pool = common.length ? common : unionLists(si, sj);
@@ -356,7 +374,7 @@ export function tracePath(ctx: Ctx, path: IntPoint[]): Contour | null {
     rec.push(trec[i]);
     sets.push(tsets[i]);
     const j = i + 1 === m0 ? 0 : i + 1;
-    if (intersectLists(tsets[i], tsets[j]).length) continue;
+    if (shareAny(tsets[i], tsets[j])) continue;
     for (const nd of droppedBetween(ctx, tsets[i], tsets[j], tx[i], ty[i], tx[j], ty[j])) {
       px.push(ctx.nx[nd]);
       py.push(ctx.ny[nd]);

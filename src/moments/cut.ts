@@ -9,7 +9,7 @@
  * case. The cut width is the summed length of the closing pieces, Σ x_entry − Σ x_exit.
  */
 import type { Contour, Region } from '../geometry/contour';
-import { arcFromChord, regionBounds } from '../geometry/contour';
+import { arcFromChord, quarterTurnRegion, regionBounds } from '../geometry/contour';
 import { addCircularSegment, regionMomentsAbout, regionReference, shiftMoments, type RawMoments } from './kernel';
 
 export interface HalfPlaneMoments extends RawMoments {
@@ -156,6 +156,8 @@ function splitFlatArc(ax: number, ay: number, bx: number, by: number, phi: numbe
  */
 export interface CutPlan {
   readonly contours: readonly Contour[];
+  readonly xmin: Float64Array;
+  readonly xmax: Float64Array;
   readonly ymin: Float64Array;
   readonly ymax: Float64Array;
   /** Per loop: A, ∫x, ∫y, ∫x², ∫y², ∫xy about its first vertex. */
@@ -165,16 +167,36 @@ export interface CutPlan {
 export function planCuts(region: Region): CutPlan {
   const contours: Contour[] = [];
   for (const c of region) if (c.xy.length >= 4) contours.push(c);
-  const ymin = new Float64Array(contours.length), ymax = new Float64Array(contours.length);
+  const n = contours.length;
+  const xmin = new Float64Array(n), xmax = new Float64Array(n), ymin = new Float64Array(n), ymax = new Float64Array(n);
   const whole: Float64Array[] = [];
   contours.forEach((c, k) => {
     const b = regionBounds([c]);
+    xmin[k] = b ? b.xmin : 0;
+    xmax[k] = b ? b.xmax : 0;
     ymin[k] = b ? b.ymin : 0;
     ymax[k] = b ? b.ymax : 0;
     const m = regionMomentsAbout([c], c.xy[0], c.xy[1]);
     whole.push(Float64Array.of(m.m00, m.m10, m.m01, m.m20, m.m02, m.m11));
   });
-  return { contours, ymin, ymax, whole };
+  return { contours, xmin, xmax, ymin, ymax, whole };
+}
+
+/**
+ * The plan of the region turned by a quarter turn (quarterTurnRegion's sense), from this plan's
+ * boxes and moments, exactly (swapped and negated), without integrating anything again.
+ */
+export function turnPlan(plan: CutPlan, sense: 1 | -1): CutPlan {
+  const contours = quarterTurnRegion(plan.contours, sense);
+  const whole = plan.whole.map((w) =>
+    sense > 0
+      ? Float64Array.of(w[0], -w[2], w[1], w[4], w[3], -w[5]) // (x, y) -> (−y, x)
+      : Float64Array.of(w[0], w[2], -w[1], w[4], w[3], -w[5]), // (x, y) -> (y, −x)
+  );
+  const neg = (a: Float64Array) => a.map((v) => -v);
+  return sense > 0
+    ? { contours, xmin: neg(plan.ymax), xmax: neg(plan.ymin), ymin: plan.xmin, ymax: plan.xmax, whole }
+    : { contours, xmin: plan.ymin, xmax: plan.ymax, ymin: neg(plan.xmax), ymax: neg(plan.xmin), whole };
 }
 
 /**
@@ -232,14 +254,25 @@ function crossedLoop(c: Contour, ox: number, yc: number, acc: Float64Array, piec
     else arcDx(x0, y0, x1, y1, sweep, acc);
   };
   for (let i = 0; i < n; i++) {
+    const j = i + 1 === n ? 0 : i + 1;
+    const ax = xy[2 * i] - ox, ay = xy[2 * i + 1] - yc, bx = xy[2 * j] - ox, by = xy[2 * j + 1] - yc;
     if (bulge && bulge[i] !== 0) {
+      // An arc of at most a half turn stays within its height (L/2)·|bulge| of its chord: one
+      // wholly clear of the line is one piece, with no split to compute.
+      const h = (Math.hypot(bx - ax, by - ay) / 2) * Math.abs(bulge[i]) * (1 + 1e-12);
+      if (Math.abs(bulge[i]) <= 1 && Math.min(ay, by) - h > 0) {
+        piece(true, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
+        continue;
+      }
+      if (Math.abs(bulge[i]) <= 1 && Math.max(ay, by) + h < 0) {
+        piece(false, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
+        continue;
+      }
       pieces.length = 0;
       splitSegment(c, i, ox, yc, pieces);
       for (const p of pieces) piece(p.above, p.x0, p.y0, p.x1, p.y1, p.sweep);
       continue;
     }
-    const j = i + 1 === n ? 0 : i + 1;
-    const ax = xy[2 * i] - ox, ay = xy[2 * i + 1] - yc, bx = xy[2 * j] - ox, by = xy[2 * j + 1] - yc;
     if (ay * by < 0) {
       const xm = ax + (-ay / (by - ay)) * (bx - ax);
       piece(ay > 0, ax, ay, xm, 0, 0);

@@ -9,9 +9,9 @@
  * of the region, never through world coordinates that have lost their low digits.
  */
 import type { Region } from '../geometry/contour';
-import { contourLength, quarterTurnRegion, regionBounds, type Bounds } from '../geometry/contour';
+import { contourLength, type Bounds } from '../geometry/contour';
 import { centralMoments, type CentralMoments, type RawMoments } from '../moments/kernel';
-import { momentsAboveAbout, planCuts, type CutPlan } from '../moments/cut';
+import { momentsAboveAbout, planCuts, turnPlan, type CutPlan } from '../moments/cut';
 
 export interface SectionProperties {
   area: number;
@@ -111,8 +111,7 @@ function equalAreaCut(plan: CutPlan, ox: number, lo: number, hi: number, half: n
  * Qa = ∫above (y − yp) dA summed about the axis itself and S = A·(ȳ − yp) the whole section's
  * first moment about it, from the centroid's offset to a point of the region.
  */
-function plasticAboutHorizontal(region: Region, cm: CentralMoments, ymin: number, ymax: number) {
-  const plan = planCuts(region);
+function plasticAboutHorizontal(plan: CutPlan, cm: CentralMoments, ymin: number, ymax: number) {
   const yp = equalAreaCut(plan, cm.refX, ymin, ymax, cm.A / 2);
   const Qa = momentsAboveAbout(plan, yp, cm.refX).m01;
   const S = cm.A * (cm.dy - (yp - cm.refY));
@@ -124,8 +123,23 @@ function turnedMoments(cm: CentralMoments): CentralMoments {
   return { A: cm.A, refX: cm.refY, refY: -cm.refX, dx: cm.dy, dy: -cm.dx, Ix: cm.Iy, Iy: cm.Ix, Ixy: -cm.Ixy };
 }
 
+/** The region's exact bounds, from its cut plan's per-loop boxes (null when it has no loop). */
+function planBounds(plan: CutPlan): Bounds | null {
+  const n = plan.contours.length;
+  if (n === 0) return null;
+  let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
+  for (let k = 0; k < n; k++) {
+    xmin = Math.min(xmin, plan.xmin[k]);
+    xmax = Math.max(xmax, plan.xmax[k]);
+    ymin = Math.min(ymin, plan.ymin[k]);
+    ymax = Math.max(ymax, plan.ymax[k]);
+  }
+  return { xmin, xmax, ymin, ymax };
+}
+
 export function sectionProperties(region: Region): SectionProperties {
-  const bounds = regionBounds(region);
+  const plan = planCuts(region);
+  const bounds = planBounds(plan);
   const cm = centralMoments(region);
   if (!bounds || !(cm.A > 0)) throw new SectionError('The section is empty: it has no area.');
   const extent = Math.max(bounds.xmax - bounds.xmin, bounds.ymax - bounds.ymin);
@@ -136,9 +150,9 @@ export function sectionProperties(region: Region): SectionProperties {
   // Fibre distances from the centroid's offset, so they keep their digits far from the origin.
   const top = bounds.ymax - cm.refY - cm.dy, bottom = cm.dy - (bounds.ymin - cm.refY);
   const right = bounds.xmax - cm.refX - cm.dx, left = cm.dx - (bounds.xmin - cm.refX);
-  const px = plasticAboutHorizontal(region, cm, bounds.ymin, bounds.ymax);
+  const px = plasticAboutHorizontal(plan, cm, bounds.ymin, bounds.ymax);
   // Vertical axis: turn by −90° exactly so x becomes y ((x, y) -> (y, −x)); the region keeps its sense.
-  const py = plasticAboutHorizontal(quarterTurnRegion(region, -1), turnedMoments(cm), -bounds.xmax, -bounds.xmin);
+  const py = plasticAboutHorizontal(turnPlan(plan, -1), turnedMoments(cm), -bounds.xmax, -bounds.xmin);
   let perimeter = 0;
   for (const c of region) perimeter += contourLength(c);
   const pos = (v: number) => Math.max(v, 0);
@@ -204,8 +218,10 @@ interface CutFrame {
 
 function cutFrame(region: Region, axis: 'x' | 'y'): CutFrame {
   // Right of x = at: turn by +90° exactly ((x, y) -> (−y, x)) so "right of" becomes "above".
-  const r = axis === 'y' ? region : quarterTurnRegion(region, 1);
-  return { plan: planCuts(r), cm: centralMoments(r) };
+  const plan = planCuts(region);
+  if (axis === 'y') return { plan, cm: centralMoments(region) };
+  const turned = turnPlan(plan, 1);
+  return { plan: turned, cm: centralMoments(turned.contours) };
 }
 
 function cutWith(frame: CutFrame, axis: 'x' | 'y', at: number, whole: { centroid: { x: number; y: number } }): CutResult {
