@@ -35,6 +35,8 @@ interface CachedShape {
   region: Region;
   warning: string | null;
   error: string | null;
+  /** The last ShapeResult handed out for this record (reused while its id is the same). */
+  result?: ShapeResult;
 }
 
 interface Run {
@@ -133,7 +135,8 @@ export function createEvaluator(): Evaluator {
           c = buildShape(s);
           shapeCache.set(s, c);
         }
-        shapes.push(c.error ? { id: s.id, region: c.region, error: c.error } : { id: s.id, region: c.region });
+        if (!c.result || c.result.id !== s.id) c.result = c.error ? { id: s.id, region: c.region, error: c.error } : { id: s.id, region: c.region };
+        shapes.push(c.result);
         if (c.error) warnings.push({ path: `shapes[${idx}]`, message: `left out of the section: ${c.error}` });
         if (c.warning) warnings.push({ path: `shapes[${idx}]`, message: c.warning });
         if (c.error || c.region.length === 0) return;

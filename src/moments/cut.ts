@@ -9,8 +9,8 @@
  * case. The cut width is the summed length of the closing pieces, Σ x_entry − Σ x_exit.
  */
 import type { Contour, Region } from '../geometry/contour';
-import { arcFromChord, quarterTurnRegion, regionBounds } from '../geometry/contour';
-import { addCircularSegment, regionMomentsAbout, regionReference, shiftMoments, type RawMoments } from './kernel';
+import { arcFromChord, quarterTurnRegion } from '../geometry/contour';
+import { addCircularSegment, contourSummary, regionReference, shiftMoments, type RawMoments } from './kernel';
 
 export interface HalfPlaneMoments extends RawMoments {
   /** Total length of the cut line inside the region (the width b at the cut). */
@@ -171,13 +171,12 @@ export function planCuts(region: Region): CutPlan {
   const xmin = new Float64Array(n), xmax = new Float64Array(n), ymin = new Float64Array(n), ymax = new Float64Array(n);
   const whole: Float64Array[] = [];
   contours.forEach((c, k) => {
-    const b = regionBounds([c]);
-    xmin[k] = b ? b.xmin : 0;
-    xmax[k] = b ? b.xmax : 0;
-    ymin[k] = b ? b.ymin : 0;
-    ymax[k] = b ? b.ymax : 0;
-    const m = regionMomentsAbout([c], c.xy[0], c.xy[1]);
-    whole.push(Float64Array.of(m.m00, m.m10, m.m01, m.m20, m.m02, m.m11));
+    const sm = contourSummary(c);
+    xmin[k] = sm.xmin;
+    xmax[k] = sm.xmax;
+    ymin[k] = sm.ymin;
+    ymax[k] = sm.ymax;
+    whole.push(sm.first);
   });
   return { contours, xmin, xmax, ymin, ymax, whole };
 }

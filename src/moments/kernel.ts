@@ -12,7 +12,7 @@
  * the centroid for centroidal ones) by the parallel-axis theorem in the direction that adds:
  * centroidal moments are never formed as m02 − A·ȳ² of origin moments, which cancels far out.
  */
-import type { Contour, Region } from '../geometry/contour';
+import { contourLength, regionBounds, type Contour, type Region } from '../geometry/contour';
 
 /** Raw moments about the document origin: m00 = A, m10 = ∫x, m01 = ∫y, m20 = ∫x², m02 = ∫y², m11 = ∫xy. */
 export interface RawMoments {
@@ -273,6 +273,54 @@ export interface CentralMoments {
 }
 
 /**
+ * What the properties need of one contour, computed once: its six sums about its first vertex,
+ * about its own centroid (where second moments do not cancel), its exact box and its length.
+ * Contours are values (nothing in the engine or the app writes into their arrays), so the
+ * summary is kept by the contour's identity: in a drag frame of a plate with thousands of holes,
+ * only the loops that moved are integrated again.
+ */
+export interface ContourSummary {
+  /** A, ∫x, ∫y, ∫x², ∫y², ∫xy about the first vertex (xy[0], xy[1]). */
+  readonly first: Float64Array;
+  /** The point the second set of sums is taken about: the centroid, or the first vertex. */
+  readonly gx: number;
+  readonly gy: number;
+  readonly central: Float64Array;
+  readonly xmin: number;
+  readonly xmax: number;
+  readonly ymin: number;
+  readonly ymax: number;
+  readonly length: number;
+}
+
+const SUMMARIES = new WeakMap<Contour, ContourSummary>();
+
+export function contourSummary(c: Contour): ContourSummary {
+  const hit = SUMMARIES.get(c);
+  if (hit) return hit;
+  const xy = c.xy, n = xy.length >> 1;
+  const x0 = n ? xy[0] : 0, y0 = n ? xy[1] : 0;
+  const first = contourAbout(c, x0, y0);
+  const b = regionBounds([c]) ?? { xmin: x0, xmax: x0, ymin: y0, ymax: y0 };
+  let gx = x0, gy = y0;
+  const a = first[0];
+  if (a !== 0 && Number.isFinite(a)) {
+    // The loop's centroid, unless it lies outside the loop's box widened by its size (a loop
+    // whose signed area nearly cancels): then the first vertex stays the better reference.
+    const cx = x0 + first[1] / a, cy = y0 + first[2] / a;
+    const pad = Math.max(b.xmax - b.xmin, b.ymax - b.ymin);
+    if (cx >= b.xmin - pad && cx <= b.xmax + pad && cy >= b.ymin - pad && cy <= b.ymax + pad) {
+      gx = cx;
+      gy = cy;
+    }
+  }
+  const central = gx === x0 && gy === y0 ? first : contourAbout(c, gx, gy);
+  const out: ContourSummary = { first, gx, gy, central, ...b, length: contourLength(c) };
+  SUMMARIES.set(c, out);
+  return out;
+}
+
+/**
  * Centroidal moments with no cancelling transfer. Each contour is summed twice: about its first
  * vertex for its area and centroid, then about that centroid for its second moments (a fan
  * from an inner point, whose terms do not cancel for a convex loop). The contours are then
@@ -283,32 +331,10 @@ export function centralMoments(region: Region): CentralMoments {
   const parts: { gx: number; gy: number; m: Float64Array }[] = [];
   let big = -1, bigA = -1;
   for (const c of region) {
-    const xy = c.xy, n = xy.length >> 1;
-    if (n < 2) continue;
-    const x0 = xy[0], y0 = xy[1];
-    const first = contourAbout(c, x0, y0);
-    let gx = x0, gy = y0;
-    const a = first[0];
-    if (a !== 0 && Number.isFinite(a)) {
-      // The loop's centroid, unless it lies outside the loop's box (a loop whose signed area
-      // nearly cancels): then the first vertex stays the better reference.
-      const cx = x0 + first[1] / a, cy = y0 + first[2] / a;
-      let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
-      for (let i = 0; i < 2 * n; i += 2) {
-        const x = xy[i], y = xy[i + 1];
-        if (x < xmin) xmin = x;
-        if (x > xmax) xmax = x;
-        if (y < ymin) ymin = y;
-        if (y > ymax) ymax = y;
-      }
-      const pad = Math.max(xmax - xmin, ymax - ymin);
-      if (cx >= xmin - pad && cx <= xmax + pad && cy >= ymin - pad && cy <= ymax + pad) {
-        gx = cx;
-        gy = cy;
-      }
-    }
-    const m = gx === x0 && gy === y0 ? first : contourAbout(c, gx, gy);
-    parts.push({ gx, gy, m });
+    if (c.xy.length < 4) continue;
+    const sm = contourSummary(c);
+    const m = sm.central;
+    parts.push({ gx: sm.gx, gy: sm.gy, m });
     if (Math.abs(m[0]) > bigA) {
       bigA = Math.abs(m[0]);
       big = parts.length - 1;

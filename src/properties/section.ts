@@ -10,7 +10,7 @@
  */
 import type { Region } from '../geometry/contour';
 import { contourLength, type Bounds } from '../geometry/contour';
-import { centralMoments, type CentralMoments, type RawMoments } from '../moments/kernel';
+import { centralMoments, contourSummary, type CentralMoments, type RawMoments } from '../moments/kernel';
 import { momentsAboveAbout, planCuts, turnPlan, type CutPlan } from '../moments/cut';
 
 export interface SectionProperties {
@@ -154,7 +154,7 @@ export function sectionProperties(region: Region): SectionProperties {
   // Vertical axis: turn by −90° exactly so x becomes y ((x, y) -> (y, −x)); the region keeps its sense.
   const py = plasticAboutHorizontal(turnPlan(plan, -1), turnedMoments(cm), -bounds.xmax, -bounds.xmin);
   let perimeter = 0;
-  for (const c of region) perimeter += contourLength(c);
+  for (const c of region) perimeter += c.xy.length >= 4 ? contourSummary(c).length : contourLength(c);
   const pos = (v: number) => Math.max(v, 0);
   const out: SectionProperties = {
     area: A,
