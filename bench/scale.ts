@@ -62,16 +62,27 @@ export function perforatedPlate(count: 400 | 4000): SectionDocument {
   return { format: 'kern-section', version: 1, units: 'mm', name: `Perforated plate, ${count} holes (benchmark)`, shapes };
 }
 
-/** Best of `reps` wall times (ms) of fn, after one warm-up call. */
-function best(fn: () => void, reps: number): number {
-  fn();
-  let t = Infinity;
-  for (let r = 0; r < reps; r++) {
-    const s = performance.now();
-    fn();
-    t = Math.min(t, performance.now() - s);
+/**
+ * Best wall time (ms) of each function over `rounds` rounds, the functions taking turns within
+ * each round (after one warm-up call each). Other work on the machine then slows both sides of a
+ * ratio alike instead of whichever happened to run during a busy second.
+ */
+function bestOfRounds(fns: (() => void)[], rounds: number): number[] {
+  for (const fn of fns) fn();
+  const best = fns.map(() => Infinity);
+  for (let r = 0; r < rounds; r++) {
+    fns.forEach((fn, k) => {
+      const s = performance.now();
+      fn();
+      best[k] = Math.min(best[k], performance.now() - s);
+    });
   }
-  return t;
+  return best;
+}
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.floor(s.length / 2)];
 }
 
 function p95(xs: number[]): number {
@@ -84,33 +95,27 @@ let sink = 0;
 export function scaleBenchmarks(result: Record<string, number | string>): void {
   // 1. One simple polygon, document to properties, at 2e4 and 2e5 vertices; the reference is
   //    polygon-clipping's union of the same polygon with itself.
-  const tPoly: Record<number, number> = {};
-  for (const n of [2e4, 2e5]) {
-    const doc = polygonDocument(wavyOutline(n));
-    tPoly[n] = best(() => {
-      sink += evaluateDocument(doc).props?.area ?? 0;
-    }, n > 1e5 ? 2 : 4);
-  }
+  const doc2e4 = polygonDocument(wavyOutline(2e4)), doc2e5 = polygonDocument(wavyOutline(2e5));
   const r2e5 = ring(wavyOutline(2e5));
-  const tRefPoly = best(() => {
-    sink += polygonClipping.union([[r2e5]], [[r2e5]]).length;
-  }, 1);
-  result.poly_2e5_props_s = +(tPoly[2e5] / 1000).toFixed(4);
+  const [t2e4, t2e5, tRefPoly] = bestOfRounds([
+    () => { sink += evaluateDocument(doc2e4).props?.area ?? 0; },
+    () => { sink += evaluateDocument(doc2e5).props?.area ?? 0; },
+    () => { sink += polygonClipping.union([[r2e5]], [[r2e5]]).length; },
+  ], 3);
+  result.poly_2e5_props_s = +(t2e5 / 1000).toFixed(4);
   result.poly_2e5_reference_s = +(tRefPoly / 1000).toFixed(4);
-  result.poly_2e5_ratio_to_reference = +(tPoly[2e5] / tRefPoly).toFixed(4);
-  result.poly_scaling_2e4_to_2e5 = +(tPoly[2e5] / tPoly[2e4]).toFixed(3);
-  console.log(`polygon 2e5: ${tPoly[2e5].toFixed(1)} ms (2e4: ${tPoly[2e4].toFixed(1)} ms), reference self-union ${tRefPoly.toFixed(1)} ms`);
+  result.poly_2e5_ratio_to_reference = +(t2e5 / tRefPoly).toFixed(4);
+  result.poly_scaling_2e4_to_2e5 = +(t2e5 / t2e4).toFixed(3);
+  console.log(`polygon 2e5: ${t2e5.toFixed(1)} ms (2e4: ${t2e4.toFixed(1)} ms), reference self-union ${tRefPoly.toFixed(1)} ms`);
 
   // 2. Union of two 1e5-vertex outlines that cross each other.
   const a = wavyOutline(1e5, 0, 0, 100, 0), b = wavyOutline(1e5, 40, 10, 90, 1.3);
   const ra: Region = [contourFrom(a)], rb: Region = [contourFrom(b)];
-  const tUnion = best(() => {
-    sink += booleanRegions(ra, [rb], 'union').length;
-  }, 2);
   const pa = ring(a), pb = ring(b);
-  const tRefUnion = best(() => {
-    sink += polygonClipping.union([[pa]], [[pb]]).length;
-  }, 1);
+  const [tUnion, tRefUnion] = bestOfRounds([
+    () => { sink += booleanRegions(ra, [rb], 'union').length; },
+    () => { sink += polygonClipping.union([[pa]], [[pb]]).length; },
+  ], 3);
   result.union_1e5_ms = +tUnion.toFixed(2);
   result.union_1e5_reference_ms = +tRefUnion.toFixed(2);
   result.union_1e5_ratio_to_reference = +(tUnion / tRefUnion).toFixed(4);
@@ -118,12 +123,10 @@ export function scaleBenchmarks(result: Record<string, number | string>): void {
 
   // 3. Perforated plates, document to properties (a fresh evaluator each time).
   const doc400 = perforatedPlate(400), doc4000 = perforatedPlate(4000);
-  const t400 = best(() => {
-    sink += evaluateDocument(doc400).props?.area ?? 0;
-  }, 5);
-  const t4000 = best(() => {
-    sink += evaluateDocument(doc4000).props?.area ?? 0;
-  }, 3);
+  const [t400, t4000] = bestOfRounds([
+    () => { sink += evaluateDocument(doc400).props?.area ?? 0; },
+    () => { sink += evaluateDocument(doc4000).props?.area ?? 0; },
+  ], 8);
   result.holes_400_s = +(t400 / 1000).toFixed(4);
   result.holes_4000_s = +(t4000 / 1000).toFixed(4);
   result.holes_scaling_400_to_4000 = +(t4000 / t400).toFixed(3);
@@ -145,7 +148,8 @@ export function scaleBenchmarks(result: Record<string, number | string>): void {
       frames.push(performance.now() - t);
     }
     result.holes400_drag_eval_p95_ms = +p95(frames.slice(20)).toFixed(3);
-    console.log(`400-hole plate drag: p95 ${result.holes400_drag_eval_p95_ms} ms per frame`);
+    result.holes400_drag_eval_median_ms = +median(frames.slice(20)).toFixed(3);
+    console.log(`400-hole plate drag: p95 ${result.holes400_drag_eval_p95_ms} ms, median ${result.holes400_drag_eval_median_ms} ms per frame`);
   }
   if (sink === 42) console.log('');
 }

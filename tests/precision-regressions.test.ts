@@ -169,6 +169,17 @@ describe('edges shorter than the grid', () => {
 });
 
 describe('below what the grid resolves', () => {
+  it('two rectangles overlapping by 2e-9 of their size keep the sliver between them', () => {
+    // Rectangle areas (Gere & Goodno App. E, case 1): the overlap is a 2e-9 × 0.5 sliver, far
+    // below the default grid (1/4e7 of the extent); the union and difference add up around it.
+    const a = polygonContour([[0, 0], [1, 0], [1, 1], [0, 1]]);
+    const b = polygonContour([[1 - 2e-9, 0.25], [2, 0.25], [2, 0.75], [1 - 2e-9, 0.75]]);
+    const w = 1 - (1 - 2e-9); // the overlap's width as the doubles hold it
+    close(regionMoments(booleanRegions([a], [[b]], 'intersection')).m00, w * 0.5, TOL);
+    close(regionMoments(booleanRegions([a], [[b]], 'union')).m00, 1 + 0.5 * (1 + 2e-9) - w * 0.5, 1e-15);
+    close(regionMoments(booleanRegions([a], [[b]], 'difference')).m00, 1 - w * 0.5, 1e-15);
+  });
+
   it('a very flat arc closed by its chord keeps its area (the flat arc that vanished)', () => {
     // Circular segment (Roark Table A.1) of half-angle α on a chord L: A = r²(α − sinα cosα)
     // = r²(2α − sin 2α)/2, r = L/(2 sin α); for α = 2e-6 the series (2α)³/6 − (2α)⁵/120 is exact.
