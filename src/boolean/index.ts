@@ -8,12 +8,12 @@
  */
 import { regionBounds, type Bounds, type Contour, type Region } from '../geometry/contour';
 import Flatbush from 'flatbush';
-import { contourSummary } from '../moments/kernel';
+import { contourBox } from '../moments/kernel';
 import { runBoolean } from './engine';
 
 export type BoolOp = 'union' | 'difference' | 'intersection';
 
-/** Exact bounds of a region from its contours' summaries (kept by identity across calls). */
+/** Exact bounds of a region from its contours' boxes (kept by identity across calls). */
 function boundsOf(r: Region): Bounds | null {
   let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
   for (const c of r) {
@@ -27,7 +27,8 @@ function boundsOf(r: Region): Bounds | null {
       ymax = Math.max(ymax, b.ymax);
       continue;
     }
-    const s = contourSummary(c);
+    const s = contourBox(c);
+    if (!s) continue;
     xmin = Math.min(xmin, s.xmin);
     xmax = Math.max(xmax, s.xmax);
     ymin = Math.min(ymin, s.ymin);

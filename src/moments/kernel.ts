@@ -12,7 +12,7 @@
  * the centroid for centroidal ones) by the parallel-axis theorem in the direction that adds:
  * centroidal moments are never formed as m02 − A·ȳ² of origin moments, which cancels far out.
  */
-import { contourLength, regionBounds, type Contour, type Region } from '../geometry/contour';
+import { contourLength, regionBounds, type Bounds, type Contour, type Region } from '../geometry/contour';
 
 /** Raw moments about the document origin: m00 = A, m10 = ∫x, m01 = ∫y, m20 = ∫x², m02 = ∫y², m11 = ∫xy. */
 export interface RawMoments {
@@ -294,6 +294,18 @@ export interface ContourSummary {
 }
 
 const SUMMARIES = new WeakMap<Contour, ContourSummary>();
+const BOXES = new WeakMap<Contour, Bounds>();
+
+/** A contour's exact box, kept by identity (the summary's, or computed alone when asked first). */
+export function contourBox(c: Contour): Bounds | null {
+  const s = SUMMARIES.get(c);
+  if (s) return s;
+  const hit = BOXES.get(c);
+  if (hit) return hit;
+  const b = regionBounds([c]);
+  if (b) BOXES.set(c, b);
+  return b;
+}
 
 export function contourSummary(c: Contour): ContourSummary {
   const hit = SUMMARIES.get(c);
@@ -301,7 +313,7 @@ export function contourSummary(c: Contour): ContourSummary {
   const xy = c.xy, n = xy.length >> 1;
   const x0 = n ? xy[0] : 0, y0 = n ? xy[1] : 0;
   const first = contourAbout(c, x0, y0);
-  const b = regionBounds([c]) ?? { xmin: x0, xmax: x0, ymin: y0, ymax: y0 };
+  const b = contourBox(c) ?? { xmin: x0, xmax: x0, ymin: y0, ymax: y0 };
   let gx = x0, gy = y0;
   const a = first[0];
   if (a !== 0 && Number.isFinite(a)) {
