@@ -6,7 +6,7 @@ import type { IntPoint } from 'clipper-lib';
 import { ARC, paramOf, pointAt } from './carriers';
 import { CIRCUMSCRIBE, INSCRIBE } from './arrangement';
 import { type Ctx, find, FREE_STEP, MAX_STEP, SAG_MAX } from './context';
-import { sortIndex } from './sort';
+import { NODE_UNITS } from './grid';
 
 function pushVertex(ctx: Ctx, path: IntPoint[], x: number, y: number, exact: boolean, car: number[]): void {
   const X = Math.round((x - ctx.ox) * ctx.scale), Y = Math.round((y - ctx.oy) * ctx.scale);
@@ -36,8 +36,15 @@ function mergeRecord(ctx: Ctx, id: number, x: number, y: number, exact: boolean,
   ctx.rCar[id] = merged;
 }
 
+/** Forgets the records and pieces of a first build of the paths (before a finer grid). */
+export function resetPaths(ctx: Ctx): void {
+  for (const a of [ctx.rx, ctx.ry, ctx.rX, ctx.rY, ctx.rExact, ctx.rCar, ctx.rAll, ctx.rAlt, ctx.chordPieces]) a.length = 0;
+  ctx.chordSag.fill(0);
+  ctx.maxTol = -1;
+}
+
 /** Step 3: integer chord paths, one per source contour of the given loops. */
-export function buildPaths(ctx: Ctx, loops: readonly number[]): { subj: IntPoint[][]; clip: IntPoint[][] } {
+export function buildPaths(ctx: Ctx, loops: readonly number[]): { subj: IntPoint[][]; clip: IntPoint[][]; closest: number } {
   const subj: IntPoint[][] = [], clip: IntPoint[][] = [];
   const cs = ctx.carriers;
   for (const l of loops) {
@@ -114,29 +121,79 @@ export function buildPaths(ctx: Ctx, loops: readonly number[]): { subj: IntPoint
     if (path.length < 3) continue;
     (loop.group === 0 ? subj : clip).push(path);
   }
-  // Records of different loops at one integer point stay apart (each keeps its own exact point
-  // and carriers); every one of them learns the others, because clipper keeps one tag there.
-  // Records sorted by their integer point put those at one point next to each other.
+  const closest = groupRecords(ctx);
+  return { subj, clip, closest };
+}
+
+/** Records kept per hash cell for comparison (a crowded cell is below the grid anyway). */
+const CROWD = 16;
+
+/**
+ * Records of different loops at one integer point stay apart (each keeps its own exact point and
+ * carriers); every one of them learns the others, because clipper keeps one tag there. The same
+ * pass finds the smallest distance between two distinct exact points within NODE_UNITS grid
+ * units of each other (Infinity if none), which tells grid.ts whether the grid is too coarse.
+ * Records are hashed into cells of NODE_UNITS units (open addressing on typed arrays) and each
+ * is compared with those of its 3 × 3 cells: linear in the record count.
+ */
+function groupRecords(ctx: Ctx): number {
   const nr = ctx.rX.length;
   for (let r = 0; r < nr; r++) {
     ctx.rAll.push(ctx.rCar[r]);
     ctx.rAlt.push(null);
   }
-  const order = sortIndex(Float64Array.from(ctx.rX), Float64Array.from(ctx.rY));
-  for (let i = 0; i < nr; ) {
-    let j = i + 1;
-    const X = ctx.rX[order[i]], Y = ctx.rY[order[i]];
-    while (j < nr && ctx.rX[order[j]] === X && ctx.rY[order[j]] === Y) j++;
-    if (j - i > 1) {
-      const list = Array.from(order.subarray(i, j));
-      const all: number[] = [];
-      for (const r of list) for (const c of ctx.rCar[r]) if (!all.includes(c)) all.push(c);
-      for (const r of list) {
-        ctx.rAll[r] = all;
-        ctx.rAlt[r] = list;
+  let size = 1;
+  while (size < 2 * nr) size <<= 1;
+  const mask = size - 1;
+  const ci = new Float64Array(size), cj = new Float64Array(size), head = new Int32Array(size).fill(-1), count = new Int32Array(size);
+  const next = new Int32Array(nr).fill(-1);
+  const same = new Int32Array(nr).fill(-1); // a record at the same integer point seen before
+  const rX = ctx.rX, rY = ctx.rY, rx = ctx.rx, ry = ctx.ry, ex = ctx.rExact;
+  let best = Infinity;
+  const near = NODE_UNITS * ctx.unit;
+  for (let r = 0; r < nr; r++) {
+    const X = rX[r], Y = rY[r];
+    const i = Math.floor(X / NODE_UNITS), j = Math.floor(Y / NODE_UNITS);
+    let home = -1;
+    for (let di = -1; di <= 1; di++) {
+      for (let dj = -1; dj <= 1; dj++) {
+        const a = i + di, b = j + dj;
+        let h = (Math.imul(a | 0, 0x27d4eb2d) ^ Math.imul(b | 0, 0x165667b1)) & mask;
+        while (head[h] >= 0 && !(ci[h] === a && cj[h] === b)) h = (h + 1) & mask;
+        if (di === 0 && dj === 0) home = h;
+        for (let q = head[h]; q >= 0; q = next[q]) {
+          if (rX[q] === X && rY[q] === Y && same[r] < 0) same[r] = q;
+          if (!ex[q] || !ex[r]) continue;
+          const d = Math.sqrt((rx[q] - rx[r]) ** 2 + (ry[q] - ry[r]) ** 2);
+          if (d > 0 && d < best && d < near) best = d;
+        }
       }
     }
-    i = j;
+    if (head[home] < 0) {
+      ci[home] = i;
+      cj[home] = j;
+    } else if (count[home] >= CROWD) continue;
+    next[r] = head[home];
+    head[home] = r;
+    count[home]++;
   }
-  return { subj, clip };
+  // Groups of records at one integer point: each record links to an earlier one there.
+  const groups = new Map<number, number[]>();
+  for (let r = 0; r < nr; r++) {
+    if (same[r] < 0) continue;
+    let root = same[r];
+    while (same[root] >= 0) root = same[root];
+    const list = groups.get(root);
+    if (list) list.push(r);
+    else groups.set(root, [root, r]);
+  }
+  for (const list of groups.values()) {
+    const all: number[] = [];
+    for (const r of list) for (const c of ctx.rCar[r]) if (!all.includes(c)) all.push(c);
+    for (const r of list) {
+      ctx.rAll[r] = all;
+      ctx.rAlt[r] = list;
+    }
+  }
+  return best;
 }

@@ -18,10 +18,10 @@ import type { IntPoint } from 'clipper-lib';
 import type { Contour, Region } from '../geometry/contour';
 import { buildArrangement, buildCarriers } from './arrangement';
 import { CarrierStore, hyp } from './carriers';
-import { buildPaths } from './chords';
+import { buildPaths, resetPaths } from './chords';
 import { INT_RANGE, REL_EPS, type Ctx, type Mode, type SourceGroup } from './context';
 import { digonLoops, findDigons } from './digons';
-import { chooseGrid } from './grid';
+import { coarseGrid, refineGrid } from './grid';
 import { partitionLoops, settleFreeLoops } from './isolated';
 import { tracePath } from './trace';
 
@@ -71,8 +71,13 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
   const { clipped, free, box } = partitionLoops(ctx);
   const region: Contour[] = [];
   if (clipped.length) {
-    chooseGrid(ctx, clipped);
-    const { subj, clip } = buildPaths(ctx, clipped);
+    coarseGrid(ctx);
+    let paths = buildPaths(ctx, clipped);
+    if (refineGrid(ctx, paths.closest)) {
+      resetPaths(ctx);
+      paths = buildPaths(ctx, clipped);
+    }
+    const { subj, clip } = paths;
     findDigons(ctx);
     ClipperLib.use_xyz = true; // module-wide flag: set again in case another user turned it off
     const cpr = new ClipperLib.Clipper();
