@@ -42,55 +42,49 @@ export function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
         xy = exy;
         bl = ebl;
       }
-      const vx: number[] = [], vy: number[] = [], vb: number[] = [];
       const m0 = xy.length >> 1;
+      const vx = new Float64Array(m0), vy = new Float64Array(m0), vb = new Float64Array(m0);
+      let m = 0;
       for (let i = 0; i < m0; i++) {
         const x = xy[2 * i], y = xy[2 * i + 1];
-        const k = vx.length;
-        if (k > 0 && hyp(x - vx[k - 1], y - vy[k - 1]) <= eps) {
-          vb[k - 1] = bl[i]; // the zero-length edge goes; the next edge starts at the kept vertex
+        if (m > 0 && hyp(x - vx[m - 1], y - vy[m - 1]) <= eps) {
+          vb[m - 1] = bl[i]; // the zero-length edge goes; the next edge starts at the kept vertex
           continue;
         }
-        vx.push(x);
-        vy.push(y);
-        vb.push(bl[i]);
+        vx[m] = x;
+        vy[m] = y;
+        vb[m] = bl[i];
+        m++;
       }
       // Closing duplicates; the surviving last vertex keeps its own outgoing bulge only if distinct.
-      while (vx.length > 1 && hyp(vx[vx.length - 1] - vx[0], vy[vy.length - 1] - vy[0]) <= eps) {
-        vx.pop();
-        vy.pop();
-        vb.pop();
-      }
-      const m = vx.length;
+      while (m > 1 && hyp(vx[m - 1] - vx[0], vy[m - 1] - vy[0]) <= eps) m--;
       if (m < 2) continue;
-      const nodes: number[] = [];
-      for (let i = 0; i < m; i++) nodes.push(newNode(ctx, vx[i], vy[i]));
-      const ids: number[] = [];
+      // Node i joins carriers i − 1 and i (ids are consecutive from the first).
+      const first = ctx.carriers.length, node0 = ctx.nx.length;
+      for (let i = 0; i < m; i++) newNode(ctx, vx[i], vy[i], [first + ((i + m - 1) % m), first + i]);
+      const ids: number[] = new Array(m);
       for (let i = 0; i < m; i++) {
-        const j = (i + 1) % m;
+        const j = i + 1 === m ? 0 : i + 1;
         const ax = vx[i], ay = vy[i], bx = vx[j], by = vy[j];
-        const L = hyp(bx - ax, by - ay);
         const b = vb[i];
-        const id = ctx.carriers.length;
+        const id = first + i;
         let car: Carrier;
         // A nearly flat arc (radius far beyond the extent, where centre-based formulas lose
         // their digits) is traced as its chord and gets its sweep back on output.
         const phi = b !== 0 ? 4 * Math.atan(b) : 0;
-        const rr = phi !== 0 ? L / (2 * Math.sin(Math.abs(phi) / 2)) : Infinity;
+        const rr = phi !== 0 ? hyp(bx - ax, by - ay) / (2 * Math.sin(Math.abs(phi) / 2)) : Infinity;
         if (phi !== 0 && rr <= FLAT_RADIUS * ctx.ext) {
           const { cx, cy, r } = arcFromBulge(ax, ay, bx, by, b);
           car = makeArc(ctx.store, id, g.group, ax, ay, bx, by, cx, cy, r, phi, b);
         } else car = makeLine(ctx.store, id, g.group, ax, ay, bx, by, phi, b);
-        car.n0 = nodes[i];
-        car.n1 = nodes[j];
+        car.n0 = node0 + i;
+        car.n1 = node0 + j;
         ctx.carriers.push(car);
         ctx.splits.push(null);
         ctx.sag.push(car.kind === ARC ? SAG_MAX * car.r : 0);
         ctx.side.push(0);
         ctx.chordSag.push(0);
-        ctx.ncar[nodes[i]].push(id);
-        ctx.ncar[nodes[j]].push(id);
-        ids.push(id);
+        ids[i] = id;
       }
       for (let k = 0; k < ids.length; k++) ctx.loopOf.push(ctx.loops.length);
       ctx.loops.push({ group: g.group, ids });

@@ -128,11 +128,12 @@ export function union(ctx: Ctx, a: number, b: number): void {
   else ctx.parent[a] = b;
 }
 
-export function newNode(ctx: Ctx, x: number, y: number): number {
+/** A new exact node at (x, y), with the carriers through it known so far. */
+export function newNode(ctx: Ctx, x: number, y: number, carriers: number[] = []): number {
   const id = ctx.nx.length;
   ctx.nx.push(x);
   ctx.ny.push(y);
-  ctx.ncar.push([]);
+  ctx.ncar.push(carriers);
   ctx.parent.push(id);
   return id;
 }
