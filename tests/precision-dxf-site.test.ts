@@ -11,10 +11,10 @@
  */
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { importDxf } from '../src/exchange/dxf-import';
 import { cutSection, evaluateDocument, type SectionDocument } from '../src';
-import { close } from './helpers';
+import { close, worst } from './helpers';
 
 const FIX = join(__dirname, 'fixtures', 'dxf');
 const DX = 503217.25, DY = 4012684.5;
@@ -58,4 +58,8 @@ describe('a DXF drawing at site coordinates', () => {
       close(c1.Q, c0.Q, TOL, p0.area * 100);
     }
   });
+});
+
+afterAll(() => {
+  console.log(`precision-dxf-site: largest relative error ${worst.value.toExponential(2)}`);
 });

@@ -8,13 +8,13 @@
  * segment). Where a published closed form cancels for thin slivers, its value was evaluated once
  * with 60-digit arithmetic (mpmath) and is quoted below with the form it came from.
  */
-import { describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { booleanRegions, resolveOutline } from '../src/boolean';
 import { circleContour, contourFrom, polygonContour, reverseContour, type Region } from '../src/geometry/contour';
 import { regionMoments } from '../src/moments/kernel';
 import { sectionProperties } from '../src/properties/section';
 import { evaluateDocument, type SectionDocument } from '../src';
-import { close } from './helpers';
+import { close, worst } from './helpers';
 
 const TOL = 1e-9;
 const PI = Math.PI;
@@ -222,4 +222,8 @@ describe('below what the grid resolves', () => {
     const rest = booleanRegions([circleContour(0, 0, 10)], [[circleContour(20 - 1e-8, 0, 10)]], 'difference');
     close(regionMoments(rest).m00, PI * 100 - Number('4.2163707365376757113e-12'), 1e-14);
   });
+});
+
+afterAll(() => {
+  console.log(`precision-regressions: largest relative error ${worst.value.toExponential(2)}`);
 });
