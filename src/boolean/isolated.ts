@@ -13,8 +13,7 @@
  * whole answer there.
  */
 import Flatbush from 'flatbush';
-import { reverseContour, type Contour } from '../geometry/contour';
-import { regionMomentsAbout } from '../moments/kernel';
+import type { Contour } from '../geometry/contour';
 import { ARC, windingOf, type Carrier } from './carriers';
 import type { Ctx } from './context';
 import { inResult, windingsAt } from './spatial';
@@ -66,23 +65,53 @@ export function partitionLoops(ctx: Ctx): { clipped: number[]; free: number[]; b
   return { clipped, free, box };
 }
 
-/** The loop's exact contour, from its carriers (arcs over 180° already split in two). */
-export function loopContour(ctx: Ctx, l: number): Contour {
+/**
+ * The loop's exact contour, from its carriers (arcs over 180° already split in two), run the
+ * other way round when `reversed` (every moment changes sign).
+ */
+export function loopContour(ctx: Ctx, l: number, reversed = false): Contour {
   const ids = ctx.loops[l].ids;
-  const xy = new Float64Array(2 * ids.length);
-  const bulge = new Float64Array(ids.length);
+  const m = ids.length;
+  const xy = new Float64Array(2 * m);
+  const bulge = new Float64Array(m);
   let anyArc = false;
-  ids.forEach((id, k) => {
-    const c: Carrier = ctx.carriers[id];
-    xy[2 * k] = c.ax;
-    xy[2 * k + 1] = c.ay;
+  for (let k = 0; k < m; k++) {
+    const c: Carrier = ctx.carriers[ids[k]];
     const sweep = c.kind === ARC ? c.phi : c.flat;
-    if (sweep !== 0) {
-      bulge[k] = Math.tan(sweep / 4);
+    // Reversed, vertex k is carrier (m − 1 − k)'s end and its segment runs back along it.
+    const o = reversed ? m - 1 - k : k;
+    const cr: Carrier = reversed ? ctx.carriers[ids[o]] : c;
+    xy[2 * k] = reversed ? cr.bx : c.ax;
+    xy[2 * k + 1] = reversed ? cr.by : c.ay;
+    const sw = reversed ? -(cr.kind === ARC ? cr.phi : cr.flat) : sweep;
+    if (sw !== 0) {
+      bulge[k] = Math.tan(sw / 4);
       anyArc = true;
     }
-  });
+  }
   return { xy, bulge: anyArc ? bulge : null };
+}
+
+/** Signed area of the loop from its carriers: the chords' shoelace plus each arc's segment. */
+function loopArea(ctx: Ctx, l: number): number {
+  const ids = ctx.loops[l].ids;
+  const c0 = ctx.carriers[ids[0]];
+  const ox = c0.ax, oy = c0.ay;
+  let a = 0;
+  for (const id of ids) {
+    const c = ctx.carriers[id];
+    const ax = c.ax - ox, ay = c.ay - oy, bx = c.bx - ox, by = c.by - oy;
+    a += (ax * (by - ay) - ay * (bx - ax)) / 2;
+    const sweep = c.kind === ARC ? c.phi : c.flat;
+    if (sweep !== 0) {
+      // Circular segment on the chord: r²(α − sinα cosα) with r = L/(2 sin α), α = |sweep|/2.
+      const al = Math.abs(sweep) / 2, L2 = (bx - ax) ** 2 + (by - ay) ** 2;
+      const sa = Math.sin(al);
+      const seg = al < 1e-3 ? (L2 * al) / 6 : (L2 / (4 * sa * sa)) * (al - sa * Math.cos(al));
+      a += sweep > 0 ? seg : -seg;
+    }
+  }
+  return a;
 }
 
 /** Loops with more carriers than this are not scanned whole for one point (see below). */
@@ -107,11 +136,11 @@ export function settleFreeLoops(ctx: Ctx, free: readonly number[], box: Float64A
   loopIdx.finish();
   const big = new Uint8Array(L);
   for (const l of free) {
-    const c = loopContour(ctx, l);
-    if (c.xy.length < 4) continue;
-    const A = regionMomentsAbout([c], c.xy[0], c.xy[1]).m00;
+    if (ctx.loops[l].ids.length < 2) continue;
+    const A = loopArea(ctx, l);
     if (!(A !== 0) || !Number.isFinite(A)) continue;
-    const x = c.xy[0], y = c.xy[1];
+    const c0 = ctx.carriers[ctx.loops[l].ids[0]];
+    const x = c0.ax, y = c0.ay;
     let w0 = 0, w1 = 0, anyBig = false;
     for (const o of loopIdx.search(x, y, x, y)) {
       if (o === l) continue;
@@ -139,7 +168,7 @@ export function settleFreeLoops(ctx: Ctx, free: readonly number[], box: Float64A
     const inLeft = inResult(ctx, g === 0 ? w0 + left : w0, g === 0 ? w1 : w1 + left);
     const inRight = inResult(ctx, g === 0 ? w0 + right : w0, g === 0 ? w1 : w1 + right);
     if (inLeft === inRight) continue;
-    out.push(inLeft ? c : reverseContour(c));
+    out.push(loopContour(ctx, l, !inLeft));
   }
   return out;
 }
