@@ -12,6 +12,7 @@ import { polygonMoments } from '../src/moments/kernel';
 import { createEvaluator, evaluateDocument } from '../src';
 import { computeRegionTorsion } from '../src/torsion';
 import { fiftyShapeDocument } from './doc50';
+import { scaleBenchmarks } from './scale';
 
 function median(xs: number[]): number {
   const s = [...xs].sort((a, b) => a - b);
@@ -124,6 +125,9 @@ result.doc50_eval_ms = +time(() => {
   result.doc50_drag_eval_p95_ms = +p95(frames.slice(20)).toFixed(3);
 }
 console.log(`doc50: cold ${result.doc50_eval_ms} ms, drag frame median ${result.doc50_drag_eval_median_ms} ms, p95 ${result.doc50_drag_eval_p95_ms} ms`);
+
+// 3b. Scale figures (dense polygons against a reference library, perforated plates): bench/scale.ts.
+scaleBenchmarks(result);
 
 // 4. Browser figure: Playwright drags a shape of the 50-shape section in headless Chromium.
 const dragBench = new URL('../e2e/drag-bench.mjs', import.meta.url);

@@ -2,83 +2,93 @@
  * Steps 1 and 2: exact carriers from the source contours, then every contact between carriers
  * (crossings, touches, overlaps) computed once and shared as an exact node by both sides.
  */
-import { arcFromChord, pushArc } from '../geometry/contour';
+import { arcFromBulge, pushArc } from '../geometry/contour';
 import {
   ARC, curveIntersections, distToCarrier, implicitAt, makeArc, makeLine, paramOf, polishIntersection,
-  sameCurve, type Carrier,
+  sameCurve, hyp, type Carrier,
 } from './carriers';
 import { type Ctx, type SourceGroup, find, union, newNode, SAG_MAX, SAG_FLOOR, FLAT_RADIUS } from './context';
+import { forEachNearPair } from './spatial';
 
 /** Step 1: carriers and vertex nodes from the source contours. */
+/** Every vertex finite and every bulge finite and within [−1, 1]. */
+function plainContour(xy: Float64Array, bulge: Float64Array | null): boolean {
+  for (let i = 0; i < xy.length; i++) if (!Number.isFinite(xy[i])) return false;
+  if (bulge) for (let i = 0; i < bulge.length; i++) if (!(Math.abs(bulge[i]) <= 1)) return false;
+  return true;
+}
+
 export function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
   const eps = ctx.eps;
   for (const g of groups) {
     for (const c of g.contours) {
       const n = c.xy.length >> 1;
       if (n < 2) continue;
-      // Expand arcs over 180 degrees, then drop repeated vertices (zero-length edges).
-      const xy: number[] = [], bl: number[] = [];
-      for (let i = 0; i < n; i++) {
-        const ax = c.xy[2 * i], ay = c.xy[2 * i + 1];
-        const j = (i + 1) % n;
-        const bx = c.xy[2 * j], by = c.xy[2 * j + 1];
-        const b = c.bulge ? c.bulge[i] : 0;
-        if (!Number.isFinite(ax) || !Number.isFinite(ay)) continue;
-        xy.push(ax, ay);
-        if (Number.isFinite(b) && b !== 0 && Math.abs(b) > 1) pushArc(xy, bl, ax, ay, bx, by, 4 * Math.atan(b));
-        else bl.push(Number.isFinite(b) ? b : 0);
+      // Expand arcs over 180 degrees, then drop repeated vertices (zero-length edges). A contour
+      // with finite vertices and no such arc (the usual case) is read as it is.
+      let xy: ArrayLike<number> = c.xy, bl: ArrayLike<number> = c.bulge ?? new Float64Array(n);
+      if (!plainContour(c.xy, c.bulge)) {
+        const exy: number[] = [], ebl: number[] = [];
+        for (let i = 0; i < n; i++) {
+          const ax = c.xy[2 * i], ay = c.xy[2 * i + 1];
+          const j = (i + 1) % n;
+          const bx = c.xy[2 * j], by = c.xy[2 * j + 1];
+          const b = c.bulge ? c.bulge[i] : 0;
+          if (!Number.isFinite(ax) || !Number.isFinite(ay)) continue;
+          exy.push(ax, ay);
+          if (Number.isFinite(b) && b !== 0 && Math.abs(b) > 1) pushArc(exy, ebl, ax, ay, bx, by, 4 * Math.atan(b));
+          else ebl.push(Number.isFinite(b) ? b : 0);
+        }
+        xy = exy;
+        bl = ebl;
       }
-      const vx: number[] = [], vy: number[] = [], vb: number[] = [];
       const m0 = xy.length >> 1;
+      const vx = new Float64Array(m0), vy = new Float64Array(m0), vb = new Float64Array(m0);
+      let m = 0;
       for (let i = 0; i < m0; i++) {
         const x = xy[2 * i], y = xy[2 * i + 1];
-        const k = vx.length;
-        if (k > 0 && Math.hypot(x - vx[k - 1], y - vy[k - 1]) <= eps) {
-          vb[k - 1] = bl[i]; // the zero-length edge goes; the next edge starts at the kept vertex
+        if (m > 0 && hyp(x - vx[m - 1], y - vy[m - 1]) <= eps) {
+          vb[m - 1] = bl[i]; // the zero-length edge goes; the next edge starts at the kept vertex
           continue;
         }
-        vx.push(x);
-        vy.push(y);
-        vb.push(bl[i]);
+        vx[m] = x;
+        vy[m] = y;
+        vb[m] = bl[i];
+        m++;
       }
       // Closing duplicates; the surviving last vertex keeps its own outgoing bulge only if distinct.
-      while (vx.length > 1 && Math.hypot(vx[vx.length - 1] - vx[0], vy[vy.length - 1] - vy[0]) <= eps) {
-        vx.pop();
-        vy.pop();
-        vb.pop();
-      }
-      const m = vx.length;
+      while (m > 1 && hyp(vx[m - 1] - vx[0], vy[m - 1] - vy[0]) <= eps) m--;
       if (m < 2) continue;
-      const nodes: number[] = [];
-      for (let i = 0; i < m; i++) nodes.push(newNode(ctx, vx[i], vy[i]));
-      const ids: number[] = [];
+      // Node i joins carriers i − 1 and i (ids are consecutive from the first).
+      const first = ctx.carriers.length, node0 = ctx.nx.length;
+      for (let i = 0; i < m; i++) newNode(ctx, vx[i], vy[i], [first + ((i + m - 1) % m), first + i]);
+      const ids: number[] = new Array(m);
       for (let i = 0; i < m; i++) {
-        const j = (i + 1) % m;
+        const j = i + 1 === m ? 0 : i + 1;
         const ax = vx[i], ay = vy[i], bx = vx[j], by = vy[j];
-        const L = Math.hypot(bx - ax, by - ay);
         const b = vb[i];
-        const id = ctx.carriers.length;
+        const id = first + i;
         let car: Carrier;
         // A nearly flat arc (radius far beyond the extent, where centre-based formulas lose
         // their digits) is traced as its chord and gets its sweep back on output.
         const phi = b !== 0 ? 4 * Math.atan(b) : 0;
-        const rr = phi !== 0 ? L / (2 * Math.sin(Math.abs(phi) / 2)) : Infinity;
+        const rr = phi !== 0 ? hyp(bx - ax, by - ay) / (2 * Math.sin(Math.abs(phi) / 2)) : Infinity;
         if (phi !== 0 && rr <= FLAT_RADIUS * ctx.ext) {
-          const { cx, cy, r } = arcFromChord(ax, ay, bx, by, phi);
-          car = makeArc(id, g.group, ax, ay, bx, by, cx, cy, r, phi);
-        } else car = makeLine(id, g.group, ax, ay, bx, by, phi);
-        car.n0 = nodes[i];
-        car.n1 = nodes[j];
+          const { cx, cy, r } = arcFromBulge(ax, ay, bx, by, b);
+          car = makeArc(ctx.store, id, g.group, ax, ay, bx, by, cx, cy, r, phi, b);
+        } else car = makeLine(ctx.store, id, g.group, ax, ay, bx, by, phi, b);
+        car.n0 = node0 + i;
+        car.n1 = node0 + j;
         ctx.carriers.push(car);
         ctx.splits.push(null);
         ctx.sag.push(car.kind === ARC ? SAG_MAX * car.r : 0);
         ctx.side.push(0);
         ctx.chordSag.push(0);
-        ctx.ncar[nodes[i]].push(id);
-        ctx.ncar[nodes[j]].push(id);
-        ids.push(id);
+        ids[i] = id;
       }
+      for (let k = 0; k < ids.length; k++) ctx.loopOf.push(ctx.loops.length);
       ctx.loops.push({ group: g.group, ids });
+      ctx.touched.push(0);
       for (let k = 0; k < ids.length; k++) {
         ctx.loopLo.push(ids[0]);
         ctx.loopHi.push(ids[ids.length - 1]);
@@ -88,7 +98,7 @@ export function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
 }
 
 function endpointNode(ctx: Ctx, c: Carrier, x: number, y: number): number {
-  const d0 = Math.hypot(x - c.ax, y - c.ay), d1 = Math.hypot(x - c.bx, y - c.by);
+  const d0 = hyp(x - c.ax, y - c.ay), d1 = hyp(x - c.bx, y - c.by);
   if (d0 <= ctx.eps && d0 <= d1) return c.n0;
   if (d1 <= ctx.eps) return c.n1;
   return -1;
@@ -99,17 +109,24 @@ function addSplit(ctx: Ctx, c: Carrier, node: number): void {
   ctx.ncar[node].push(c.id);
 }
 
+/** Carriers a and b meet away from a vertex they share: their loops interact. */
+function touch(ctx: Ctx, a: Carrier, b: Carrier): void {
+  ctx.contact = true;
+  ctx.touched[ctx.loopOf[a.id]] = 1;
+  ctx.touched[ctx.loopOf[b.id]] = 1;
+}
+
 /** A common point p of carriers a and b: share it as one exact node. */
 function sharePoint(ctx: Ctx, a: Carrier, b: Carrier, x: number, y: number): void {
   const ea = endpointNode(ctx, a, x, y), eb = endpointNode(ctx, b, x, y);
   if (ea >= 0 && eb >= 0) {
     if (find(ctx, ea) !== find(ctx, eb)) {
       union(ctx, ea, eb);
-      ctx.contact = true;
+      touch(ctx, a, b);
     }
     return;
   }
-  ctx.contact = true;
+  touch(ctx, a, b);
   if (ea >= 0) addSplit(ctx, b, ea);
   else if (eb >= 0) addSplit(ctx, a, eb);
   else {
@@ -167,9 +184,9 @@ function touchEnds(ctx: Ctx, a: Carrier, b: Carrier): void {
 function distExact(c: Carrier, x: number, y: number): number {
   if (c.kind === ARC || c.flat === 0) return distToCarrier(c, x, y);
   const u = paramOf(c, x, y);
-  if (u < 0 || u > 1) return Math.min(Math.hypot(x - c.ax, y - c.ay), Math.hypot(x - c.bx, y - c.by));
+  if (u < 0 || u > 1) return Math.min(hyp(x - c.ax, y - c.ay), hyp(x - c.bx, y - c.by));
   const [f, gx, gy] = implicitAt(c, x, y);
-  return Math.abs(f) / Math.hypot(gx, gy);
+  return Math.abs(f) / hyp(gx, gy);
 }
 
 /**
@@ -190,7 +207,7 @@ function demand(ctx: Ctx, c: Carrier, side: number, gap: number): void {
 
 /** Nested, nearly tangent circles (the inner within a sagitta of the outer). */
 function refineNested(ctx: Ctx, a: Carrier, b: Carrier): void {
-  const D = Math.hypot(a.cx - b.cx, a.cy - b.cy);
+  const D = hyp(a.cx - b.cx, a.cy - b.cy);
   const gap = Math.abs(a.r - b.r) - D;
   const outer = a.r >= b.r ? a : b, inner = outer === a ? b : a;
   if (!(gap > 0) || gap >= 2 * SAG_MAX * outer.r) return;
@@ -202,7 +219,7 @@ function refineNested(ctx: Ctx, a: Carrier, b: Carrier): void {
 function refineNearVertex(ctx: Ctx, a: Carrier, b: Carrier): void {
   for (let k = 0; k < 2; k++) {
     const x = k === 0 ? b.ax : b.bx, y = k === 0 ? b.ay : b.by;
-    const d = Math.hypot(x - a.cx, y - a.cy);
+    const d = hyp(x - a.cx, y - a.cy);
     const gap = Math.abs(a.r - d);
     if (!(gap > ctx.eps) || gap >= 1.5 * SAG_MAX * a.r || !(d > 0)) continue;
     const u = paramOf(a, x, y);
@@ -211,29 +228,29 @@ function refineNearVertex(ctx: Ctx, a: Carrier, b: Carrier): void {
   }
 }
 
-/** Step 2: all pairwise contacts, with a sweep over x as the broad phase. */
+/** Step 2: all pairwise contacts; the broad phase is spatial.ts forEachNearPair. */
 export function buildArrangement(ctx: Ctx): void {
-  const cs = ctx.carriers;
-  const order = cs.map((_, i) => i).sort((i, j) => cs[i].xmin - cs[j].xmin);
-  const eps = ctx.eps;
-  for (let p = 0; p < order.length; p++) {
-    const a = cs[order[p]];
-    for (let q = p + 1; q < order.length; q++) {
-      const b = cs[order[q]];
-      if (b.xmin > a.xmax + eps) break;
-      if (b.ymin > a.ymax + eps || b.ymax < a.ymin - eps) continue;
-      if (ctx.trustLoops && ctx.loopLo[a.id] === ctx.loopLo[b.id]) {
-        const d = Math.abs(a.id - b.id);
-        if (d === 1 || d === ctx.loopHi[a.id] - ctx.loopLo[a.id]) {
-          // Neighbours on a well-formed loop meet at their shared vertex; only a far end lying
-          // on the other one (a pinched loop) is left to find.
+  ctx.crowded = new Uint8Array(ctx.carriers.length);
+  forEachNearPair(ctx, (a, b) => {
+    if (ctx.loopLo[a.id] === ctx.loopLo[b.id]) {
+      const d = Math.abs(a.id - b.id);
+      // Neighbours on a loop meet at their shared vertex. On a well-formed loop (and for two
+      // straight edges on any loop, which cannot meet twice unless they overlap) only a far end
+      // lying on the other one (a pinched loop, a spike) is left to find.
+      const lines = a.kind !== ARC && b.kind !== ARC && a.flat === 0 && b.flat === 0;
+      if (d === 1 || d === ctx.loopHi[a.id] - ctx.loopLo[a.id]) {
+        if (ctx.trustLoops || lines) {
           touchEnds(ctx, a, b);
-          continue;
+          return;
         }
+        intersectPair(ctx, a, b);
+        return;
       }
-      intersectPair(ctx, a, b);
     }
-  }
+    ctx.crowded[a.id] = 1;
+    ctx.crowded[b.id] = 1;
+    intersectPair(ctx, a, b);
+  });
   // Merged nodes: the representative carries every member's carriers.
   const nn = ctx.nx.length;
   for (let i = 0; i < nn; i++) {

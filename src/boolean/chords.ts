@@ -5,7 +5,8 @@
 import type { IntPoint } from 'clipper-lib';
 import { ARC, paramOf, pointAt } from './carriers';
 import { CIRCUMSCRIBE, INSCRIBE } from './arrangement';
-import { type Ctx, find, MAX_STEP, SAG_MAX } from './context';
+import { type Ctx, find, FREE_STEP, MAX_STEP, SAG_MAX } from './context';
+import { NODE_UNITS } from './grid';
 
 function pushVertex(ctx: Ctx, path: IntPoint[], x: number, y: number, exact: boolean, car: number[]): void {
   const X = Math.round((x - ctx.ox) * ctx.scale), Y = Math.round((y - ctx.oy) * ctx.scale);
@@ -35,16 +36,30 @@ function mergeRecord(ctx: Ctx, id: number, x: number, y: number, exact: boolean,
   ctx.rCar[id] = merged;
 }
 
-/** Step 3: integer chord paths, one per source contour. */
-export function buildPaths(ctx: Ctx): { subj: IntPoint[][]; clip: IntPoint[][] } {
+/** Forgets the records and pieces of a first build of the paths (before a finer grid). */
+export function resetPaths(ctx: Ctx): void {
+  for (const a of [ctx.rx, ctx.ry, ctx.rX, ctx.rY, ctx.rExact, ctx.rCar, ctx.rAll, ctx.rAlt, ctx.chordPieces]) a.length = 0;
+  ctx.chordSag.fill(0);
+  ctx.maxTol = -1;
+}
+
+/** Step 3: integer chord paths, one per source contour of the given loops. */
+export function buildPaths(ctx: Ctx, loops: readonly number[]): { subj: IntPoint[][]; clip: IntPoint[][]; closest: number } {
   const subj: IntPoint[][] = [], clip: IntPoint[][] = [];
   const cs = ctx.carriers;
-  for (const loop of ctx.loops) {
+  for (const l of loops) {
+    const loop = ctx.loops[l];
     const path: IntPoint[] = [];
     for (const id of loop.ids) {
       const c = cs[id];
       const r0 = find(ctx, c.n0), r1 = find(ctx, c.n1);
       if (r0 === r1) continue; // collapsed by merging
+      if (c.kind !== ARC && !ctx.splits[id]) {
+        // A straight edge with no node inside: its start vertex is all clipper needs.
+        pushVertex(ctx, path, ctx.nx[r0], ctx.ny[r0], true, ctx.ncar[r0]);
+        ctx.chordPieces.push(id, r0, r1);
+        continue;
+      }
       const own = [id];
       const inner: { u: number; n: number }[] = [];
       for (const s of ctx.splits[id] ?? []) {
@@ -60,16 +75,20 @@ export function buildPaths(ctx: Ctx): { subj: IntPoint[][]; clip: IntPoint[][] }
       for (let k = 0; k + 1 < seq.length; k++) {
         const nd = seq[k].n;
         pushVertex(ctx, path, ctx.nx[nd], ctx.ny[nd], true, ctx.ncar[nd]);
-        if (c.kind !== ARC) continue;
+        if (c.kind !== ARC) {
+          ctx.chordPieces.push(id, nd, seq[k + 1].n);
+          continue;
+        }
         const ua = seq[k].u, ub = seq[k + 1].u;
         const dphi = Math.abs(c.phi) * (ub - ua);
         // Finer chords only when both sides are demanded (see arrangement.ts).
         const both = ctx.side[id] === (INSCRIBE | CIRCUMSCRIBE);
         const sr = both ? ctx.sag[id] / c.r : SAG_MAX;
-        const step = sr >= SAG_MAX ? MAX_STEP : 2 * Math.acos(1 - sr);
+        const step = !ctx.crowded[id] && ctx.side[id] === 0 ? FREE_STEP : sr >= SAG_MAX ? MAX_STEP : 2 * Math.acos(1 - sr);
         let cnt = Math.ceil(dphi / step);
         // At least two chords while the piece is visibly curved at the integer scale.
         if (cnt < 2 && c.r * (1 - Math.cos(dphi / 2)) * ctx.scale > 0.5) cnt = 2;
+        if (cnt <= 1) ctx.chordPieces.push(id, nd, seq[k + 1].n);
         const half = dphi / Math.max(cnt, 1) / 2;
         const dev = ctx.side[id] === CIRCUMSCRIBE ? 1.5 * c.r * (1 / Math.cos(half) - 1) : c.r * (1 - Math.cos(half));
         if (dev > ctx.chordSag[id]) ctx.chordSag[id] = dev;
@@ -102,21 +121,79 @@ export function buildPaths(ctx: Ctx): { subj: IntPoint[][]; clip: IntPoint[][] }
     if (path.length < 3) continue;
     (loop.group === 0 ? subj : clip).push(path);
   }
-  // Records of different loops at one integer point (clipper keeps one tag there): each gets
-  // the carriers of all of them.
-  const at = new Map<number, number>();
-  for (let r = 0; r < ctx.rX.length; r++) {
-    const key = ctx.rX[r] * 1e8 + ctx.rY[r];
-    const first = at.get(key);
-    if (first === undefined) at.set(key, r);
-    else {
-      const merged = ctx.rCar[first].slice();
-      for (const c of ctx.rCar[r]) if (!merged.includes(c)) merged.push(c);
-      ctx.rCar[first] = merged;
-      ctx.rCar[r] = merged;
-      ctx.shared.push(first, r);
+  const closest = groupRecords(ctx);
+  return { subj, clip, closest };
+}
+
+/** Records kept per hash cell for comparison (a crowded cell is below the grid anyway). */
+const CROWD = 16;
+
+/**
+ * Records of different loops at one integer point stay apart (each keeps its own exact point and
+ * carriers); every one of them learns the others, because clipper keeps one tag there. The same
+ * pass finds the smallest distance between two distinct exact points within NODE_UNITS grid
+ * units of each other (Infinity if none), which tells grid.ts whether the grid is too coarse.
+ * Records are hashed into cells of NODE_UNITS units (open addressing on typed arrays) and each
+ * is compared with those of its 3 × 3 cells: linear in the record count.
+ */
+function groupRecords(ctx: Ctx): number {
+  const nr = ctx.rX.length;
+  for (let r = 0; r < nr; r++) {
+    ctx.rAll.push(ctx.rCar[r]);
+    ctx.rAlt.push(null);
+  }
+  let size = 1;
+  while (size < 2 * nr) size <<= 1;
+  const mask = size - 1;
+  const ci = new Float64Array(size), cj = new Float64Array(size), head = new Int32Array(size).fill(-1), count = new Int32Array(size);
+  const next = new Int32Array(nr).fill(-1);
+  const same = new Int32Array(nr).fill(-1); // a record at the same integer point seen before
+  const rX = ctx.rX, rY = ctx.rY, rx = ctx.rx, ry = ctx.ry, ex = ctx.rExact;
+  let best = Infinity;
+  const near = NODE_UNITS * ctx.unit;
+  for (let r = 0; r < nr; r++) {
+    const X = rX[r], Y = rY[r];
+    const i = Math.floor(X / NODE_UNITS), j = Math.floor(Y / NODE_UNITS);
+    let home = -1;
+    for (let di = -1; di <= 1; di++) {
+      for (let dj = -1; dj <= 1; dj++) {
+        const a = i + di, b = j + dj;
+        let h = (Math.imul(a | 0, 0x27d4eb2d) ^ Math.imul(b | 0, 0x165667b1)) & mask;
+        while (head[h] >= 0 && !(ci[h] === a && cj[h] === b)) h = (h + 1) & mask;
+        if (di === 0 && dj === 0) home = h;
+        for (let q = head[h]; q >= 0; q = next[q]) {
+          if (rX[q] === X && rY[q] === Y && same[r] < 0) same[r] = q;
+          if (!ex[q] || !ex[r]) continue;
+          const d = Math.sqrt((rx[q] - rx[r]) ** 2 + (ry[q] - ry[r]) ** 2);
+          if (d > 0 && d < best && d < near) best = d;
+        }
+      }
+    }
+    if (head[home] < 0) {
+      ci[home] = i;
+      cj[home] = j;
+    } else if (count[home] >= CROWD) continue;
+    next[r] = head[home];
+    head[home] = r;
+    count[home]++;
+  }
+  // Groups of records at one integer point: each record links to an earlier one there.
+  const groups = new Map<number, number[]>();
+  for (let r = 0; r < nr; r++) {
+    if (same[r] < 0) continue;
+    let root = same[r];
+    while (same[root] >= 0) root = same[root];
+    const list = groups.get(root);
+    if (list) list.push(r);
+    else groups.set(root, [root, r]);
+  }
+  for (const list of groups.values()) {
+    const all: number[] = [];
+    for (const r of list) for (const c of ctx.rCar[r]) if (!all.includes(c)) all.push(c);
+    for (const r of list) {
+      ctx.rAll[r] = all;
+      ctx.rAlt[r] = list;
     }
   }
-  for (let k = 0; k < ctx.shared.length; k += 2) ctx.rCar[ctx.shared[k + 1]] = ctx.rCar[ctx.shared[k]];
-  return { subj, clip };
+  return best;
 }

@@ -2,7 +2,8 @@
  * Shared state of one boolean call: tolerances, carriers, exact nodes (with union-find for
  * coincident points), per-carrier split points and the vertex records behind clipper's Z tags.
  */
-import type { Carrier } from './carriers';
+import type Flatbush from 'flatbush';
+import type { Carrier, CarrierStore } from './carriers';
 import type { Contour } from '../geometry/contour';
 
 export type Mode = 'union' | 'difference' | 'intersection' | 'evenodd';
@@ -12,12 +13,34 @@ export const INT_RANGE = 4e7;
 /** Largest angle (radians) spanned by one chord: sagitta <= (1 - cos(0.1)) r ~ 5e-3 r. */
 export const MAX_STEP = 0.2;
 export const SAG_MAX = 1 - Math.cos(MAX_STEP / 2);
+/**
+ * Largest angle spanned by one chord of an arc whose box meets no carrier but its own loop
+ * neighbours (a fillet inside a profile): nothing can come between such an arc and its chords,
+ * so coarse chords decide the same topology, and the arc is restored exactly on output.
+ */
+export const FREE_STEP = Math.PI / 4;
 /** Smallest relative sagitta used when refining near-tangent arcs (caps the chord count). */
 export const SAG_FLOOR = 1e-6;
 /** Arcs with a radius above this multiple of the extent are traced as their chords. */
 export const FLAT_RADIUS = 1e5;
 /** Exact-geometry tolerance relative to the extent: points closer than this are one point. */
 export const REL_EPS = 1e-10;
+
+/**
+ * Two carrier pieces joining the same two nodes with one chord each: clipper sees one edge
+ * where the exact geometry has a thin two-sided loop (a lens, a flat arc on its own chord).
+ */
+export interface Digon {
+  /** The carriers and the nodes they join. */
+  c1: number;
+  c2: number;
+  n1: number;
+  n2: number;
+  /** The carrier that bounds the result when exactly one of them does, else −1. */
+  pick: number;
+  /** The digon's inside belongs to the result. */
+  inside: boolean;
+}
 
 export interface SourceGroup {
   contours: readonly Contour[];
@@ -33,8 +56,18 @@ export interface Ctx {
   oy: number;
   scale: number;
   carriers: Carrier[];
+  /** The carriers' numbers (carriers.ts). */
+  store: CarrierStore;
   /** Per contour: the carrier ids in order. */
   loops: { group: number; ids: number[] }[];
+  /** Per carrier: its loop (index into loops). */
+  loopOf: number[];
+  /** Per loop: 1 when it meets another loop or itself anywhere but at its own vertices. */
+  touched: number[];
+  /** The carriers' spatial index (spatial.ts), built on first use. */
+  index: Flatbush | null;
+  /** Largest carrier tolerance of the trace (trace.ts), −1 until computed. */
+  maxTol: number;
   /** Per carrier: first and last carrier id of its loop (ids of one loop are consecutive). */
   loopLo: number[];
   loopHi: number[];
@@ -47,6 +80,8 @@ export interface Ctx {
   splits: (number[] | null)[];
   /** Per carrier: largest chord sagitta allowed (absolute). */
   sag: number[];
+  /** Per carrier: 1 when its box meets a carrier other than its loop neighbours (arrangement.ts). */
+  crowded: Uint8Array;
   /** Per carrier: sides demanded for its chords (INSCRIBE | CIRCUMSCRIBE bits, arrangement.ts). */
   side: number[];
   /** Per carrier: largest distance between its chords and the exact arc (set when chording). */
@@ -58,9 +93,20 @@ export interface Ctx {
   rX: number[];
   rY: number[];
   rExact: boolean[];
+  /** Per record: the carriers through its own exact point. */
   rCar: number[][];
-  /** Pairs (first record, later record) of records at the same integer point. */
-  shared: number[];
+  /**
+   * Per record: the carriers of every record at its integer point (clipper keeps one tag where
+   * points of several loops round together; the edges there may belong to any of them).
+   */
+  rAll: number[][];
+  /** Per record: every record at its integer point, when there are several (else null). */
+  rAlt: (number[] | null)[];
+  /** Carrier pieces drawn as one single chord: triples (carrier, from node, to node). */
+  chordPieces: number[];
+  /** Sub-grid two-sided loops (digons.ts) found among those pieces. */
+  digons: Digon[];
+  digonsOf: Map<number, Digon[]>;
   // ZFill records: four vertex Zs per crossing.
   zf: number[];
 }
@@ -82,11 +128,12 @@ export function union(ctx: Ctx, a: number, b: number): void {
   else ctx.parent[a] = b;
 }
 
-export function newNode(ctx: Ctx, x: number, y: number): number {
+/** A new exact node at (x, y), with the carriers through it known so far. */
+export function newNode(ctx: Ctx, x: number, y: number, carriers: number[] = []): number {
   const id = ctx.nx.length;
   ctx.nx.push(x);
   ctx.ny.push(y);
-  ctx.ncar.push([]);
+  ctx.ncar.push(carriers);
   ctx.parent.push(id);
   return id;
 }

@@ -7,12 +7,38 @@
  * See engine.ts for the pipeline.
  */
 import { regionBounds, type Bounds, type Contour, type Region } from '../geometry/contour';
+import Flatbush from 'flatbush';
+import { contourBox } from '../moments/kernel';
 import { runBoolean } from './engine';
 
 export type BoolOp = 'union' | 'difference' | 'intersection';
 
+/** Exact bounds of a region from its contours' boxes (kept by identity across calls). */
+function boundsOf(r: Region): Bounds | null {
+  let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
+  for (const c of r) {
+    if (c.xy.length < 2) continue;
+    if (c.xy.length < 4 || !isClean([c])) {
+      const b = regionBounds([c]);
+      if (!b) continue;
+      xmin = Math.min(xmin, b.xmin);
+      xmax = Math.max(xmax, b.xmax);
+      ymin = Math.min(ymin, b.ymin);
+      ymax = Math.max(ymax, b.ymax);
+      continue;
+    }
+    const s = contourBox(c);
+    if (!s) continue;
+    xmin = Math.min(xmin, s.xmin);
+    xmax = Math.max(xmax, s.xmax);
+    ymin = Math.min(ymin, s.ymin);
+    ymax = Math.max(ymax, s.ymax);
+  }
+  return xmin <= xmax ? { xmin, xmax, ymin, ymax } : null;
+}
+
 function boundsOverlap(ba: Bounds | null, b: Region): boolean {
-  const bb = regionBounds(b);
+  const bb = boundsOf(b);
   if (!ba || !bb) return false;
   return !(bb.xmin > ba.xmax || bb.xmax < ba.xmin || bb.ymin > ba.ymax || bb.ymax < ba.ymin);
 }
@@ -40,6 +66,29 @@ function boxesMeet(a: Bounds | null, b: Bounds | null): boolean {
 }
 
 /**
+ * A test "does box b meet any of these boxes but number `skip`": a scan for a few boxes, a
+ * flatbush index for many (a run of thousands of shapes would otherwise compare every pair).
+ */
+function boxFinder(boxes: (Bounds | null)[]): (b: Bounds | null, skip: number) => boolean {
+  if (boxes.length <= 16) {
+    return (b, skip) => boxes.some((o, j) => j !== skip && boxesMeet(o, b));
+  }
+  let idx: Flatbush | null = null; // built on the first question
+  return (b, skip) => {
+    if (!b) return false;
+    if (!idx) {
+      idx = new Flatbush(boxes.length);
+      for (const o of boxes) {
+        if (o) idx.add(o.xmin, o.ymin, o.xmax, o.ymax);
+        else idx.add(0, 0, 0, 0); // an empty region: filtered out below
+      }
+      idx.finish();
+    }
+    return idx.collides(b.xmin, b.ymin, b.xmax, b.ymax, (j) => j !== skip && boxes[j] !== null);
+  };
+}
+
+/**
  * subject OP (union of clips). Inputs: well-formed regions (signed contours).
  *
  * Work is limited to what can change. For union and difference, a subject loop whose box meets no
@@ -51,7 +100,7 @@ export function booleanRegions(subject: Region, clips: Region[], op: BoolOp): Re
   let cl = clips.filter((c) => c.length > 0);
   if (op !== 'union') {
     // Clips that cannot touch the subject change nothing.
-    const sb = regionBounds(subject);
+    const sb = boundsOf(subject);
     cl = cl.filter((c) => boundsOverlap(sb, c));
     if (cl.length === 0) return op === 'difference' ? passThrough(subject) : [];
     if (subject.length === 0) return [];
@@ -59,16 +108,17 @@ export function booleanRegions(subject: Region, clips: Region[], op: BoolOp): Re
   const kept: Contour[] = [];
   let subj: Region = subject;
   if (op !== 'intersection' && isClean(subject) && cl.every(isClean)) {
-    const all = regionBounds([...subject, ...cl.flat()]);
+    const all = boundsOf([...subject, ...cl.flat()]);
     const tol = all ? 1e-9 * Math.max(all.xmax - all.xmin, all.ymax - all.ymin) : 0;
-    const clipBoxes = cl.map((c) => widened(regionBounds(c), tol));
-    const subjBoxes = subject.map((c) => widened(regionBounds([c]), tol));
+    const clipBoxes = cl.map((c) => widened(boundsOf(c), tol));
+    const subjBoxes = subject.map((c) => widened(boundsOf([c]), tol));
+    const clipsNear = boxFinder(clipBoxes), subjNear = boxFinder(subjBoxes);
     const active: Contour[] = [];
-    subject.forEach((c, k) => (clipBoxes.some((b) => boxesMeet(subjBoxes[k], b)) ? active.push(c) : kept.push(c)));
+    subject.forEach((c, k) => (clipsNear(subjBoxes[k], -1) ? active.push(c) : kept.push(c)));
     if (op === 'union') {
       const busy: Region[] = [];
       cl.forEach((c, k) => {
-        const alone = !subjBoxes.some((b) => boxesMeet(b, clipBoxes[k])) && !clipBoxes.some((b, j) => j !== k && boxesMeet(b, clipBoxes[k]));
+        const alone = !subjNear(clipBoxes[k], -1) && !clipsNear(clipBoxes[k], k);
         if (alone) kept.push(...c);
         else busy.push(c);
       });

@@ -77,6 +77,23 @@ export function arcFromChord(ax: number, ay: number, bx: number, by: number, phi
   return { cx, cy, r, sweep: phi };
 }
 
+/**
+ * Centre and radius of the arc from a to b with bulge b = tan(sweep/4), from the bulge itself:
+ * with α the half sweep, cos α = (1 − b²)/(1 + b²) and sin α = 2|b|/(1 + b²), so a half circle
+ * (b = ±1) has its centre exactly on the chord's middle, where going through the rounded sweep
+ * 4·atan(b) leaves it 1e-16·r off (which a near-tangent intersection magnifies).
+ */
+export function arcFromBulge(ax: number, ay: number, bx: number, by: number, bulge: number) {
+  const dx = bx - ax, dy = by - ay;
+  const L = Math.hypot(dx, dy);
+  const ab = Math.abs(bulge), b2 = bulge * bulge;
+  const r = (L * (1 + b2)) / (4 * ab);
+  const d = (L * (1 - b2)) / (4 * ab); // r cos α, negative past a half circle
+  const s = bulge > 0 ? 1 : -1;
+  const ux = (s * dy) / L, uy = (-s * dx) / L;
+  return { cx: (ax + bx) / 2 - ux * d, cy: (ay + by) / 2 - uy * d, r, sweep: 4 * Math.atan(bulge) };
+}
+
 /** Signed sweep of the arc that starts at a, passes through m and ends at b; NaN if collinear. */
 export function sweepThrough(ax: number, ay: number, mx: number, my: number, bx: number, by: number): number {
   // The inscribed-angle theorem: the sweep is twice the angle between the chords at the middle
@@ -166,6 +183,24 @@ export function translateRegion(r: Region, dx: number, dy: number): Region {
 export function rotateRegion(r: Region, theta: number, ox = 0, oy = 0): Region {
   const cs = Math.cos(theta), sn = Math.sin(theta);
   return r.map((c) => transformContour(c, cs, -sn, sn, cs, ox - cs * ox + sn * oy, oy - sn * ox - cs * oy));
+}
+
+/**
+ * The region turned by a quarter turn about the origin, exactly (coordinates are swapped and
+ * negated, never multiplied by a rounded cos(π/2)): sense +1 maps (x, y) to (−y, x), −1 maps
+ * (x, y) to (y, −x). A turn keeps every loop's sense, so the bulges stay as they are.
+ */
+export function quarterTurnRegion(r: Region, sense: 1 | -1): Region {
+  return r.map((c) => {
+    const n = c.xy.length >> 1;
+    const xy = new Float64Array(2 * n);
+    for (let i = 0; i < n; i++) {
+      const x = c.xy[2 * i], y = c.xy[2 * i + 1];
+      xy[2 * i] = sense > 0 ? -y : y;
+      xy[2 * i + 1] = sense > 0 ? x : -x;
+    }
+    return { xy, bulge: c.bulge ? Float64Array.from(c.bulge) : null };
+  });
 }
 
 export interface Bounds {

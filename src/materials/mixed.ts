@@ -25,8 +25,8 @@
  */
 import type { Units } from '../units';
 import { regionBounds, type Bounds, type Region } from '../geometry/contour';
-import { regionMoments, type RawMoments } from '../moments/kernel';
-import { centroidalFromRaw, principal, SectionError } from '../properties/section';
+import { centralMoments, regionMoments, type RawMoments } from '../moments/kernel';
+import { principal, SectionError } from '../properties/section';
 import { assertMaterial, MaterialError, type Material } from './material';
 import { massPerLength } from './units';
 
@@ -110,53 +110,52 @@ function unionBounds(bs: Bounds[]): Bounds {
  */
 export function mixedSection(parts: readonly MaterialPart[], reference: Material, units: Units): MixedSection {
   assertMaterial(reference, `reference material "${reference?.id}"`);
-  const live: { part: MaterialPart; m: RawMoments; bounds: Bounds }[] = [];
+  const live: { part: MaterialPart; m: RawMoments; bounds: Bounds; c: { A: number; xc: number; yc: number; Ix: number; Iy: number; Ixy: number } }[] = [];
   for (const part of parts) {
     assertMaterial(part.material);
     const bounds = regionBounds(part.region);
     if (!bounds) continue;
-    const m = regionMoments(part.region);
+    // Each part's centroidal moments with no cancelling transfer (the same path as
+    // sectionProperties, so one material gives exactly the geometric numbers).
+    const cm = centralMoments(part.region);
     const extent = Math.max(bounds.xmax - bounds.xmin, bounds.ymax - bounds.ymin);
-    if (!(m.m00 > EMPTY_TOL * extent * extent)) {
-      if (m.m00 < -EMPTY_TOL * extent * extent) throw new SectionError(`The region of material "${part.material.id}" has negative area: its outer boundaries must run counter-clockwise.`);
+    if (!(cm.A > EMPTY_TOL * extent * extent)) {
+      if (cm.A < -EMPTY_TOL * extent * extent) throw new SectionError(`The region of material "${part.material.id}" has negative area: its outer boundaries must run counter-clockwise.`);
       continue;
     }
-    live.push({ part, m, bounds });
+    const c = { A: cm.A, xc: cm.refX + cm.dx, yc: cm.refY + cm.dy, Ix: cm.Ix, Iy: cm.Iy, Ixy: cm.Ixy };
+    live.push({ part, m: regionMoments(part.region), bounds, c });
   }
   if (live.length === 0) throw new SectionError('The section is empty: it has no area.');
   const Eref = reference.E;
   const ns = live.map(({ part }) => part.material.E / Eref);
 
-  // Geometric area and centroid; centre of gravity; mass per length.
-  let A = 0, Sx = 0, Sy = 0, W = 0, Wx = 0, Wy = 0, mass = 0;
-  // Transformed first moments (start from the first part so that one part keeps its exact digits).
-  let At = 0, Stx = 0, Sty = 0;
-  live.forEach(({ part, m }, k) => {
+  // Centroids as offsets from the first part's centroid, so parts far from the origin keep their
+  // digits and one part is its own centroid exactly. Geometric area and centroid; centre of
+  // gravity (density-weighted); mass per length; transformed area and centroid (n-weighted).
+  const rx = live[0].c.xc, ry = live[0].c.yc;
+  let A = 0, Sx = 0, Sy = 0, W = 0, Wx = 0, Wy = 0, mass = 0, At = 0, Stx = 0, Sty = 0;
+  live.forEach(({ part, c }, k) => {
     const rho = part.material.density, n = ns[k];
-    A += m.m00;
-    Sx += m.m10;
-    Sy += m.m01;
-    W += rho * m.m00;
-    Wx += rho * m.m10;
-    Wy += rho * m.m01;
-    mass += massPerLength(m.m00, rho, units);
-    if (k === 0) {
-      At = n * m.m00;
-      Stx = n * m.m10;
-      Sty = n * m.m01;
-    } else {
-      At += n * m.m00;
-      Stx += n * m.m10;
-      Sty += n * m.m01;
-    }
+    const ex = c.xc - rx, ey = c.yc - ry;
+    A += c.A;
+    Sx += c.A * ex;
+    Sy += c.A * ey;
+    W += rho * c.A;
+    Wx += rho * c.A * ex;
+    Wy += rho * c.A * ey;
+    mass += massPerLength(c.A, rho, units);
+    At += n * c.A;
+    Stx += n * c.A * ex;
+    Sty += n * c.A * ey;
   });
   if (!(At > 0) || !Number.isFinite(At)) throw new SectionError('The transformed section has no area: check the moduli of elasticity.');
-  const xt = Stx / At, yt = Sty / At;
+  const dxt = Stx / At, dyt = Sty / At;
+  const xt = rx + dxt, yt = ry + dyt;
 
   // Second moments about the transformed centroid, part by part (parallel-axis theorem).
-  const perPart = live.map(({ part, m, bounds }, k) => {
-    const c = centroidalFromRaw(m);
-    const dx = c.xc - xt, dy = c.yc - yt, n = ns[k];
+  const perPart = live.map(({ part, m, bounds, c }, k) => {
+    const dx = c.xc - rx - dxt, dy = c.yc - ry - dyt, n = ns[k];
     return {
       part,
       m,
@@ -200,8 +199,8 @@ export function mixedSection(parts: readonly MaterialPart[], reference: Material
     units,
     parts: partResults,
     area: A,
-    centroid: { x: Sx / A, y: Sy / A },
-    cg: W > 0 ? { x: Wx / W, y: Wy / W } : null,
+    centroid: { x: rx + Sx / A, y: ry + Sy / A },
+    cg: W > 0 ? { x: rx + Wx / W, y: ry + Wy / W } : null,
     massPerLength: mass,
     transformed: { reference: reference.id, E: Eref, area: At, centroid: { x: xt, y: yt }, Ix, Iy, Ixy, I1: pr.I1, I2: pr.I2, theta: (pr.theta * 180) / Math.PI },
     bounds: unionBounds(live.map((l) => l.bounds)),

@@ -9,8 +9,8 @@
  * case. The cut width is the summed length of the closing pieces, Σ x_entry − Σ x_exit.
  */
 import type { Contour, Region } from '../geometry/contour';
-import { arcFromChord } from '../geometry/contour';
-import { addCircularSegment, regionReference, shiftMoments, type RawMoments } from './kernel';
+import { arcFromChord, quarterTurnRegion } from '../geometry/contour';
+import { addCircularSegment, contourSummary, regionReference, shiftMoments, type RawMoments } from './kernel';
 
 export interface HalfPlaneMoments extends RawMoments {
   /** Total length of the cut line inside the region (the width b at the cut). */
@@ -149,35 +149,152 @@ function splitFlatArc(ax: number, ay: number, bx: number, by: number, phi: numbe
 }
 
 /**
- * Moments (about the origin) of the part of the region where y > yc, and the cut width b.
- * The work is done relative to a reference point on the cut line to keep sums well conditioned.
+ * A region prepared for many cuts: each loop's y-range and its whole moments (about its first
+ * vertex). A loop wholly above a cut adds its whole moments, a loop wholly below adds nothing,
+ * and only the loops the line crosses are split, so a cut through a plate with thousands of holes
+ * costs about the holes on that line.
  */
-export function momentsAbove(region: Region, yc: number): HalfPlaneMoments {
-  const [ox] = regionReference(region);
+export interface CutPlan {
+  readonly contours: readonly Contour[];
+  readonly xmin: Float64Array;
+  readonly xmax: Float64Array;
+  readonly ymin: Float64Array;
+  readonly ymax: Float64Array;
+  /** Per loop: A, ∫x, ∫y, ∫x², ∫y², ∫xy about its first vertex. */
+  readonly whole: readonly Float64Array[];
+}
+
+export function planCuts(region: Region): CutPlan {
+  const contours: Contour[] = [];
+  for (const c of region) if (c.xy.length >= 4) contours.push(c);
+  const n = contours.length;
+  const xmin = new Float64Array(n), xmax = new Float64Array(n), ymin = new Float64Array(n), ymax = new Float64Array(n);
+  const whole: Float64Array[] = [];
+  contours.forEach((c, k) => {
+    const sm = contourSummary(c);
+    xmin[k] = sm.xmin;
+    xmax[k] = sm.xmax;
+    ymin[k] = sm.ymin;
+    ymax[k] = sm.ymax;
+    whole.push(sm.first);
+  });
+  return { contours, xmin, xmax, ymin, ymax, whole };
+}
+
+/**
+ * The plan of the region turned by a quarter turn (quarterTurnRegion's sense), from this plan's
+ * boxes and moments, exactly (swapped and negated), without integrating anything again.
+ */
+export function turnPlan(plan: CutPlan, sense: 1 | -1): CutPlan {
+  const contours = quarterTurnRegion(plan.contours, sense);
+  const whole = plan.whole.map((w) =>
+    sense > 0
+      ? Float64Array.of(w[0], -w[2], w[1], w[4], w[3], -w[5]) // (x, y) -> (−y, x)
+      : Float64Array.of(w[0], w[2], -w[1], w[4], w[3], -w[5]), // (x, y) -> (y, −x)
+  );
+  const neg = (a: Float64Array) => a.map((v) => -v);
+  return sense > 0
+    ? { contours, xmin: neg(plan.ymax), xmax: neg(plan.ymin), ymin: plan.xmin, ymax: plan.xmax, whole }
+    : { contours, xmin: plan.ymin, xmax: plan.ymax, ymin: neg(plan.xmax), ymax: neg(plan.xmin), whole };
+}
+
+/**
+ * Moments of the part of the region where y > yc, about the point (ox, yc) on the cut line, and
+ * the cut width b. Nothing is moved to the origin, so the result keeps its digits however far
+ * the part lies from it: ∫(y − yc) dA is the first moment about the cut line itself.
+ */
+export function momentsAboveAbout(plan: CutPlan, yc: number, ox: number): HalfPlaneMoments {
   const acc = new Float64Array(6);
   let width = 0;
   const pieces: Piece[] = [];
-  for (const c of region) {
-    const n = c.xy.length >> 1;
-    if (n < 2) continue;
-    pieces.length = 0;
-    for (let i = 0; i < n; i++) splitSegment(c, i, ox, yc, pieces);
-    const m = pieces.length;
-    for (let k = 0; k < m; k++) {
-      const p = pieces[k];
-      const prev = pieces[(k + m - 1) % m];
-      // Where the boundary enters the upper side a closing piece of the cut line ends; where it
-      // leaves, one starts. On the local cut line y = 0 every F_k above vanishes except F for
-      // nothing: all six G carry a factor y, so closing pieces add no moment, only width.
-      if (p.above && !prev.above) width += p.x0;
-      else if (!p.above && prev.above) width -= p.x0;
-      if (!p.above) continue;
-      if (p.sweep === 0) lineDx(p.x0, p.y0, p.x1, p.y1, acc);
-      else arcDx(p.x0, p.y0, p.x1, p.y1, p.sweep, acc);
+  const { contours, ymin, ymax, whole } = plan;
+  for (let k = 0; k < contours.length; k++) {
+    if (ymax[k] <= yc) continue; // wholly below (or touching from below): nothing above the line
+    const c = contours[k];
+    if (ymin[k] > yc) {
+      // Wholly above: the loop's own moments, carried from its first vertex to (ox, yc).
+      const w = whole[k];
+      const dx = c.xy[0] - ox, dy = c.xy[1] - yc;
+      acc[0] += w[0];
+      acc[1] += w[1] + dx * w[0];
+      acc[2] += w[2] + dy * w[0];
+      acc[3] += w[3] + 2 * dx * w[1] + dx * dx * w[0];
+      acc[4] += w[4] + 2 * dy * w[2] + dy * dy * w[0];
+      acc[5] += w[5] + dx * w[2] + dy * w[1] + dx * dy * w[0];
+      continue;
     }
+    width += crossedLoop(c, ox, yc, acc, pieces);
   }
-  const local6 = { m00: acc[0], m10: acc[1], m01: acc[2], m20: acc[3], m02: acc[4], m11: acc[5] };
-  return { ...shiftMoments(local6, ox, yc), width };
+  return { m00: acc[0], m10: acc[1], m01: acc[2], m20: acc[3], m02: acc[4], m11: acc[5], width };
+}
+
+/**
+ * One loop that the line crosses: its pieces above the line integrated into acc, and its share
+ * of the cut width returned. Straight segments are split inline (no piece records); arcs go
+ * through splitSegment. Where the boundary enters the upper side a closing piece of the cut
+ * line ends; where it leaves, one starts. All six G carry a factor y, so closing pieces on y = 0
+ * add no moment, only width.
+ */
+function crossedLoop(c: Contour, ox: number, yc: number, acc: Float64Array, pieces: Piece[]): number {
+  const xy = c.xy, bulge = c.bulge;
+  const n = xy.length >> 1;
+  let width = 0;
+  let started = false, firstAbove = false, firstX = 0, prevAbove = false;
+  const piece = (above: boolean, x0: number, y0: number, x1: number, y1: number, sweep: number) => {
+    if (!started) {
+      started = true;
+      firstAbove = above;
+      firstX = x0;
+    } else if (above && !prevAbove) width += x0;
+    else if (!above && prevAbove) width -= x0;
+    prevAbove = above;
+    if (!above) return;
+    if (sweep === 0) lineDx(x0, y0, x1, y1, acc);
+    else arcDx(x0, y0, x1, y1, sweep, acc);
+  };
+  for (let i = 0; i < n; i++) {
+    const j = i + 1 === n ? 0 : i + 1;
+    const ax = xy[2 * i] - ox, ay = xy[2 * i + 1] - yc, bx = xy[2 * j] - ox, by = xy[2 * j + 1] - yc;
+    if (bulge && bulge[i] !== 0) {
+      // An arc of at most a half turn stays within its height (L/2)·|bulge| of its chord: one
+      // wholly clear of the line is one piece, with no split to compute.
+      const h = (Math.hypot(bx - ax, by - ay) / 2) * Math.abs(bulge[i]) * (1 + 1e-12);
+      if (Math.abs(bulge[i]) <= 1 && Math.min(ay, by) - h > 0) {
+        piece(true, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
+        continue;
+      }
+      if (Math.abs(bulge[i]) <= 1 && Math.max(ay, by) + h < 0) {
+        piece(false, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
+        continue;
+      }
+      pieces.length = 0;
+      splitSegment(c, i, ox, yc, pieces);
+      for (const p of pieces) piece(p.above, p.x0, p.y0, p.x1, p.y1, p.sweep);
+      continue;
+    }
+    if (ay * by < 0) {
+      const xm = ax + (-ay / (by - ay)) * (bx - ax);
+      piece(ay > 0, ax, ay, xm, 0, 0);
+      piece(by > 0, xm, 0, bx, by, 0);
+    } else piece(ay + by > 0, ax, ay, bx, by, 0);
+  }
+  // The first piece's own transition, against the last piece.
+  if (started) {
+    if (firstAbove && !prevAbove) width += firstX;
+    else if (!firstAbove && prevAbove) width -= firstX;
+  }
+  return width;
+}
+
+/**
+ * Moments (about the origin) of the part of the region where y > yc, and the cut width b.
+ * Far from the origin these origin moments are huge: quantities measured from the cut line or
+ * the centroid come from momentsAboveAbout instead.
+ */
+export function momentsAbove(region: Region, yc: number): HalfPlaneMoments {
+  const [ox] = regionReference(region);
+  const h = momentsAboveAbout(planCuts(region), yc, ox);
+  return { ...shiftMoments(h, ox, yc), width: h.width };
 }
 
 /** −∫ G dx along the straight piece, for each of the six G. Exact (Gauss–Legendre, 3 nodes, degree ≤ 5). */

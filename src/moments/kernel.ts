@@ -7,10 +7,12 @@
  * centre (Gere & Goodno, Mechanics of Materials, App. E, "circular segment"; rederived in
  * DEVELOPERS.md). Arcs are never sampled.
  *
- * All sums are taken about a reference point near the region (the first vertex) to avoid
- * cancellation, and moved to the origin at the end by the parallel-axis theorem.
+ * Every sum is taken about a point on or inside the contour it belongs to, where it is well
+ * conditioned, and carried once, at the end, to where it is wanted (the origin for raw moments,
+ * the centroid for centroidal ones) by the parallel-axis theorem in the direction that adds:
+ * centroidal moments are never formed as m02 − A·ȳ² of origin moments, which cancels far out.
  */
-import type { Contour, Region } from '../geometry/contour';
+import { contourLength, regionBounds, type Bounds, type Contour, type Region } from '../geometry/contour';
 
 /** Raw moments about the document origin: m00 = A, m10 = ∫x, m01 = ∫y, m20 = ∫x², m02 = ∫y², m11 = ∫xy. */
 export interface RawMoments {
@@ -24,31 +26,57 @@ export interface RawMoments {
 
 export const ZERO_MOMENTS: RawMoments = Object.freeze({ m00: 0, m10: 0, m01: 0, m20: 0, m02: 0, m11: 0 });
 
-/** Moments about (ox, oy) accumulated into acc (a 6-slot array: A, ∫x, ∫y, ∫x², ∫y², ∫xy). */
+/** Vertices per block of the polygon sums (see accumulateContour). */
+const BLOCK = 64;
+
+/** acc[i] += v with a Neumaier compensation term kept in comp[i]. */
+function addCompensated(acc: Float64Array, comp: Float64Array, i: number, v: number): void {
+  const s = acc[i], t = s + v;
+  comp[i] += Math.abs(s) >= Math.abs(v) ? s - t + v : v - t + s;
+  acc[i] = t;
+}
+
+/**
+ * Moments about (ox, oy) accumulated into acc (a 6-slot array: A, ∫x, ∫y, ∫x², ∫y², ∫xy).
+ * The straight part is summed in blocks of BLOCK vertices whose sums are added with a
+ * compensation term, so a dense outline (2e5 vertices) does not lose 1e-12 to the running sum.
+ */
 function accumulateContour(c: Contour, ox: number, oy: number, acc: Float64Array): void {
   const xy = c.xy;
   const n = xy.length >> 1;
   if (n < 2) return;
-  let a = 0, sx = 0, sy = 0, sxx = 0, syy = 0, sxy = 0;
+  const tot = new Float64Array(6), comp = new Float64Array(6);
   let x0 = xy[2 * n - 2] - ox, y0 = xy[2 * n - 1] - oy;
-  for (let k = 0; k < 2 * n; k += 2) {
-    const x1 = xy[k] - ox, y1 = xy[k + 1] - oy;
-    const cr = x0 * y1 - x1 * y0;
-    a += cr;
-    sx += cr * (x0 + x1);
-    sy += cr * (y0 + y1);
-    sxx += cr * (x0 * x0 + x0 * x1 + x1 * x1);
-    syy += cr * (y0 * y0 + y0 * y1 + y1 * y1);
-    sxy += cr * (x0 * (2 * y0 + y1) + x1 * (y0 + 2 * y1));
-    x0 = x1;
-    y0 = y1;
+  for (let k = 0; k < 2 * n; ) {
+    const end = Math.min(2 * n, k + 2 * BLOCK);
+    let a = 0, sx = 0, sy = 0, sxx = 0, syy = 0, sxy = 0;
+    for (; k < end; k += 2) {
+      const x1 = xy[k] - ox, y1 = xy[k + 1] - oy;
+      // x0·y1 − x1·y0 written with the edge (x1 − x0, y1 − y0): for a dense outline the two
+      // products are R² against a result of R²·(edge/R), and this form does not cancel.
+      const cr = x0 * (y1 - y0) - y0 * (x1 - x0);
+      a += cr;
+      sx += cr * (x0 + x1);
+      sy += cr * (y0 + y1);
+      sxx += cr * (x0 * x0 + x0 * x1 + x1 * x1);
+      syy += cr * (y0 * y0 + y0 * y1 + y1 * y1);
+      sxy += cr * (x0 * (2 * y0 + y1) + x1 * (y0 + 2 * y1));
+      x0 = x1;
+      y0 = y1;
+    }
+    addCompensated(tot, comp, 0, a);
+    addCompensated(tot, comp, 1, sx);
+    addCompensated(tot, comp, 2, sy);
+    addCompensated(tot, comp, 3, sxx);
+    addCompensated(tot, comp, 4, syy);
+    addCompensated(tot, comp, 5, sxy);
   }
-  acc[0] += a / 2;
-  acc[1] += sx / 6;
-  acc[2] += sy / 6;
-  acc[3] += sxx / 12;
-  acc[4] += syy / 12;
-  acc[5] += sxy / 24;
+  acc[0] += (tot[0] + comp[0]) / 2;
+  acc[1] += (tot[1] + comp[1]) / 6;
+  acc[2] += (tot[2] + comp[2]) / 6;
+  acc[3] += (tot[3] + comp[3]) / 12;
+  acc[4] += (tot[4] + comp[4]) / 12;
+  acc[5] += (tot[5] + comp[5]) / 24;
   const bulge = c.bulge;
   if (!bulge) return;
   for (let i = 0; i < n; i++) {
@@ -59,48 +87,56 @@ function accumulateContour(c: Contour, ox: number, oy: number, acc: Float64Array
   }
 }
 
-// Series for small half-angles, where the trigonometric closed forms cancel badly.
-// f_A(α) = α − sin(2α)/2, f_xx(α) = α/4 − sin(4α)/16, f_yy(α) = α/4 − sin(2α)/6 + sin(4α)/48.
-const SERIES_TERMS = 14;
-const SERIES_A: number[] = [];
-const SERIES_XX: number[] = [];
-const SERIES_YY: number[] = [];
-{
-  let fact = 1; // (2k+1)!
-  for (let k = 0; k < SERIES_TERMS; k++) {
-    if (k > 0) fact *= 2 * k * (2 * k + 1);
-    const sgn = k % 2 === 0 ? 1 : -1;
-    const p2 = Math.pow(2, 2 * k + 1), p4 = Math.pow(4, 2 * k + 1);
-    const lin = k === 0 ? 1 : 0;
-    SERIES_A.push(lin - (sgn * p2) / (2 * fact));
-    SERIES_XX.push(lin / 4 - (sgn * p4) / (16 * fact));
-    SERIES_YY.push(lin / 4 - (sgn * p2) / (6 * fact) + (sgn * p4) / (48 * fact));
+/**
+ * Gauss–Legendre nodes and weights on [−1, 1] (Newton on the Legendre polynomial from the usual
+ * cosine guesses, as in Numerical Recipes' gauleg): computed once, to round-off.
+ */
+function gaussLegendre(n: number): { t: Float64Array; w: Float64Array } {
+  const t = new Float64Array(n), w = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    let x = Math.cos((Math.PI * (i + 0.75)) / (n + 0.5));
+    let dp = 1;
+    for (let it = 0; it < 100; it++) {
+      let p0 = 1, p1 = x;
+      for (let k = 2; k <= n; k++) {
+        const p2 = ((2 * k - 1) * x * p1 - (k - 1) * p0) / k;
+        p0 = p1;
+        p1 = p2;
+      }
+      dp = (n * (x * p1 - p0)) / (x * x - 1);
+      const dx = p1 / dp;
+      x -= dx;
+      if (Math.abs(dx) <= 1e-16) break;
+    }
+    t[i] = x;
+    w[i] = 2 / ((1 - x * x) * dp * dp);
   }
+  return { t, w };
 }
-function oddSeries(coef: number[], x: number): number {
-  const x2 = x * x;
-  let sum = 0;
-  for (let k = coef.length - 1; k >= 0; k--) sum = sum * x2 + coef[k];
-  return sum * x;
-}
+const GL16 = gaussLegendre(16);
 
-// 8-point Gauss–Legendre nodes and weights on [−1, 1], for flat arcs (see below).
-const GL8_T = [-0.9602898564975363, -0.7966664774136267, -0.525532409916329, -0.1834346424956498, 0.1834346424956498, 0.525532409916329, 0.7966664774136267, 0.9602898564975363];
-const GL8_W = [0.1012285362903763, 0.2223810344533745, 0.3137066458778873, 0.362683783378362, 0.362683783378362, 0.3137066458778873, 0.2223810344533745, 0.1012285362903763];
+/**
+ * Below this half-angle the segment is integrated in the chord frame. In the centre frame the
+ * segment's moments come out as differences of terms r²·A apart from a result of order
+ * (r(1 − cos α))²·A, losing about 4/α⁴ in relative precision (4e8 at α = 0.01): the chord frame
+ * has no such loss. 16 Gauss–Legendre nodes integrate the chord-frame integrands to round-off up
+ * to α ≈ 0.4 (nearest singularity at |t| = 1/sin α); above 0.3 the centre frame loses < 5e-14.
+ */
+const CHORD_FRAME_BELOW = 0.3;
 
 /**
  * Adds the moments of the signed circular segment between chord a->b and the arc of sweep phi.
  *
- * Usual arcs (half-angle α ≥ 0.01): local frame at the arc centre, x' towards the arc midpoint:
+ * Usual arcs (half-angle α ≥ 0.3): local frame at the arc centre, x' towards the arc midpoint:
  *   A = r²(α − sinα cosα), ∫x' = (2/3) r³ sin³α, ∫y' = 0, ∫x'y' = 0,
- *   ∫x'² = r⁴(α/4 − sin4α/16), ∫y'² = r⁴(α/4 − sin2α/6 + sin4α/48)
- * (small α by their Taylor series, which avoid cancellation).
+ *   ∫x'² = r⁴(α/4 − sin4α/16), ∫y'² = r⁴(α/4 − sin2α/6 + sin4α/48).
  *
- * Flat arcs (α < 0.01): the centre is far away (r = h / sinα for half-chord h), so the frame
- * moves to the chord midpoint, where the segment is 0 ≤ x' ≤ g(y'), |y'| ≤ h with
+ * Flatter arcs (α < 0.3): the frame moves to the chord midpoint, where the segment is
+ * 0 ≤ x' ≤ g(y'), |y'| ≤ h (half-chord h) with
  *   g(y') = (h² − y'²) sinα / (h (√(1 − (y' sinα / h)²) + cosα)),
- * an analytic function whose nearest singularity lies at |y'| = h / sinα: 8-point Gauss–Legendre
- * integrates it to an error of order α¹⁶, i.e. to round-off, with nothing that can overflow.
+ * an analytic function whose nearest singularity lies at |y'| = h / sinα: 16-point
+ * Gauss–Legendre integrates it to round-off, with nothing that cancels or overflows however
+ * flat the arc.
  */
 export function addCircularSegment(ax: number, ay: number, bx: number, by: number, phi: number, acc: Float64Array): void {
   const dx = bx - ax, dy = by - ay;
@@ -111,7 +147,7 @@ export function addCircularSegment(ax: number, ay: number, bx: number, by: numbe
   const s = phi > 0 ? 1 : -1;
   const ux = (s * dy) / L, uy = (-s * dx) / L; // frame origin -> arc midpoint
   let ox: number, oy: number, A: number, Sx: number, Ixx: number, Iyy: number;
-  if (alpha < 0.01) {
+  if (alpha < CHORD_FRAME_BELOW) {
     const h = L / 2;
     ox = (ax + bx) / 2;
     oy = (ay + by) / 2;
@@ -119,8 +155,9 @@ export function addCircularSegment(ax: number, ay: number, bx: number, by: numbe
     Sx = 0;
     Ixx = 0;
     Iyy = 0;
-    for (let k = 0; k < 8; k++) {
-      const t = GL8_T[k], w = GL8_W[k] * h;
+    const T = GL16.t, W = GL16.w;
+    for (let k = 0; k < 16; k++) {
+      const t = T[k], w = W[k] * h;
       const q = t * sa;
       const g = (h * (1 - t * t) * sa) / (Math.sqrt(1 - q * q) + ca);
       const y = h * t;
@@ -135,21 +172,11 @@ export function addCircularSegment(ax: number, ay: number, bx: number, by: numbe
     ox = (ax + bx) / 2 - ux * d;
     oy = (ay + by) / 2 - uy * d;
     const r2 = r * r, r4 = r2 * r2;
-    let fA: number, fXX: number, fYY: number;
-    if (alpha < 0.25) {
-      fA = oddSeries(SERIES_A, alpha);
-      fXX = oddSeries(SERIES_XX, alpha);
-      fYY = oddSeries(SERIES_YY, alpha);
-    } else {
-      const s2 = Math.sin(2 * alpha), s4 = Math.sin(4 * alpha);
-      fA = alpha - s2 / 2;
-      fXX = alpha / 4 - s4 / 16;
-      fYY = alpha / 4 - s2 / 6 + s4 / 48;
-    }
-    A = r2 * fA;
+    const s2 = Math.sin(2 * alpha), s4 = Math.sin(4 * alpha);
+    A = r2 * (alpha - s2 / 2);
     Sx = (2 / 3) * r2 * r * sa * sa * sa;
-    Ixx = r4 * fXX;
-    Iyy = r4 * fYY;
+    Ixx = r4 * (alpha / 4 - s4 / 16);
+    Iyy = r4 * (alpha / 4 - s2 / 6 + s4 / 48);
   }
   A *= s;
   Sx *= s;
@@ -165,11 +192,30 @@ export function addCircularSegment(ax: number, ay: number, bx: number, by: numbe
   acc[5] += ox * oy * A + ox * my + oy * mx + ux * uy * (Ixx - Iyy);
 }
 
-/** Moments about (ox, oy) of a region, without shifting. */
-export function regionMomentsAbout(region: Region, ox: number, oy: number): RawMoments {
+/** The six sums of one contour about (ox, oy). */
+function contourAbout(c: Contour, ox: number, oy: number): Float64Array {
   const acc = new Float64Array(6);
-  for (const c of region) accumulateContour(c, ox, oy, acc);
+  accumulateContour(c, ox, oy, acc);
+  return acc;
+}
+
+function asMoments(acc: ArrayLike<number>): RawMoments {
   return { m00: acc[0], m10: acc[1], m01: acc[2], m20: acc[3], m02: acc[4], m11: acc[5] };
+}
+
+/**
+ * Moments of a region about (ox, oy). Each contour is summed about its own first vertex, where
+ * the sums are well conditioned whatever the distance to (ox, oy), and carried over by the
+ * parallel-axis theorem (terms that add, away from the contour).
+ */
+export function regionMomentsAbout(region: Region, ox: number, oy: number): RawMoments {
+  let out: RawMoments = { ...ZERO_MOMENTS };
+  for (const c of region) {
+    if (c.xy.length < 4) continue;
+    const x0 = c.xy[0], y0 = c.xy[1];
+    out = addMoments(out, shiftMoments(asMoments(contourAbout(c, x0, y0)), x0 - ox, y0 - oy));
+  }
+  return out;
 }
 
 /** A reference point near the region: its first vertex. */
@@ -201,10 +247,130 @@ export function addMoments(a: RawMoments, b: RawMoments, sign = 1): RawMoments {
   };
 }
 
-/** Exact raw moments of a region about the document origin. */
+/**
+ * Raw moments of a region about the document origin. Far from the origin these are huge and
+ * centroidal moments must not be formed from them (m02 − A·ȳ² cancels): use centralMoments.
+ */
 export function regionMoments(region: Region): RawMoments {
-  const [ox, oy] = regionReference(region);
-  return shiftMoments(regionMomentsAbout(region, ox, oy), ox, oy);
+  return regionMomentsAbout(region, 0, 0);
+}
+
+/**
+ * Area, centroid and centroidal second moments, exact at any position. The centroid is kept as
+ * a reference point of the region plus an offset (refX + dx, refY + dy), so that quantities
+ * measured from it (a cut's Q, the plastic axis) keep every digit even 1e9 units out.
+ */
+export interface CentralMoments {
+  A: number;
+  refX: number;
+  refY: number;
+  dx: number;
+  dy: number;
+  /** ∫(y − ȳ)² dA, ∫(x − x̄)² dA and ∫(x − x̄)(y − ȳ) dA. */
+  Ix: number;
+  Iy: number;
+  Ixy: number;
+}
+
+/**
+ * What the properties need of one contour, computed once: its six sums about its first vertex,
+ * about its own centroid (where second moments do not cancel), its exact box and its length.
+ * Contours are values (nothing in the engine or the app writes into their arrays), so the
+ * summary is kept by the contour's identity: in a drag frame of a plate with thousands of holes,
+ * only the loops that moved are integrated again.
+ */
+export interface ContourSummary {
+  /** A, ∫x, ∫y, ∫x², ∫y², ∫xy about the first vertex (xy[0], xy[1]). */
+  readonly first: Float64Array;
+  /** The point the second set of sums is taken about: the centroid, or the first vertex. */
+  readonly gx: number;
+  readonly gy: number;
+  readonly central: Float64Array;
+  readonly xmin: number;
+  readonly xmax: number;
+  readonly ymin: number;
+  readonly ymax: number;
+  readonly length: number;
+}
+
+const SUMMARIES = new WeakMap<Contour, ContourSummary>();
+const BOXES = new WeakMap<Contour, Bounds>();
+
+/** A contour's exact box, kept by identity (the summary's, or computed alone when asked first). */
+export function contourBox(c: Contour): Bounds | null {
+  const s = SUMMARIES.get(c);
+  if (s) return s;
+  const hit = BOXES.get(c);
+  if (hit) return hit;
+  const b = regionBounds([c]);
+  if (b) BOXES.set(c, b);
+  return b;
+}
+
+export function contourSummary(c: Contour): ContourSummary {
+  const hit = SUMMARIES.get(c);
+  if (hit) return hit;
+  const xy = c.xy, n = xy.length >> 1;
+  const x0 = n ? xy[0] : 0, y0 = n ? xy[1] : 0;
+  const first = contourAbout(c, x0, y0);
+  const b = contourBox(c) ?? { xmin: x0, xmax: x0, ymin: y0, ymax: y0 };
+  let gx = x0, gy = y0;
+  const a = first[0];
+  if (a !== 0 && Number.isFinite(a)) {
+    // The loop's centroid, unless it lies outside the loop's box widened by its size (a loop
+    // whose signed area nearly cancels): then the first vertex stays the better reference.
+    const cx = x0 + first[1] / a, cy = y0 + first[2] / a;
+    const pad = Math.max(b.xmax - b.xmin, b.ymax - b.ymin);
+    if (cx >= b.xmin - pad && cx <= b.xmax + pad && cy >= b.ymin - pad && cy <= b.ymax + pad) {
+      gx = cx;
+      gy = cy;
+    }
+  }
+  const central = gx === x0 && gy === y0 ? first : contourAbout(c, gx, gy);
+  const out: ContourSummary = { first, gx, gy, central, ...b, length: contourLength(c) };
+  SUMMARIES.set(c, out);
+  return out;
+}
+
+/**
+ * Centroidal moments with no cancelling transfer. Each contour is summed twice: about its first
+ * vertex for its area and centroid, then about that centroid for its second moments (a fan
+ * from an inner point, whose terms do not cancel for a convex loop). The contours are then
+ * carried to the region's centroid by the parallel-axis theorem: for one contour the carry is
+ * nothing at all, and for several it adds each loop's own A·d², which is the composite itself.
+ */
+export function centralMoments(region: Region): CentralMoments {
+  const parts: { gx: number; gy: number; m: Float64Array }[] = [];
+  let big = -1, bigA = -1;
+  for (const c of region) {
+    if (c.xy.length < 4) continue;
+    const sm = contourSummary(c);
+    const m = sm.central;
+    parts.push({ gx: sm.gx, gy: sm.gy, m });
+    if (Math.abs(m[0]) > bigA) {
+      bigA = Math.abs(m[0]);
+      big = parts.length - 1;
+    }
+  }
+  if (big < 0) return { A: 0, refX: 0, refY: 0, dx: 0, dy: 0, Ix: 0, Iy: 0, Ixy: 0 };
+  // Reference: the centroid of the largest loop (the outer boundary, as a rule).
+  const refX = parts[big].gx, refY = parts[big].gy;
+  let A = 0, sx = 0, sy = 0;
+  for (const p of parts) {
+    A += p.m[0];
+    sx += p.m[0] * (p.gx - refX) + p.m[1];
+    sy += p.m[0] * (p.gy - refY) + p.m[2];
+  }
+  const dx = sx / A, dy = sy / A;
+  let Ix = 0, Iy = 0, Ixy = 0;
+  for (const p of parts) {
+    const ex = p.gx - refX - dx, ey = p.gy - refY - dy;
+    const [a, m10, m01, m20, m02, m11] = p.m;
+    Iy += m20 + 2 * ex * m10 + ex * ex * a;
+    Ix += m02 + 2 * ey * m01 + ey * ey * a;
+    Ixy += m11 + ex * m01 + ey * m10 + ex * ey * a;
+  }
+  return { A, refX, refY, dx, dy, Ix, Iy, Ixy };
 }
 
 /**

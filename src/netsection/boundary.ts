@@ -6,7 +6,7 @@
  * diameter). Plus the exact point tests built on them: winding (inside the material or not) and
  * the distance to the boundary.
  */
-import { makeArc, makeLine, distToCarrier, type Carrier } from '../boolean/carriers';
+import { CarrierStore, makeArc, makeLine, distToCarrier, type Carrier } from '../boolean/carriers';
 import { arcFromChord, regionBounds, segmentSweep, type Contour, type Region } from '../geometry/contour';
 import { regionMoments } from '../moments/kernel';
 
@@ -46,7 +46,7 @@ export interface Boundary {
 export const POINT_TOL = 1e-9;
 
 /** The carriers of one contour; zero-length segments are left out. */
-function loopCarriers(c: Contour, loop: number, idBase: number): BoundarySegment[] {
+function loopCarriers(store: CarrierStore, c: Contour, loop: number, idBase: number): BoundarySegment[] {
   const n = c.xy.length >> 1;
   const out: BoundarySegment[] = [];
   for (let i = 0; i < n; i++) {
@@ -55,10 +55,10 @@ function loopCarriers(c: Contour, loop: number, idBase: number): BoundarySegment
     if (!(Math.hypot(bx - ax, by - ay) > 0)) continue;
     const phi = segmentSweep(c, i);
     const id = idBase + out.length;
-    if (phi === 0) out.push({ loop, index: i, carrier: makeLine(id, 0, ax, ay, bx, by) });
+    if (phi === 0) out.push({ loop, index: i, carrier: makeLine(store, id, 0, ax, ay, bx, by) });
     else {
       const a = arcFromChord(ax, ay, bx, by, phi);
-      out.push({ loop, index: i, carrier: makeArc(id, 0, ax, ay, bx, by, a.cx, a.cy, a.r, phi) });
+      out.push({ loop, index: i, carrier: makeArc(store, id, 0, ax, ay, bx, by, a.cx, a.cy, a.r, phi) });
     }
   }
   return out;
@@ -94,8 +94,10 @@ export function regionBoundary(region: Region): Boundary {
   const tol = POINT_TOL * extent;
   const loops: BoundaryLoop[] = [];
   const segments: BoundarySegment[] = [];
+  // The carriers' numbers live in one store, indexed by their ids (src/boolean/carriers.ts).
+  const store = new CarrierStore();
   region.forEach((c, k) => {
-    const segs = loopCarriers(c, k, segments.length);
+    const segs = loopCarriers(store, c, k, segments.length);
     if (segs.length === 0) return;
     const signedArea = regionMoments([c]).m00;
     loops.push({ index: k, kind: signedArea >= 0 ? 'outer' : 'hole', signedArea, circle: loopCircle(segs, tol), segments: segs });

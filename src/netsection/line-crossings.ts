@@ -11,7 +11,7 @@
  * vertices or overlaps: whatever happens at a breakpoint, each open piece between two of them is
  * wholly inside or wholly outside.
  */
-import { curveIntersections, distToCurve, makeLine, paramOf, type Carrier } from '../boolean/carriers';
+import { CarrierStore, curveIntersections, distToCurve, makeLine, paramOf, type Carrier } from '../boolean/carriers';
 import { distanceToBoundary, windingAt, type BoundarySegment } from './boundary';
 
 export interface Breakpoint {
@@ -42,7 +42,7 @@ function onPiece(c: Carrier, x: number, y: number, tol: number): boolean {
  * (and the tangency tolerance of the intersections).
  */
 export function lineBreakpoints(segs: readonly BoundarySegment[], px: number, py: number, qx: number, qy: number, tol: number): Breakpoint[] {
-  const line = makeLine(-1, 1, px, py, qx, qy);
+  const line = makeLine(new CarrierStore(1), 0, 1, px, py, qx, qy);
   const L = line.len;
   const raw: Breakpoint[] = [];
   const slack = tol / L;

@@ -2,11 +2,17 @@
  * Derived section properties from the exact moments of a region.
  * Conventions: document units; angles in degrees only in the returned record (θ from +x to the
  * I1 axis, CCW, in (−90°, 90°]); product of inertia Ixy = ∫(x−x̄)(y−ȳ) dA.
+ *
+ * Exact at any position: centroidal moments come from the kernel's centralMoments (no transfer
+ * from the origin), and every quantity measured from a line (a cut's Q, the plastic modulus) is
+ * summed about that line and carried to the centroid through the centroid's offset from a point
+ * of the region, never through world coordinates that have lost their low digits.
  */
 import type { Region } from '../geometry/contour';
-import { contourLength, regionBounds, rotateRegion, type Bounds } from '../geometry/contour';
-import { regionMoments, type RawMoments } from '../moments/kernel';
-import { momentsAbove } from '../moments/cut';
+import { contourLength, type Bounds } from '../geometry/contour';
+import { centralMoments, contourSummary, type CentralMoments, type RawMoments } from '../moments/kernel';
+import { momentsAboveAbout, planCuts, turnPlan, type CutPlan } from '../moments/cut';
+import { plasticAxes } from './plastic-axis';
 
 export interface SectionProperties {
   area: number;
@@ -43,6 +49,10 @@ export class SectionError extends Error {}
 /** Relative tolerance under which a section counts as having no area. */
 const EMPTY_TOL = 1e-14;
 
+/**
+ * Centroidal moments from raw moments about the origin. This cancels as A·ȳ² grows against the
+ * centroidal moment (a part far from the origin): sectionProperties uses centralMoments instead.
+ */
 export function centroidalFromRaw(m: RawMoments) {
   const A = m.m00;
   const xc = m.m10 / A, yc = m.m01 / A;
@@ -73,63 +83,42 @@ export function inertiaAboutAxis(p: SectionProperties, px: number, py: number, a
   return Ic + p.area * d * d;
 }
 
-/**
- * The y where the area above equals `half`: safeguarded Newton on f(c) = A_above(c) − half, whose
- * derivative is −b(c) (minus the cut width), falling back to bisection when a step leaves the
- * bracket. Converges in a handful of cuts instead of the ~60 of plain bisection.
- */
-function equalAreaCut(region: Region, lo: number, hi: number, half: number): number {
-  let a = lo, b = hi;
-  let c = (a + b) / 2;
-  const tol = 4 * Number.EPSILON * Math.max(Math.abs(a), Math.abs(b), b - a);
-  for (let k = 0; k < 200; k++) {
-    const h = momentsAbove(region, c);
-    const f = h.m00 - half;
-    if (f > 0) a = c;
-    else b = c;
-    if (f === 0 || b - a <= tol) break;
-    const step = h.width > 0 ? f / h.width : NaN;
-    let next = c + step;
-    if (!(next > a && next < b)) next = (a + b) / 2;
-    if (Math.abs(next - c) <= tol) break;
-    c = next;
+/** The region's exact bounds, from its cut plan's per-loop boxes (null when it has no loop). */
+function planBounds(plan: CutPlan): Bounds | null {
+  const n = plan.contours.length;
+  if (n === 0) return null;
+  let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
+  for (let k = 0; k < n; k++) {
+    xmin = Math.min(xmin, plan.xmin[k]);
+    xmax = Math.max(xmax, plan.xmax[k]);
+    ymin = Math.min(ymin, plan.ymin[k]);
+    ymax = Math.max(ymax, plan.ymax[k]);
   }
-  return c;
-}
-
-/** Plastic modulus about the horizontal equal-area axis: Z = ∫|y − yp| dA. */
-function plasticAboutHorizontal(region: Region, m: RawMoments, ymin: number, ymax: number) {
-  const yp = equalAreaCut(region, ymin, ymax, m.m00 / 2);
-  const above = momentsAbove(region, yp);
-  const Aa = above.m00, Ab = m.m00 - Aa;
-  const Qa = above.m01 - yp * Aa;
-  const Qb = m.m01 - above.m01 - yp * Ab;
-  return { Z: Qa - Qb, yp };
+  return { xmin, xmax, ymin, ymax };
 }
 
 export function sectionProperties(region: Region): SectionProperties {
-  const bounds = regionBounds(region);
-  const m = regionMoments(region);
-  if (!bounds || !(m.m00 > 0)) throw new SectionError('The section is empty: it has no area.');
+  const plan = planCuts(region);
+  const bounds = planBounds(plan);
+  const cm = centralMoments(region);
+  if (!bounds || !(cm.A > 0)) throw new SectionError('The section is empty: it has no area.');
   const extent = Math.max(bounds.xmax - bounds.xmin, bounds.ymax - bounds.ymin);
-  if (m.m00 <= EMPTY_TOL * extent * extent) throw new SectionError('The section has zero area.');
-  const { A, xc, yc, Ix, Iy, Ixy } = centroidalFromRaw(m);
+  if (cm.A <= EMPTY_TOL * extent * extent) throw new SectionError('The section has zero area.');
+  const { A, Ix, Iy, Ixy } = cm;
+  const xc = cm.refX + cm.dx, yc = cm.refY + cm.dy;
   const { I1, I2, theta } = principal(Ix, Iy, Ixy);
-  const top = bounds.ymax - yc, bottom = yc - bounds.ymin;
-  const right = bounds.xmax - xc, left = xc - bounds.xmin;
-  const px = plasticAboutHorizontal(region, m, bounds.ymin, bounds.ymax);
-  // Vertical axis: rotate by −90° so x becomes y ((x, y) -> (y, −x)); the region keeps its sense.
-  const turned = rotateRegion(region, -Math.PI / 2);
-  const mt = { m00: m.m00, m10: m.m01, m01: -m.m10, m20: m.m02, m02: m.m20, m11: -m.m11 };
-  const py = plasticAboutHorizontal(turned, mt, -bounds.xmax, -bounds.xmin);
+  // Fibre distances from the centroid's offset, so they keep their digits far from the origin.
+  const top = bounds.ymax - cm.refY - cm.dy, bottom = cm.dy - (bounds.ymin - cm.refY);
+  const right = bounds.xmax - cm.refX - cm.dx, left = cm.dx - (bounds.xmin - cm.refX);
+  const plastic = plasticAxes([{ plan, cm, w: 1 }], bounds);
   let perimeter = 0;
-  for (const c of region) perimeter += contourLength(c);
+  for (const c of region) perimeter += c.xy.length >= 4 ? contourSummary(c).length : contourLength(c);
   const pos = (v: number) => Math.max(v, 0);
   const out: SectionProperties = {
     area: A,
     centroid: { x: xc, y: yc },
-    Qx: m.m01,
-    Qy: m.m10,
+    Qx: A * yc,
+    Qy: A * xc,
     Ix,
     Iy,
     Ixy,
@@ -145,9 +134,9 @@ export function sectionProperties(region: Region): SectionProperties {
     Sx_bottom: Ix / bottom,
     Sy_left: Iy / left,
     Sy_right: Iy / right,
-    Zx: px.Z,
-    Zy: py.Z,
-    plasticAxis: { y: px.yp, x: -py.yp },
+    Zx: plastic.x.Z,
+    Zy: plastic.y.Z,
+    plasticAxis: { y: plastic.x.at, x: plastic.y.at },
     bounds,
     perimeter,
     fibres: { top, bottom, left, right },
@@ -178,36 +167,50 @@ export interface CutResult {
   Q: number;
 }
 
+/** What a cut needs of the whole region, prepared once for any number of cuts. */
+interface CutFrame {
+  /** The region, turned for vertical cuts so that "right of x" becomes "above y". */
+  plan: CutPlan;
+  cm: CentralMoments;
+}
+
+function cutFrame(region: Region, axis: 'x' | 'y'): CutFrame {
+  // Right of x = at: turn by +90° exactly ((x, y) -> (−y, x)) so "right of" becomes "above".
+  const plan = planCuts(region);
+  if (axis === 'y') return { plan, cm: centralMoments(region) };
+  const turned = turnPlan(plan, 1);
+  return { plan: turned, cm: centralMoments(turned.contours) };
+}
+
+function cutWith(frame: CutFrame, axis: 'x' | 'y', at: number, whole: { centroid: { x: number; y: number } }): CutResult {
+  if (!Number.isFinite(at)) throw new SectionError(`The cut position ${at} is not a finite number.`);
+  const { plan, cm } = frame;
+  const h = momentsAboveAbout(plan, at, cm.refX);
+  const A = h.m00;
+  // Q about the centroidal axis parallel to the cut: ∫(y − at) dA plus A·(at − ȳ), with at − ȳ
+  // taken through the centroid's offset from a point of the region. A `whole` that is not this
+  // region's own result (a centroid more than its last digits away) is used as given.
+  const own = axis === 'y' ? whole.centroid.y : whole.centroid.x;
+  const mine = cm.refY + cm.dy;
+  const same = Math.abs(own - mine) <= 8 * Number.EPSILON * Math.abs(mine);
+  const lever = same ? at - cm.refY - cm.dy : at - own;
+  const Q = h.m01 + A * lever;
+  let centroid: { x: number; y: number } | null = null;
+  if (A > 0) {
+    const u = cm.refX + h.m10 / A, v = at + h.m01 / A;
+    // In the turned frame of a vertical cut, x' = −y and y' = x.
+    centroid = axis === 'y' ? { x: u, y: v } : { x: v, y: -u };
+  }
+  return { axis, at, width: h.width, area: A, centroid, Q };
+}
+
 /**
  * The part beyond a cut: above y = at (axis 'y'), or right of x = at (axis 'x').
  * `whole` supplies the section's centroid (pass sectionProperties' result).
  */
 export function cutSection(region: Region, axis: 'x' | 'y', at: number, whole: { centroid: { x: number; y: number } }): CutResult {
   if (!Number.isFinite(at)) throw new SectionError(`The cut position ${at} is not a finite number.`);
-  if (axis === 'y') {
-    const h = momentsAbove(region, at);
-    const A = h.m00;
-    return {
-      axis,
-      at,
-      width: h.width,
-      area: A,
-      centroid: A > 0 ? { x: h.m10 / A, y: h.m01 / A } : null,
-      Q: h.m01 - A * whole.centroid.y,
-    };
-  }
-  // Right of x = at: rotate by +90° ((x, y) -> (−y, x)) so "right of" becomes "above".
-  const h = momentsAbove(rotateRegion(region, Math.PI / 2), at);
-  const A = h.m00;
-  // In the turned frame y' = x and x' = −y.
-  return {
-    axis,
-    at,
-    width: h.width,
-    area: A,
-    centroid: A > 0 ? { x: h.m01 / A, y: -h.m10 / A } : null,
-    Q: h.m01 - A * whole.centroid.x,
-  };
+  return cutWith(cutFrame(region, axis), axis, at, whole);
 }
 
 /**
@@ -218,10 +221,11 @@ export function cutDiagram(region: Region, axis: 'x' | 'y', whole: SectionProper
   const lo = axis === 'y' ? whole.bounds.ymin : whole.bounds.xmin;
   const hi = axis === 'y' ? whole.bounds.ymax : whole.bounds.xmax;
   const n = Math.max(2, Math.floor(samples));
+  const frame = cutFrame(region, axis);
   const out: { at: number; width: number; Q: number }[] = [];
   for (let k = 0; k < n; k++) {
     const at = lo + ((hi - lo) * k) / (n - 1);
-    const c = cutSection(region, axis, at, whole);
+    const c = cutWith(frame, axis, at, whole);
     out.push({ at, width: c.width, Q: c.Q });
   }
   return out;
