@@ -150,7 +150,8 @@ function registerTorsion(r: CommandRegistry): void {
   r.register({ name: 'torsion.include', label: 'Torsion', group: 'view', hint: 'Include J, the shear centre and Cw by finite elements in the results and the report', active: hasTorsion, perform: toggleTorsion });
   r.register({ name: 'torsion.density', label: 'Torsion mesh density', group: 'view', perform: setTorsionDensity });
   r.register({ name: 'torsion.poisson', label: "Poisson's ratio for the shear centre", group: 'view', perform: (c, v) => void setTorsionPoisson(c, v) });
-  r.register({ name: 'view.stressMap', label: 'Stress map', group: 'view', hint: 'Shade the shear stress |τ| under a unit torque (with torsion included)', enabled: hasTorsion, active: (c) => c.store.getState().overlays.stressMap, perform: (c) => toggleOverlay(c, 'stressMap') });
+  r.register({ name: 'view.cautions', label: 'Caution markers', group: 'view', hint: 'Markers at the places of the structural cautions (numbered as in the cautions list)', active: (c) => c.store.getState().overlays.cautions, perform: (c) => toggleOverlay(c, 'cautions') });
+  r.register({ name: 'view.stressMap', label: 'Torsion τ', group: 'view', hint: 'Shade the shear stress |τ| under a unit torque (with torsion included)', enabled: hasTorsion, active: (c) => c.store.getState().overlays.stressMap, perform: (c) => toggleOverlay(c, 'stressMap') });
   r.register({ name: 'torsion.compute', label: 'Compute', group: 'view', hint: 'Run the torsion analysis now', enabled: hasTorsion, perform: (c) => c.torsion?.compute() });
   r.register({ name: 'torsion.cancel', label: 'Cancel', group: 'view', hint: 'Stop the torsion run (automatic runs pause until Compute)', perform: (c) => c.torsion?.cancel() });
 }

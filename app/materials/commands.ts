@@ -30,7 +30,7 @@ export function registerMaterials(r: CommandRegistry): void {
     },
   });
   r.register({ name: 'view.kern', label: 'Kern', group: 'view', hint: 'The kern (core): a compressive force inside it causes no tension', active: (c) => c.store.getState().overlays.kern, perform: (c) => toggleOverlay(c, 'kern') });
-  r.register({ name: 'view.stress', label: 'Stresses', group: 'view', hint: 'Stress colour map, neutral axis and the largest stresses under the loads entered', active: (c) => c.store.getState().overlays.stress, perform: (c) => toggleOverlay(c, 'stress') });
+  r.register({ name: 'view.stress', label: 'Load stresses', group: 'view', hint: 'Normal stress colour map, neutral axis and the largest stresses under the loads entered', active: (c) => c.store.getState().overlays.stress, perform: (c) => toggleOverlay(c, 'stress') });
   r.register({
     name: 'tool.probe',
     label: 'Stress at a point',

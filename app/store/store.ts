@@ -63,6 +63,8 @@ export interface Overlays {
   dimensions: boolean;
   /** The shaded shear-stress map of the torsion result (drawn when there is one). */
   stressMap: boolean;
+  /** Markers of the structural cautions (app/canvas/layers/CautionMarks.tsx). */
+  cautions: boolean;
 }
 
 export interface Notice {
@@ -117,7 +119,7 @@ export function createEditorStore(doc: SectionDocument): EditorStore {
     oy: 400,
     width: 800,
     height: 600,
-    overlays: { centroid: true, principal: false, fibres: false, cut: false, kern: false, stress: true, dimensions: false, stressMap: false },
+    overlays: { centroid: true, principal: false, fibres: false, cut: false, kern: false, stress: true, dimensions: false, stressMap: false, cautions: true },
     cutAxis: 'y',
     cutAt: null,
     notice: null,

@@ -68,23 +68,25 @@ export function ToolRail() {
       {SHAPE_EDITORS.map((e, i) => e.RailControl && <e.RailControl key={i} />)}
       <CataloguePicker />
       <CutoutRail />
-      <div className="rail-group">
+      <div className="rail-group rail-grid">
         <h3>Snap</h3>
         <CommandButton name="snap.grid" />
         <CommandButton name="snap.geometry" />
         <CommandButton name="snap.ortho" />
       </div>
-      <div className="rail-group">
+      <div className="rail-group rail-grid">
         <h3>Show</h3>
-        <CommandButton name="view.centroid" />
-        <CommandButton name="view.principal" />
-        <CommandButton name="view.fibres" />
-        <CommandButton name="view.cut" />
-        <CommandButton name="view.kern" />
-        <CommandButton name="view.stress" />
-        <CommandButton name="view.dimensions" />
-        <CommandButton name="view.stressMap">Stress map</CommandButton>
-        <CommandButton name="view.fit" />
+        {/* Short names two to a row; the button's title gives the full name and its key. */}
+        <CommandButton name="view.centroid">Centroid</CommandButton>
+        <CommandButton name="view.principal">Axes 1, 2</CommandButton>
+        <CommandButton name="view.fibres">Fibres</CommandButton>
+        <CommandButton name="view.cut">Cut line</CommandButton>
+        <CommandButton name="view.dimensions">Dimensions</CommandButton>
+        <CommandButton name="view.kern">Kern</CommandButton>
+        <CommandButton name="view.stress">Loads σ</CommandButton>
+        <CommandButton name="view.stressMap">Torsion τ</CommandButton>
+        <CommandButton name="view.cautions">Cautions</CommandButton>
+        <CommandButton name="view.fit">Fit</CommandButton>
       </div>
     </nav>
   );

@@ -2,11 +2,13 @@
  * A marker at the point of every structural caution, numbered as in the cautions panel: a red
  * triangle for a warning, a slate circle for a note. With a proposal shown, the proposal's own
  * cautions are drawn full strength and the baseline's (already there before the cut) faintly.
+ * Without one, only the warnings are marked (the notes, such as a radiused corner found, stay
+ * in the panel), so a plain section is not crowded with markers.
  * The markers wait for the pointer to rest (the analysis is not redone during a drag).
  */
 import type { Caution } from '../../../src';
 import { numberedCautions, useCautions } from '../../cutout-hooks';
-import { useEditorShallow } from '../../context';
+import { useEditorShallow, useEditorState } from '../../context';
 import { CUTOUT_INK } from '../../paint/cutout-ink';
 import { toScreen, type ViewTransform } from '../../view';
 import { Paint } from '../PaintNode';
@@ -43,14 +45,16 @@ function marker(ctx: CanvasRenderingContext2D, c: Caution, n: number, v: ViewTra
 
 export function CautionMarksLayer() {
   const v = useEditorShallow((s) => ({ scale: s.scale, ox: s.ox, oy: s.oy }));
+  const proposal = useEditorState((s) => !!s.doc.activeVariant);
+  const shown = useEditorState((s) => s.overlays.cautions);
   const { cautions, stale } = useCautions();
   const { all, own } = numberedCautions(cautions);
-  if (stale || all.length === 0) return null;
+  if (!shown || stale || all.length === 0) return null;
   return (
     <Paint
       paint={(ctx) => {
         // The faint ones first, so the proposal's own sit on top where they meet.
-        for (let k = all.length - 1; k >= 0; k--) marker(ctx, all[k], k + 1, v, k >= own);
+        for (let k = all.length - 1; k >= 0; k--) if (proposal || all[k].severity === 'warning') marker(ctx, all[k], k + 1, v, k >= own);
       }}
     />
   );
