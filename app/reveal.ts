@@ -7,7 +7,7 @@
 import { regionsBounds, type Bounds } from '../src';
 import type { CommandContext } from './commands/registry';
 import { activeSection } from './store/section';
-import { fitBounds, toScreen } from './view';
+import { fitBounds, STRIP_PX, toScreen } from './view';
 
 /** Pixels of clear canvas kept around a revealed shape. */
 const MARGIN_PX = 24;
@@ -35,12 +35,12 @@ export function revealShapes(ctx: Pick<CommandContext, 'store' | 'shapesOf'>, id
   // millimetre zoom): fit the view to it.
   const alone = activeSection(s.doc).shapes.every((x) => ids.includes(x.id));
   if (alone && Math.max(w, h) < Math.min(s.width, s.height) / 6) {
-    ctx.store.setState(fitBounds(b, s.width, s.height));
+    ctx.store.setState(fitBounds(b, s.width, s.height, 48, STRIP_PX));
     return;
   }
   if (inView(ctx, b)) return;
   if (w <= s.width - 2 * MARGIN_PX && h <= s.height - 2 * MARGIN_PX) {
     const cx = (b.xmin + b.xmax) / 2, cy = (b.ymin + b.ymax) / 2;
     ctx.store.setState({ ox: s.width / 2 - cx * s.scale, oy: s.height / 2 + cy * s.scale });
-  } else ctx.store.setState(fitBounds(b, s.width, s.height));
+  } else ctx.store.setState(fitBounds(b, s.width, s.height, 48, STRIP_PX));
 }

@@ -37,13 +37,19 @@ function clamp(v: number, lo: number, hi: number) {
   return Math.min(hi, Math.max(lo, v));
 }
 
-/** A view that shows `b` centred in a width × height viewport with a margin. */
-export function fitBounds(b: Bounds, width: number, height: number, margin = 48): ViewTransform {
+/** Height of the proposals strip across the top of the canvas (px; app/ui/cutout.css). */
+export const STRIP_PX = 28;
+
+/**
+ * A view that shows `b` centred in a width × height viewport with a margin, below a band of
+ * `top` pixels that something else covers (the proposals strip).
+ */
+export function fitBounds(b: Bounds, width: number, height: number, margin = 48, top = 0): ViewTransform {
   const w = Math.max(b.xmax - b.xmin, 1e-9), h = Math.max(b.ymax - b.ymin, 1e-9);
-  const scale = Math.min((width - 2 * margin) / w, (height - 2 * margin) / h);
+  const scale = Math.min((width - 2 * margin) / w, (height - top - 2 * margin) / h);
   const s = Number.isFinite(scale) && scale > 0 ? scale : 1;
   const cx = (b.xmin + b.xmax) / 2, cy = (b.ymin + b.ymax) / 2;
-  return { scale: s, ox: width / 2 - cx * s, oy: height / 2 + cy * s };
+  return { scale: s, ox: width / 2 - cx * s, oy: top + (height - top) / 2 + cy * s };
 }
 
 /** Bounds of every shape's own outline (so subtracted or empty results still fit). */

@@ -57,7 +57,7 @@ export { catalogueSeries, catalogueSize, catalogueProfile, CatalogueError, type 
 export { compareSections, comparisonRow, evaluateLimits, overallVerdict, exampleLimits, EXAMPLE_LIMITS_NOTE, comparisonCatalog, CRITICAL_FIBRE_PROPERTIES, validateLimits } from './compare';
 export type { SectionComparison, PropertyChange, LimitResult, LimitStatus, Verdict, CentroidShift, AxesRotation } from './compare';
 export { materialChange, fieldsFor, LIMIT_FIELDS, CENTROID_KEY, type MaterialChange, type LimitField } from './compare';
-export { analyseCutouts, sectionCautions, CUTOUT_CAUTION_TEXT, HOLE_CHECK_NOTE, HOLE_RULE_SETS, cautionsInOrder, namedInputShapes } from './cautions';
+export { analyseCutouts, sectionCautions, CUTOUT_CAUTION_TEXT, HOLE_CHECK_NOTE, SECTION_CAUTION_TEXT, HOLE_RULE_SETS, cautionsInOrder, namedInputShapes } from './cautions';
 export type { Caution, CautionKind, CautionSeverity, CutoutFindings, InputShape, HoleRuleSetId } from './cautions';
 export { netSection, describeGap, NetSectionError, NET_SECTION_PURPOSE, NET_SECTION_CAUTION, type NetSection, type NetGap, type GapKind } from './netsection';
 export * from './lines';

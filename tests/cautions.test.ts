@@ -79,11 +79,55 @@ describe('re-entrant corners', () => {
     const base = { ...DEMO_DOCUMENT, shapes: DEMO_DOCUMENT.shapes.slice(0, 2) };
     const notch: Shape = { id: 'notch', name: 'Drain notch', type: 'rectangle', at: [20, -1], width: 20, height: 5, op: 'subtract' };
     const proposal = { ...base, shapes: [...base.shapes, notch] };
-    const plain = ofKind(cautions(proposal), 're-entrant-corner');
-    expect(plain.map((c) => [c.at.x, c.at.y])).toEqual(expect.arrayContaining([[50, 200], [-50, 200]]));
+    // On its own the section has the notch's corners as warnings; where the cover plate meets
+    // the flange tips it is a joint between two added parts, noted once.
+    const plain = cautions(proposal);
+    expect(ofKind(plain, 're-entrant-corner').map((c) => [c.at.x, c.at.y]).sort()).toEqual([[20, 4], [40, 4]]);
+    expect(ofKind(plain, 'joint').map((c) => c.shape?.id)).toEqual(['beam']);
     const compared = ofKind(cautions(proposal, base), 're-entrant-corner');
     expect(compared.map((c) => c.at).sort((a, b) => a.x - b.x)).toEqual([{ x: 20, y: 4 }, { x: 40, y: 4 }]);
     for (const c of compared) expect(c.shape?.id).toBe('notch');
+  });
+});
+
+describe('joints between parts', () => {
+  // A tee welded from two plates: flange 200 × 20 on a web 10 × 180. The web meets the flange's
+  // underside at (±5, 180), two inside corners of 270° of material.
+  const flange: Shape = { id: 'fl', name: 'Flange 200 × 20', type: 'rectangle', at: [-100, 180], width: 200, height: 20 };
+  const webPlate: Shape = { id: 'wb', name: 'Web 10 × 180', type: 'rectangle', at: [-5, 0], width: 10, height: 180 };
+
+  it('two plates that meet make one joint note, not two sharp-corner warnings', () => {
+    const cs = cautions(doc([webPlate, flange]));
+    expect(ofKind(cs, 're-entrant-corner')).toEqual([]);
+    const j = ofKind(cs, 'joint');
+    expect(j).toHaveLength(1);
+    expect(j[0].severity).toBe('note');
+    expect(Math.abs(j[0].at.x)).toBe(5);
+    expect(j[0].at.y).toBe(180);
+    expect(j[0].message).toMatch(/“Web 10 × 180” \(wb\) and “Flange 200 × 20” \(fl\) meet at \(-?5, 180\)/);
+    expect(j[0].message).toMatch(/shear flow/);
+    expect(j[0].source).toMatch(/Gere & Goodno/);
+  });
+
+  it('the same tee drawn as one outline has two sharp inside corners (a cut plate)', () => {
+    const tee: Shape = {
+      id: 'tee', type: 'polygon',
+      points: [[-5, 0], [5, 0], [5, 180], [100, 180], [100, 200], [-100, 200], [-100, 180], [-5, 180]],
+    };
+    const cs = cautions(doc([tee]));
+    expect(ofKind(cs, 'joint')).toEqual([]);
+    expect(ofKind(cs, 're-entrant-corner').map((c) => [c.at.x, c.at.y]).sort()).toEqual([[-5, 180], [5, 180]]);
+  });
+
+  it('a cut at the joint makes its corners cut corners; the joint it leaves alone stays a joint', () => {
+    // A notch 20 × 5 cut into the flange's underside right of the web (x 5 to 25, y 180 to 185):
+    // inside corners at (5, 185) and (25, 185), both on the notch; (−5, 180) is still web on flange.
+    const notch: Shape = { id: 'n', name: 'Notch', type: 'rectangle', at: [5, 175], width: 20, height: 10, op: 'subtract' };
+    const cs = cautions(doc([webPlate, flange, notch]));
+    const sharp = ofKind(cs, 're-entrant-corner');
+    expect(sharp.map((c) => [c.at.x, c.at.y]).sort()).toEqual([[25, 185], [5, 185]]);
+    for (const c of sharp) expect(c.shape?.id).toBe('n');
+    expect(ofKind(cs, 'joint').map((c) => [c.at.x, c.at.y])).toEqual([[-5, 180]]);
   });
 });
 

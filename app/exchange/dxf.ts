@@ -9,7 +9,7 @@ import { importDxf } from '../../src/exchange';
 import type { CommandContext } from '../commands/registry';
 import { fitView } from '../ops/view';
 import { commit } from '../store/history';
-import { evaluationBounds, fitBounds } from '../view';
+import { evaluationBounds, fitBounds, STRIP_PX } from '../view';
 import { exchangeStore, type PendingImport } from './state';
 import { activeSection, activeShapes, withActiveShapes } from '../store/section';
 
@@ -68,7 +68,7 @@ function showAll(ctx: CommandContext, region: Region, points: [number, number][]
   const s = ctx.store.getState();
   let b: Bounds | null = unionBounds(evaluationBounds({ shapes: ctx.shapesOf(s.doc) }), regionBounds(region));
   for (const [x, y] of points) if (Number.isFinite(x) && Number.isFinite(y)) b = unionBounds(b, { xmin: x, xmax: x, ymin: y, ymax: y });
-  if (b) ctx.store.setState(fitBounds(b, Math.max(s.width - coveredRight, s.width / 2), s.height));
+  if (b) ctx.store.setState(fitBounds(b, Math.max(s.width - coveredRight, s.width / 2), s.height, 48, STRIP_PX));
 }
 
 /**

@@ -2,7 +2,7 @@
 import type { SectionProperties } from '../../src';
 import type { CommandContext } from '../commands/registry';
 import type { EditorState, Overlays } from '../store/store';
-import { evaluationBounds, fitBounds } from '../view';
+import { evaluationBounds, fitBounds, STRIP_PX } from '../view';
 import { unionBounds } from '../../src';
 import { activeSection } from '../store/section';
 import { linesAndLoadsBounds } from './welds';
@@ -14,7 +14,7 @@ export function fitView(ctx: CommandContext): void {
   const b = unionBounds(evaluationBounds({ shapes }), linesAndLoadsBounds(shapes, activeSection(s.doc)));
   if (!b) return;
   // With dimensions shown, room for their lanes (about 20 mm of screen beyond the section).
-  ctx.store.setState(fitBounds(b, s.width, s.height, s.overlays.dimensions ? 48 + 76 : 48));
+  ctx.store.setState(fitBounds(b, s.width, s.height, s.overlays.dimensions ? 48 + 76 : 48, STRIP_PX));
 }
 
 /** Where a new cut line starts: through the centroid, with round-off zero shown as 0. */

@@ -6,7 +6,7 @@
  * document. The standing cautions close the list: a geometric screen, geometry checks only, and
  * the deferral to the applicable code and a qualified engineer.
  */
-import { CAUTION_TEXT, CUTOUT_CAUTION_TEXT, HOLE_CHECK_NOTE, HOLE_RULE_SETS, type Caution } from '../../src';
+import { CAUTION_TEXT, CUTOUT_CAUTION_TEXT, HOLE_CHECK_NOTE, HOLE_RULE_SETS, SECTION_CAUTION_TEXT, type Caution, type Shape } from '../../src';
 import { numberedCautions, useActiveProposal, useCautions } from '../cutout-hooks';
 import { useEditor, useEditorState } from '../context';
 import '../ui/cutout.css';
@@ -14,12 +14,15 @@ import '../ui/cutout.css';
 const KIND_TEXT: Record<Caution['kind'], string> = {
   're-entrant-corner': 'Sharp inside corner',
   'radiused-corner': 'Radiused inside corner',
+  joint: 'Joint between parts',
   'separate-parts': 'Separate parts',
   'hole-edge-distance': 'Hole near an edge',
   'hole-spacing': 'Holes close together',
   'thin-ligament': 'Thin ligament',
   ligament: 'Ligament',
 };
+
+const isRoundHole = (s: Shape | string) => typeof s !== 'string' && s.type === 'circle' && s.op === 'subtract';
 
 function Item({ c, n, faint }: { c: Caution; n: number; faint?: boolean }) {
   return (
@@ -43,6 +46,9 @@ export function CautionsPanel() {
   const { all, own } = numberedCautions(cautions);
   const mine = all.slice(0, own), before = all.slice(own);
   const warnings = mine.filter((c) => c.severity === 'warning').length;
+  // The hole rules and their limits are shown when there are round holes to check.
+  const roundHoles = useEditorState((s) => s.doc.shapes.some(isRoundHole) || (s.doc.variants ?? []).some((v) => v.shapes.some(isRoundHole)));
+  const holes = roundHoles || all.some((c) => c.kind === 'hole-edge-distance' || c.kind === 'hole-spacing');
   return (
     <section className="panel-section cautions-panel" data-testid="cautions-panel">
       <h2>
@@ -52,16 +58,18 @@ export function CautionsPanel() {
           {stale ? ' · updating…' : ''}
         </span>
       </h2>
-      <label className="rules-choice">
-        Hole rules
-        <select data-testid="hole-rules" value={rules} onChange={(e) => editor.run('holeRules.set', e.target.value)}>
-          {Object.values(HOLE_RULE_SETS).map((r) => (
-            <option key={r.id} value={r.id}>
-              {r.name}
-            </option>
-          ))}
-        </select>
-      </label>
+      {holes && (
+        <label className="rules-choice">
+          Hole rules
+          <select data-testid="hole-rules" value={rules} onChange={(e) => editor.run('holeRules.set', e.target.value)}>
+            {Object.values(HOLE_RULE_SETS).map((r) => (
+              <option key={r.id} value={r.id}>
+                {r.name}
+              </option>
+            ))}
+          </select>
+        </label>
+      )}
       {!cautions && <p className="hint">No section to check.</p>}
       {cautions && proposal && <h3 className="cautions-sub">New with {proposal}</h3>}
       {cautions && mine.length === 0 && <p className="hint">{proposal ? 'The proposal raises no new caution from the geometry.' : 'No caution raised by the geometry.'}</p>}
@@ -81,7 +89,8 @@ export function CautionsPanel() {
         </details>
       )}
       <p className="caution-standing" data-testid="cutout-caution">
-        {CUTOUT_CAUTION_TEXT} {HOLE_CHECK_NOTE} {HOLE_RULE_SETS[rules].notChecked} {CAUTION_TEXT}
+        {proposal ? CUTOUT_CAUTION_TEXT : SECTION_CAUTION_TEXT} {holes && `${HOLE_CHECK_NOTE} ${HOLE_RULE_SETS[rules].notChecked} `}
+        {CAUTION_TEXT}
       </p>
     </section>
   );

@@ -72,7 +72,7 @@ export function ToolRail() {
         <h3>Snap</h3>
         <CommandButton name="snap.grid" />
         <CommandButton name="snap.geometry" />
-        <CommandButton name="snap.ortho" />
+        <CommandButton name="snap.ortho" className="wide" />
       </div>
       <div className="rail-group rail-grid">
         <h3>Show</h3>
@@ -81,7 +81,7 @@ export function ToolRail() {
         <CommandButton name="view.principal">Axes 1, 2</CommandButton>
         <CommandButton name="view.fibres">Fibres</CommandButton>
         <CommandButton name="view.cut">Cut line</CommandButton>
-        <CommandButton name="view.dimensions">Dimensions</CommandButton>
+        <CommandButton name="view.dimensions">Dims</CommandButton>
         <CommandButton name="view.kern">Kern</CommandButton>
         <CommandButton name="view.stress">Loads σ</CommandButton>
         <CommandButton name="view.stressMap">Torsion τ</CommandButton>

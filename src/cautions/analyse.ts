@@ -2,6 +2,8 @@
  * Structural cautions for a cutout, from the geometry of the result (and, when given, the
  * baseline and the input shapes):
  *   1. inside corners: sharp re-entrant vertices (warning) and radiused ones with their radius (note);
+ *      a sharp corner where two added shapes meet (and no cut) is a joint between parts, not a
+ *      cut: one note per pair, saying the parts act as one only through their connection;
  *   2. separate parts: the section falls into pieces that act together only if tied elsewhere;
  *   3. round holes near a free edge or near each other, against a selectable rule set;
  *   4. ligaments: the narrowest material next to each cutout (a note), a warning when it is thin:
@@ -20,7 +22,7 @@ import { holeChecks, type HoleCheck } from './hole-checks';
 import { HOLE_RULE_SETS, type HoleRuleSet } from './hole-rules';
 import { cutRuns, ligaments, type CutRun, type Ligament } from './ligaments';
 import {
-  holeEdgeCaution, holeSpacingCaution, ligamentCaution, radiusedCornerCaution, separatePartsCaution, sharpCornerCaution, type Wording,
+  holeEdgeCaution, jointCaution, holeSpacingCaution, ligamentCaution, radiusedCornerCaution, separatePartsCaution, sharpCornerCaution, type Wording,
 } from './messages';
 import { partGaps, sectionParts, type PartGap, type SectionPart } from './parts';
 import { ShapeLocator } from './place';
@@ -125,7 +127,18 @@ export function analyseCutouts(input: CautionInput, options: CautionOptions = {}
   const corners = insideCorners(result, minTurn);
   findings.corners = corners;
   const flagged = base ? newCorners(corners, insideCorners(base, minTurn), tol) : corners;
-  for (const c of flagged.sharp) cautions.push(sharpCornerCaution(c, shapeAt(c.x, c.y), w));
+  // A corner where two added shapes meet is a joint, noted once per pair; the rest are cuts.
+  const joints = new Set<string>();
+  for (const c of flagged.sharp) {
+    const pair = locator?.joint(c.x, c.y);
+    if (!pair) {
+      cautions.push(sharpCornerCaution(c, shapeAt(c.x, c.y), w));
+      continue;
+    }
+    const key = [pair[0].id, pair[1].id].sort().join('\u0000');
+    if (!joints.has(key)) cautions.push(jointCaution(c, pair[0], pair[1], w));
+    joints.add(key);
+  }
   for (const c of flagged.radiused) cautions.push(radiusedCornerCaution(c, shapeAt(c.x, c.y), w));
 
   // 2. Separate parts.

@@ -8,6 +8,6 @@ export { HOLE_RULE_SETS, EN1993_RULES, AISC360_RULES, type HoleRuleSet, type Hol
 export { ligaments, narrowestWidth, cutRuns, type Ligament, type CutRun } from './ligaments';
 export { closestCandidates, closestPair, nearestOnCarrier, type PointPair } from './closest';
 export { REENTRANT_SOURCE } from './messages';
-export { CUTOUT_CAUTION_TEXT, HOLE_CHECK_NOTE } from './wording';
+export { CUTOUT_CAUTION_TEXT, HOLE_CHECK_NOTE, SECTION_CAUTION_TEXT } from './wording';
 export { cautionsInOrder } from './order';
 export { namedInputShapes } from './input-shapes';

@@ -37,6 +37,27 @@ export function sharpCornerCaution(c: SharpCorner, shape: ShapeRef | null, w: Wo
   };
 }
 
+/** Built-up sections: the parts act as one only through their connection. */
+export const JOINT_SOURCE = 'Gere & Goodno, Mechanics of Materials, built-up beams and shear flow f = VQ/I (from memory)';
+
+/**
+ * An inside corner where two added shapes meet is a joint between parts (a weld or a contact),
+ * not a cut: the corner rule for cuts does not apply, but the properties hold only when the parts
+ * are connected to act together. One note per pair of parts, at the first corner they share.
+ */
+export function jointCaution(c: SharpCorner, a: ShapeRef, b: ShapeRef, w: Wording): Caution {
+  return {
+    kind: 'joint',
+    severity: 'note',
+    message:
+      `${shapeText(a)} and ${shapeText(b)} meet at ${pointText(c.x, c.y, w.scale)} and are taken as one piece: ` +
+      'the properties hold only when the joint between them (welds or fasteners) carries the shear flow along it.',
+    at: { x: c.x, y: c.y },
+    shape: a,
+    source: JOINT_SOURCE,
+  };
+}
+
 export function radiusedCornerCaution(c: RadiusedCorner, shape: ShapeRef | null, w: Wording): Caution {
   return {
     kind: 'radiused-corner',

@@ -37,6 +37,18 @@ export class ShapeLocator {
     });
     return ref(this.shapes[best]);
   }
+
+  /**
+   * The two added shapes that meet at (x, y) when the point is a joint between parts rather than
+   * a cut: on the boundaries of two or more added shapes and on no cut's boundary. Null otherwise
+   * (and when no shapes were given).
+   */
+  joint(x: number, y: number): [ShapeRef, ShapeRef] | null {
+    const on = this.shapes.map((s, k) => ({ s, d: distanceToBoundary(this.boundaries[k].segments, x, y) })).filter((e) => e.d <= this.tol);
+    if (on.some((e) => e.s.op !== 'add')) return null;
+    const added = on.filter((e) => e.s.op === 'add');
+    return added.length >= 2 ? [ref(added[0].s), ref(added[1].s)] : null;
+  }
 }
 
 function rank(s: InputShape): number {

@@ -8,6 +8,7 @@ import type { Region } from '../geometry/contour';
 export type CautionKind =
   | 're-entrant-corner'
   | 'radiused-corner'
+  | 'joint'
   | 'separate-parts'
   | 'hole-edge-distance'
   | 'hole-spacing'

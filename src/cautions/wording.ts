@@ -9,6 +9,11 @@ export const CUTOUT_CAUTION_TEXT =
   'Whether the cutout is acceptable depends on the loads, the material, the connections and the applicable code, ' +
   'and must be decided by a qualified engineer.';
 
+/** The same for a section on its own (no proposal to compare). */
+export const SECTION_CAUTION_TEXT =
+  'The cautions are a geometric screen of the section as drawn, not a design check: ' +
+  'corners, joints, holes and ligaments are flagged for a qualified engineer to judge.';
+
 /** Hole distances are checked as geometry only. */
 export const HOLE_CHECK_NOTE =
   'Hole edge distances and spacings are geometry checks only: the bolt, the load direction, the plate thickness, ' +
