@@ -268,14 +268,31 @@ describe('fillet on arbitrary input', () => {
         // The fillet's tangent points lie at the radius from its centre, to round-off of the size of
         // the two segments that meet at the corner (an arc of radius 1e6 meeting a fillet of 1e-4
         // fixes its tangent point only to about 1e6 × 1e-16 / sin(the angle it is cut at)).
+        // An arc's centre sits at its radius from its points, so a nearly straight arc (radius 1e9
+        // through points a unit apart) carries its radius into the round-off as well.
         const pts = [start as Point, ...segments.flatMap((g) => (g.via ? [g.to, g.via] : [g.to]))];
-        const size = Math.max(1, r, Math.hypot(...res.centre), ...pts.map((q) => Math.hypot(q[0], q[1])));
+        let from = start as Point;
+        const radii = segments.map((g) => {
+          const rr = g.via ? circumradius(from, g.via, g.to) : 0;
+          from = g.to;
+          return Number.isFinite(rr) ? Math.min(rr, 1e12) : 0;
+        });
+        const size = Math.max(1, r, Math.hypot(...res.centre), ...pts.map((q) => Math.hypot(q[0], q[1])), ...radii);
         for (const t of [res.tangentIn, res.tangentOut]) expect(Math.abs(Math.hypot(t[0] - res.centre[0], t[1] - res.centre[1]) - r)).toBeLessThan(1e-9 * size);
       }),
       { numRuns: 2000 },
     );
   });
 });
+
+/** Radius of the circle through three points (Infinity when they are collinear). */
+function circumradius(a: Point, b: Point, c: Point): number {
+  const ab = Math.hypot(b[0] - a[0], b[1] - a[1]);
+  const bc = Math.hypot(c[0] - b[0], c[1] - b[1]);
+  const ca = Math.hypot(a[0] - c[0], a[1] - c[1]);
+  const cross = Math.abs((b[0] - a[0]) * (c[1] - a[1]) - (b[1] - a[1]) * (c[0] - a[0]));
+  return cross === 0 ? Infinity : (ab * bc * ca) / (2 * cross);
+}
 
 describe('tangent arcs for typed path entry', () => {
   it('leaves the point along the given direction and turns by the signed sweep', () => {
