@@ -3,6 +3,7 @@ import { useEffect, useRef } from 'react';
 import { EditorContext, type EditorHandle } from './context';
 import { installKeyboard } from './keyboard';
 import { openFileText } from './exchange/open';
+import { HiddenFileInput } from './exchange/FileInput';
 import { Canvas } from './canvas/Canvas';
 import { DimensionCaption } from './canvas/DimensionCaption';
 import { CutPanel } from './panel/CutPanel';
@@ -89,19 +90,7 @@ export function App({ editor }: { editor: EditorHandle }) {
         <QuestionDialog />
         <MaterialsDialog />
         <CheckerDialog />
-        <input
-          ref={fileInput}
-          type="file"
-          accept=".json,application/json,.dxf"
-          data-testid="file-input"
-          style={{ display: 'none' }}
-          onChange={async (e) => {
-            const f = e.target.files?.[0];
-            e.target.value = '';
-            if (!f) return;
-            openFileText(editor.ctx, f.name, await f.text());
-          }}
-        />
+        <HiddenFileInput inputRef={fileInput} accept=".json,application/json,.dxf" testId="file-input" onText={(name, text) => openFileText(editor.ctx, name, text)} />
       </div>
     </EditorContext.Provider>
   );

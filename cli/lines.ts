@@ -18,9 +18,7 @@ import {
   LINE_GROUP_CAUTION,
   LINE_PROPERTY_CATALOG,
   linePropertiesJson,
-  sectionOf,
   sectionSize,
-  VariantError,
   WELD_GROUP_CAUTION,
   weldResult,
   type Evaluation,
@@ -29,7 +27,7 @@ import {
   type WeldLoadCase,
   type WeldResult,
 } from '../src';
-import { loadFile, parseArgs, UsageError } from './main';
+import { loadSection, parseArgs, UsageError } from './main';
 import { parsePoint } from './netsection';
 
 function out(s: string): void {
@@ -153,22 +151,9 @@ export async function weldCommand(args: string[]): Promise<number> {
   if (groupFlag === true) throw new UsageError('--group needs the name of a line group');
   const variant = a.flags.get('variant');
   if (variant === true) throw new UsageError('--variant needs the name of a proposal');
-  const loaded = await loadFile(file, a.flags.get('units') as string | undefined);
-  if (!loaded.ok) {
-    err(`${file}: the section cannot be read:`);
-    for (const m of loaded.messages) err(`  ${m}`);
-    return 2;
-  }
-  let doc = loaded.doc;
-  if (variant !== undefined) {
-    try {
-      doc = sectionOf(loaded.doc, variant);
-    } catch (e) {
-      if (!(e instanceof VariantError)) throw e;
-      err(`${file}: ${e.message}`);
-      return 2;
-    }
-  }
+  const loaded = await loadSection(file, a.flags.get('units') as string | undefined, variant);
+  if (!loaded) return 2;
+  const doc = loaded.doc;
   for (const w of loaded.warnings) err(`warning: ${w}`);
   const ev = evaluateDocument(doc);
   const groups = ev.lines.map((g) => g.group);

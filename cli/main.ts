@@ -109,6 +109,27 @@ export async function loadFile(path: string, units?: string): Promise<Loaded> {
   return { ok: true, doc: r.doc, warnings: r.warnings.map(formatIssue) };
 }
 
+/**
+ * Read and validate a file and pick its baseline, or the proposal named by --variant. A file that
+ * cannot be read or a proposal that is not there is said on stderr, and gives null.
+ */
+export async function loadSection(file: string, units: string | undefined, variant: string | undefined): Promise<{ doc: SectionDocument; warnings: string[] } | null> {
+  const loaded = await loadFile(file, units);
+  if (!loaded.ok) {
+    err(`${file}: the section cannot be read:`);
+    for (const m of loaded.messages) err(`  ${m}`);
+    return null;
+  }
+  if (variant === undefined) return { doc: loaded.doc, warnings: loaded.warnings };
+  try {
+    return { doc: sectionOf(loaded.doc, variant), warnings: loaded.warnings };
+  } catch (e) {
+    if (!(e instanceof VariantError)) throw e;
+    err(`${file}: ${e.message}`);
+    return null;
+  }
+}
+
 /** `props --json`: the units, every catalogue property (full precision) and the warnings. */
 function propsJson(doc: SectionDocument, ev: Evaluation, p: SectionProperties, warnings: string[]) {
   return { units: doc.units, ...propertiesJson(p), ...sectionExtrasJson(doc, ev), warnings: [...warnings, ...ev.warnings.map((w) => formatShapeIssue(w, doc.shapes))] };
@@ -138,22 +159,9 @@ async function evaluateFile(file: string | undefined, flags: Parsed['flags'], li
   const units = flags.get('units');
   const variant = flags.get('variant');
   if (variant === true) throw new UsageError('--variant needs the name of a proposal');
-  const loaded = await loadFile(file, typeof units === 'string' ? units : undefined);
-  if (!loaded.ok) {
-    err(`${file}: the section cannot be read:`);
-    for (const m of loaded.messages) err(`  ${m}`);
-    return null;
-  }
-  let doc = loaded.doc;
-  if (variant !== undefined) {
-    try {
-      doc = sectionOf(loaded.doc, variant);
-    } catch (e) {
-      if (!(e instanceof VariantError)) throw e;
-      err(`${file}: ${e.message}`);
-      return null;
-    }
-  }
+  const loaded = await loadSection(file, typeof units === 'string' ? units : undefined, variant);
+  if (!loaded) return null;
+  const doc = loaded.doc;
   const ev = evaluateDocument(doc);
   if (!ev.props && !(linesOnly && ev.lines.length > 0)) {
     err(`${file}: ${ev.message ?? 'the section has no area'}`);

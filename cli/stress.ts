@@ -21,14 +21,12 @@ import {
   FORCE_UNITS,
   ONE_MATERIAL_ID,
   SIGN_CONVENTION,
-  sectionOf,
   stressAt,
   stressJson,
   stressSection,
   STRESS_UNITS,
   UNIT_IN_METRES,
   UNITS,
-  VariantError,
   evaluateDocument,
   momentUnitText,
   type ForceUnit,
@@ -40,7 +38,7 @@ import {
   type StressUnit,
   type Units,
 } from '../src';
-import { loadFile, parseArgs, UsageError } from './main';
+import { loadSection, parseArgs, UsageError } from './main';
 
 function out(s: string): void {
   process.stdout.write(s.endsWith('\n') ? s : s + '\n');
@@ -159,22 +157,9 @@ export async function stressCommand(args: string[]): Promise<number> {
 
   const file = a.positional[0];
   const units = a.flags.get('units');
-  const loaded = await loadFile(file, typeof units === 'string' ? units : undefined);
-  if (!loaded.ok) {
-    err(`${file}: the section cannot be read:`);
-    for (const m of loaded.messages) err(`  ${m}`);
-    return 2;
-  }
-  let doc = loaded.doc;
-  if (variant !== undefined) {
-    try {
-      doc = sectionOf(loaded.doc, variant);
-    } catch (e) {
-      if (!(e instanceof VariantError)) throw e;
-      err(`${file}: ${e.message}`);
-      return 2;
-    }
-  }
+  const loaded = await loadSection(file, typeof units === 'string' ? units : undefined, variant);
+  if (!loaded) return 2;
+  const doc = loaded.doc;
   const docUnits = documentLoadUnits(doc);
   const lu: LoadUnits = documentLoadUnits({ ...doc, ...(force ? { forceUnit: force } : {}), ...(stress ? { stressUnit: stress } : {}), ...(momentLength ? { momentLength } : {}) });
   const loads: Loads = { ...convertLoads(doc.loads ?? {}, docUnits, lu), ...given };

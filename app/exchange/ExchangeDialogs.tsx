@@ -8,6 +8,7 @@ import { UNITS, type Units } from '../../src';
 import type { DxfProblem } from '../../src/exchange';
 import { useEditor, useEditorState } from '../context';
 import { applyImport, cancelImport, clearProblems, readDxf } from './dxf';
+import { HiddenFileInput } from './FileInput';
 import { defaultPxPerUnit, pngProblem, pngSize } from './exports';
 import { useExchange } from './hooks';
 import { exchangeStore, type PendingImport } from './state';
@@ -50,28 +51,7 @@ function DxfFileInput() {
     ex.setState({ pickDxf: () => input.current?.click() });
     return () => ex.setState({ pickDxf: null });
   }, [editor]);
-  return (
-    <input
-      ref={input}
-      type="file"
-      accept=".dxf,image/vnd.dxf,application/dxf"
-      data-testid="dxf-input"
-      style={{ display: 'none' }}
-      onChange={async (e) => {
-        const f = e.target.files?.[0];
-        e.target.value = '';
-        if (!f) return;
-        let text: string;
-        try {
-          text = await f.text();
-        } catch (err) {
-          editor.store.setState({ notice: { kind: 'error', title: `"${f.name}" could not be read.`, lines: [String((err as Error).message ?? err), 'Your current section is unchanged.'] } });
-          return;
-        }
-        readDxf(editor.ctx, f.name, text);
-      }}
-    />
-  );
+  return <HiddenFileInput inputRef={input} accept=".dxf,image/vnd.dxf,application/dxf" testId="dxf-input" onText={(name, text) => readDxf(editor.ctx, name, text)} />;
 }
 
 function ImportDialog() {

@@ -147,3 +147,15 @@ export function chainHandles(start: Point, segments: readonly PathSegment[]) {
   });
   return out;
 }
+
+/**
+ * The chain with one handle moved. A closed chain (a path) ends on its start, so moving the
+ * start moves the last segment's end with it.
+ */
+export function movedChainHandle<S extends { start: Point; segments: readonly PathSegment[] }>(s: S, ref: { kind: string; index?: number }, p: Point, closed = false): S {
+  const last = s.segments.length - 1;
+  if (ref.kind === 'start') return { ...s, start: p, segments: closed ? s.segments.map((g, i) => (i === last ? { ...g, to: p } : g)) : s.segments };
+  if (ref.kind === 'to') return { ...s, segments: s.segments.map((g, i) => (i === ref.index ? { ...g, to: p } : g)) };
+  if (ref.kind === 'via') return { ...s, segments: s.segments.map((g, i) => (i === ref.index ? { ...g, via: p } : g)) };
+  return s;
+}

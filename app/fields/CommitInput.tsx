@@ -4,9 +4,9 @@
  * field means "none" when `optional`, and a refused value stays in the field with the reason
  * below it. Escape restores the stored value.
  */
-import { useEffect, useRef, useState } from 'react';
 import { evaluateExpression } from '../expr';
 import { editText } from './NumberField';
+import { useCommitText } from './useCommitText';
 
 type Props =
   | { kind: 'number'; value: number | null; optional?: boolean; onCommit: (v: number | null) => string | null }
@@ -14,55 +14,19 @@ type Props =
 
 export function CommitInput(props: Props & { field: string; label: string; placeholder?: string; className?: string }) {
   const shown = props.kind === 'number' ? (props.value === null ? '' : editText(props.value)) : props.value;
-  const [text, setText] = useState(shown);
-  const [error, setError] = useState<string | null>(null);
-  const focused = useRef(false);
-  useEffect(() => {
-    if (!focused.current) {
-      setText(shown);
-      setError(null);
-    }
-  }, [shown]);
-  const apply = (): boolean => {
-    if (text.trim() === shown.trim()) {
-      setError(null);
-      return true;
-    }
-    let err: string | null;
-    if (props.kind === 'text') err = props.onCommit(text.trim());
-    else if (text.trim() === '') err = props.optional ? props.onCommit(null) : 'Enter a number.';
-    else {
-      const r = evaluateExpression(text);
-      err = r.ok ? props.onCommit(r.value) : r.message;
-    }
-    setError(err);
-    return err === null;
-  };
+  const { error, inputProps } = useCommitText(shown, (text) => {
+    if (props.kind === 'text') return props.onCommit(text.trim());
+    if (text.trim() === '') return props.optional ? props.onCommit(null) : 'Enter a number.';
+    const r = evaluateExpression(text);
+    return r.ok ? props.onCommit(r.value) : r.message;
+  });
   return (
     <span className={`commit-input${error ? ' invalid' : ''}${props.className ? ` ${props.className}` : ''}`}>
       <input
         data-field={props.field}
         aria-label={props.label}
-        aria-invalid={!!error}
-        value={text}
         placeholder={props.placeholder}
-        spellCheck={false}
-        onFocus={() => (focused.current = true)}
-        onChange={(e) => setText(e.target.value)}
-        onBlur={() => {
-          focused.current = false;
-          apply();
-        }}
-        onKeyDown={(e) => {
-          e.stopPropagation();
-          if (e.key === 'Enter') {
-            if (apply()) (e.target as HTMLInputElement).blur();
-          } else if (e.key === 'Escape') {
-            setText(shown);
-            setError(null);
-            (e.target as HTMLInputElement).blur();
-          }
-        }}
+        {...inputProps}
       />
       {error && (
         <span className="field-error" role="alert" data-error-for={props.field}>

@@ -5,13 +5,14 @@
  * code; the first change saves the whole list. Each field applies on Enter or when it loses
  * focus, is checked by the engine first, and is one undo step; an empty field clears that limit.
  */
-import { useEffect, useRef, useState } from 'react';
+import { useState } from 'react';
 import { comparisonCatalog, CENTROID_KEY, EXAMPLE_LIMITS_NOTE, type LimitField, type LimitResult } from '../../src';
 import { useLimits } from '../cutout-hooks';
 import { useEditor, useEditorState } from '../context';
 import { evaluateExpression } from '../expr';
 import { CommandButton } from '../fields/CommandButton';
 import { editText } from '../fields/NumberField';
+import { useCommitText } from '../fields/useCommitText';
 import { limitFieldsFor, limitsWithAdded, limitsWithValue } from '../ops/limits';
 import '../ui/cutout.css';
 
@@ -34,30 +35,19 @@ export function limitPropertyText(key: string): { symbol: string; label: string 
 function LimitInput({ index, field, value, units }: { index: number; field: LimitField; value: number | undefined; units: string }) {
   const editor = useEditor();
   const shown = value === undefined ? '' : editText(value);
-  const [text, setText] = useState(shown);
-  const [error, setError] = useState<string | null>(null);
-  const focused = useRef(false);
-  useEffect(() => {
-    if (!focused.current) {
-      setText(shown);
-      setError(null);
-    }
-  }, [shown]);
-  const apply = () => {
-    if (text.trim() === shown) return true;
+  const { error, inputProps } = useCommitText(shown, (text) => {
     let v: number | null = null;
     if (text.trim() !== '') {
       const r = evaluateExpression(text);
-      if (!r.ok) return setError(r.message), false;
+      if (!r.ok) return r.message;
       v = r.value;
     }
     const arg = { index, field, value: v };
     const plan = limitsWithValue(editor.store.getState().doc, arg);
-    if (typeof plan === 'string') return setError(plan), false;
+    if (typeof plan === 'string') return plan;
     editor.run('limits.set', arg);
-    setError(null);
-    return true;
-  };
+    return null;
+  });
   const t = FIELD_TEXT[field];
   return (
     <>
@@ -65,26 +55,8 @@ function LimitInput({ index, field, value, units }: { index: number; field: Limi
         {t.label}
         <input
           data-limit-field={field}
-          value={text}
           placeholder="none"
-          spellCheck={false}
-          aria-invalid={!!error}
-          onFocus={() => (focused.current = true)}
-          onChange={(e) => setText(e.target.value)}
-          onBlur={() => {
-            focused.current = false;
-            apply();
-          }}
-          onKeyDown={(e) => {
-            e.stopPropagation();
-            if (e.key === 'Enter') {
-              if (apply()) (e.target as HTMLInputElement).blur();
-            } else if (e.key === 'Escape') {
-              setText(shown);
-              setError(null);
-              (e.target as HTMLInputElement).blur();
-            }
-          }}
+          {...inputProps}
         />
         {t.suffix(units)}
       </label>

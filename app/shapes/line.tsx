@@ -8,7 +8,7 @@
 import { useEffect, useState } from 'react';
 import { DEFAULT_LINE_GROUP, documentLineGroups, unitFactor, type LineShape, type PathSegment, type Point } from '../../src';
 import { useEditor, useEditorState } from '../context';
-import { ChainFields, chainHandles } from '../fields/ChainFields';
+import { ChainFields, chainHandles, movedChainHandle } from '../fields/ChainFields';
 import { useShapeEdit } from '../fields/shape-edit';
 import { addLinesAlongOutline, setLineGroup } from '../ops/welds';
 import type { Command } from '../commands/registry';
@@ -92,12 +92,7 @@ const ALONG_OUTLINE_COMMAND: Command = {
 export const lineEditor: ShapeEditor<LineShape> = {
   types: ['line'],
   handles: (s) => chainHandles(s.start, s.segments),
-  moveHandle: (s, ref, p) => {
-    if (ref.kind === 'start') return { ...s, start: p };
-    if (ref.kind === 'to') return { ...s, segments: s.segments.map((g, i) => (i === ref.index ? { ...g, to: p } : g)) };
-    if (ref.kind === 'via') return { ...s, segments: s.segments.map((g, i) => (i === ref.index ? { ...g, via: p } : g)) };
-    return s;
-  },
+  moveHandle: (s, ref, p) => movedChainHandle(s, ref, p),
   Fields: LineFields,
   tools: [
     { id: 'line', label: 'Line element', key: 'w', hint: 'A weld line or other line element: it encloses no area', inDrawGroup: true, subCommands: [ARC_MODE_COMMAND.name, ALONG_OUTLINE_COMMAND.name], create: () => new LineTool() },

@@ -5,6 +5,7 @@
  */
 import { pathDeletePoint, pathMakeArc, pathMakeLine, pathSplitSegment, type PathSegment, type PathShape, type Point } from '../../src';
 import { PointFields, ToolButton } from '../fields/PointFields';
+import { movedChainHandle } from '../fields/ChainFields';
 import { useShapeEdit } from '../fields/shape-edit';
 import { ARC_MODE_COMMAND, ChainTool } from '../tools/chain';
 import type { NewShape, ToolEnv } from '../tools/types';
@@ -96,19 +97,7 @@ export const pathEditor: ShapeEditor<PathShape> = {
     });
     return out;
   },
-  moveHandle: (s, ref, p) => {
-    const last = s.segments.length - 1;
-    switch (ref.kind) {
-      case 'start':
-        return { ...s, start: p, segments: s.segments.map((g, i) => (i === last ? { ...g, to: p } : g)) };
-      case 'to':
-        return { ...s, segments: s.segments.map((g, i) => (i === ref.index ? { ...g, to: p } : g)) };
-      case 'via':
-        return { ...s, segments: s.segments.map((g, i) => (i === ref.index ? { ...g, via: p } : g)) };
-      default:
-        return s;
-    }
-  },
+  moveHandle: (s, ref, p) => movedChainHandle(s, ref, p, true),
   Fields: PathFields,
   tools: [{ id: 'path', label: 'Path', key: 'l', inDrawGroup: true, subCommands: [ARC_MODE_COMMAND.name], create: () => new PathTool() }],
   commands: [ARC_MODE_COMMAND],

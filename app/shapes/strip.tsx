@@ -23,7 +23,7 @@ import {
   type StripShape,
 } from '../../src';
 import { useEditor, useEditorState } from '../context';
-import { ChainFields, chainHandles } from '../fields/ChainFields';
+import { ChainFields, chainHandles, movedChainHandle } from '../fields/ChainFields';
 import { NumberField } from '../fields/NumberField';
 import { useShapeEdit } from '../fields/shape-edit';
 import type { EditorState } from '../store/store';
@@ -183,12 +183,7 @@ function StripFields({ shape }: { shape: StripShape }) {
 export const stripEditor: ShapeEditor<StripShape> = {
   types: ['strip'],
   handles: (s) => chainHandles(s.start, s.segments),
-  moveHandle: (s, ref, p) => {
-    if (ref.kind === 'start') return { ...s, start: p };
-    if (ref.kind === 'to') return { ...s, segments: s.segments.map((g, i) => (i === ref.index ? { ...g, to: p } : g)) };
-    if (ref.kind === 'via') return { ...s, segments: s.segments.map((g, i) => (i === ref.index ? { ...g, via: p } : g)) };
-    return s;
-  },
+  moveHandle: (s, ref, p) => movedChainHandle(s, ref, p),
   Fields: StripFields,
   tools: [{ id: 'strip', label: 'Strip', key: 't', hint: 'A thin wall drawn by its centreline, with the thickness shown in the rail', inDrawGroup: true, subCommands: [ARC_MODE_COMMAND.name], create: () => new StripTool() }],
   RailControl: StripRail,

@@ -47,3 +47,14 @@ export function roundChainCorner(start: Point, segments: readonly Segment[], clo
   if (closed && last && (last.to[0] !== start[0] || last.to[1] !== start[1])) segs = [...segs.slice(0, -1), { ...last, to: [start[0], start[1]] }];
   return roundedChain(filletCorner({ start, segments: segs }, k, radius));
 }
+
+/** The corner rules of a kind drawn as a chain from `start` (a path closes on its start). */
+export function chainCornerRules<S extends { start: Point; segments: readonly Segment[] }>(closed: boolean) {
+  return {
+    list: (s: S) => chainCorners(s.start, s.segments, closed),
+    round: (s: S, index: number, radius: number): S | string => {
+      const r = roundChainCorner(s.start, s.segments, closed, index, radius);
+      return r.ok ? { ...s, start: r.start, segments: r.segments } : r.message;
+    },
+  };
+}

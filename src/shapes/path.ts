@@ -9,7 +9,7 @@ import { checkPoint, dist, isObj, type Issue } from './check';
 import { scalePoint, type ShapeKind } from './kind';
 import { plural, pointsExtent, pointText, segmentPoints, segmentTable } from './schedule';
 import { dropZeroLengthLines } from './loops';
-import { chainCorners, roundChainCorner } from './corners';
+import { chainCornerRules } from './corners';
 
 /** `{to}` is a straight line; `{to, via}` is the circular arc from the current point through via to to. */
 export interface PathSegment {
@@ -127,13 +127,7 @@ export const pathKind: ShapeKind<PathShape> = {
   mayCrossItself: true,
   mapPoints: (s, f) => ({ ...s, start: f(s.start), segments: mapSegments(s.segments, f) }),
   scaled: (s, k) => ({ ...s, start: scalePoint(k)(s.start), segments: mapSegments(s.segments, scalePoint(k)) }),
-  corners: {
-    list: (s) => chainCorners(s.start, s.segments, true),
-    round: (s, index, radius) => {
-      const r = roundChainCorner(s.start, s.segments, true, index, radius);
-      return r.ok ? { ...s, start: r.start, segments: r.segments } : r.message;
-    },
-  },
+  corners: chainCornerRules<PathShape>(true),
   schedule: (s, f) => {
     const arcs = s.segments.filter((g) => g.via).length;
     return {

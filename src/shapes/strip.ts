@@ -10,7 +10,7 @@ import { stripOutline } from '../lines/strip-outline';
 import type { Point, ShapeBase } from './base';
 import { checkNumber, type Issue } from './check';
 import { scalePoint, type ShapeKind } from './kind';
-import { chainCorners, roundChainCorner } from './corners';
+import { chainCornerRules } from './corners';
 import { checkSegments, mapSegments, type PathSegment } from './path';
 import { plural, pointsExtent, pointText, segmentPoints, segmentTable } from './schedule';
 
@@ -54,13 +54,7 @@ export const stripKind: ShapeKind<StripShape> = {
   mayCrossItself: false,
   mapPoints: (s, f) => ({ ...s, start: f(s.start), segments: mapSegments(s.segments, f) }),
   scaled: (s, k) => ({ ...s, start: scalePoint(k)(s.start), segments: mapSegments(s.segments, scalePoint(k)), thickness: s.thickness * k }),
-  corners: {
-    list: (s) => chainCorners(s.start, s.segments, false),
-    round: (s, index, radius) => {
-      const r = roundChainCorner(s.start, s.segments, false, index, radius);
-      return r.ok ? { ...s, start: r.start, segments: r.segments } : r.message;
-    },
-  },
+  corners: chainCornerRules<StripShape>(false),
   schedule: (s, f) => {
     const arcs = s.segments.filter((g) => g.via).length;
     return {
