@@ -23,7 +23,6 @@ const DESCRIBED: readonly ExampleEntry[] = [
   { file: 'perforated-cover-plate.json', title: 'Perforated cover plates', blurb: 'Box strut of four plates; net section through the access holes' },
   { file: 'aluminium-extrusion.json', title: 'Aluminium extrusion with screw bosses', blurb: 'Hollow rail 80 × 50 with four Ø9 bosses for end-cap screws' },
   { file: 'cope-proposal.json', title: 'Cope proposal on an IPE 300', blurb: 'Baseline beam and a fabricator’s top cope, with limits to check' },
-  // Two more come with the materials and the line-element work; they show up once their files are on the shelf.
   { file: 'flitch-beam.json', title: 'Timber joist with a steel flitch plate', blurb: 'Two materials: the transformed section, stresses under load' },
   { file: 'welded-bracket.json', title: 'Welded bracket', blurb: 'A bent plate and its weld group as line elements' },
 ];
