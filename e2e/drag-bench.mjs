@@ -38,32 +38,43 @@ export function benchDocument() {
   return { format: 'kern-section', version: 1, units: 'mm', name: 'Drag benchmark field (invented)', shapes };
 }
 
+/**
+ * A perforated plate 2000 × 1000 with `count` holes of radius 6 on a regular grid (the same
+ * document as bench/scale.ts), one of whose holes is dragged: `h20-5`.
+ */
+export function perforatedDocument(count) {
+  const [cols, rows] = count === 4000 ? [100, 40] : [40, 10];
+  const px = 2000 / cols, py = 1000 / rows;
+  const shapes = [{ id: 'plate', type: 'rectangle', at: [0, 0], width: 2000, height: 1000 }];
+  for (let i = 0; i < cols; i++) for (let j = 0; j < rows; j++) shapes.push({ id: `h${i}-${j}`, type: 'circle', center: [(i + 0.5) * px, (j + 0.5) * py], radius: 6, op: 'subtract' });
+  return { format: 'kern-section', version: 2, units: 'mm', name: `Perforated plate, ${count} holes (benchmark)`, shapes };
+}
+
 function percentile(sorted, q) {
   if (!sorted.length) return NaN;
   const k = Math.min(sorted.length - 1, Math.max(0, Math.ceil(q * sorted.length) - 1));
   return sorted[k];
 }
 
-export async function measureDragFrames({ url, moves = 180, browser: given, query = '' } = {}) {
+export async function measureDragFrames({ url, moves = 180, browser: given, query = '', doc = benchDocument(), dragId = 'c7', sweepPx = 400 } = {}) {
   const app = url ? null : await startApp();
   const browser = given ?? (await launchBrowser());
   try {
     const context = await browser.newContext({ viewport: { width: 1400, height: 900 } });
-    const doc = benchDocument();
     await context.addInitScript((text) => localStorage.setItem('kern.autosave.v1', text), JSON.stringify(doc));
     const page = await context.newPage();
     await page.goto((url ?? app.url) + query);
     await page.waitForFunction(() => window.__kern && document.querySelector('[data-testid="canvas"] canvas'));
     await page.waitForTimeout(300);
     // Fit, then find the dragged circle's centre on screen.
-    const start = await page.evaluate(() => {
+    const start = await page.evaluate((id) => {
       const k = window.__kern;
       k.editor.run('view.fit');
       const s = k.editor.store.getState();
-      const c = s.doc.shapes.find((x) => x.id === 'c7');
+      const c = s.doc.shapes.find((x) => x.id === id);
       const r = document.querySelector('[data-testid="canvas"]').getBoundingClientRect();
       return [r.left + s.ox + c.center[0] * s.scale, r.top + s.oy - c.center[1] * s.scale, s.scale];
-    });
+    }, dragId);
     await page.waitForTimeout(300);
     await page.evaluate(() => {
       const w = window;
@@ -93,7 +104,7 @@ export async function measureDragFrames({ url, moves = 180, browser: given, quer
     for (let k = 1; k <= moves; k++) {
       // A sweep across the field and back: about 3 px per move.
       const f = k / moves;
-      const dx = 400 * Math.sin(Math.PI * f), dy = 60 * Math.sin(2 * Math.PI * f);
+      const dx = sweepPx * Math.sin(Math.PI * f), dy = 0.15 * sweepPx * Math.sin(2 * Math.PI * f);
       await page.mouse.move(x0 + dx, y0 + dy);
     }
     await page.mouse.up();
@@ -148,6 +159,8 @@ export async function dragFrameP95(opts) {
 }
 
 if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {
-  const r = await measureDragFrames({ query: process.argv[2] ?? '' });
+  // `node e2e/drag-bench.mjs` the 50-shape field; `node e2e/drag-bench.mjs holes 400` a perforated plate.
+  const holes = process.argv[2] === 'holes' ? Number(process.argv[3] ?? 400) : 0;
+  const r = await measureDragFrames(holes ? { doc: perforatedDocument(holes), dragId: 'h20-5', sweepPx: 120 } : { query: process.argv[2] ?? '' });
   console.log(JSON.stringify({ drag_frame_p95_ms: r.p95, ...r }, null, 2));
 }

@@ -33,7 +33,7 @@ function freePort() {
 /** Build into a temporary folder and serve it. Returns { url, close }. */
 export async function startApp() {
   const outDir = path.join(os.tmpdir(), `kern-e2e-dist-${process.pid}`);
-  await build({ root: ROOT, logLevel: 'warn', build: { outDir, emptyOutDir: true } });
+  await build({ root: ROOT, logLevel: 'warn', build: { outDir, emptyOutDir: true, ...(process.env.KERN_NO_MINIFY ? { minify: false } : {}) } });
   const port = await freePort();
   const server = await preview({ root: ROOT, logLevel: 'warn', build: { outDir }, preview: { port, strictPort: true, host: '127.0.0.1', open: false } });
   return {

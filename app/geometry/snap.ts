@@ -4,6 +4,7 @@
  * horizontal or vertical from the previous one.
  */
 import { chainSegments, regionSegments, segmentBox, segmentIntersections, segmentMidpoint, type Point, type Segment, type ShapeResult } from '../../src';
+import Flatbush from 'flatbush';
 import type { SnapSettings } from '../store/store';
 import type { SnapResult } from '../store/transient';
 
@@ -83,39 +84,63 @@ export function snapPointer(
 
 const snapCache = new WeakMap<readonly ShapeResult[], { points: SnapPoint[]; withIntersections: boolean }>();
 
+interface OwnSnap {
+  segs: Segment[];
+  boxes: [number, number, number, number][];
+  points: SnapPoint[];
+}
+
+/** One shape's segments and its own snap points, kept by the shape's result (unchanged shapes keep theirs during a drag). */
+const ownCache = new WeakMap<ShapeResult, OwnSnap>();
+
+function ownSnap(s: ShapeResult): OwnSnap {
+  const hit = ownCache.get(s);
+  if (hit) return hit;
+  const segs = s.chains ? s.chains.flatMap(chainSegments) : regionSegments(s.region);
+  const points: SnapPoint[] = [];
+  for (const g of segs) {
+    points.push({ x: g.ax, y: g.ay, kind: 'vertex', shape: s.id });
+    // An open line's last end is a vertex too (a closed loop's is its first).
+    if (s.chains && g === segs[segs.length - 1]) points.push({ x: g.bx, y: g.by, kind: 'vertex', shape: s.id });
+    const [mx, my] = segmentMidpoint(g);
+    points.push({ x: mx, y: my, kind: 'midpoint', shape: s.id });
+    if (g.kind === 'arc') points.push({ x: g.cx, y: g.cy, kind: 'centre', shape: s.id });
+  }
+  const out = { segs, boxes: segs.map(segmentBox), points };
+  ownCache.set(s, out);
+  return out;
+}
+
 /**
  * Every snap point of the shapes' own outlines, from the engine's exact segments: vertices, the
- * midpoints of lines and arcs, arc centres, and the crossings between different shapes.
+ * midpoints of lines and arcs, arc centres, and the crossings between different shapes. The
+ * crossings come from an R-tree of the segments' boxes (flatbush), so a plate of 4000 holes costs
+ * about one query per segment, not one test per pair of shapes.
  */
 export function snapPoints(shapes: readonly ShapeResult[], intersections: boolean): SnapPoint[] {
   const hit = snapCache.get(shapes);
   if (hit && (hit.withIntersections || !intersections)) return hit.points;
-  const points: SnapPoint[] = [];
-  const segsByShape: { id: string; segs: Segment[]; boxes: [number, number, number, number][] }[] = [];
-  for (const s of shapes) {
-    const segs = s.chains ? s.chains.flatMap(chainSegments) : regionSegments(s.region);
-    segsByShape.push({ id: s.id, segs, boxes: segs.map(segmentBox) });
-    for (const g of segs) {
-      points.push({ x: g.ax, y: g.ay, kind: 'vertex', shape: s.id });
-      // An open line's last end is a vertex too (a closed loop's is its first).
-      if (s.chains && g === segs[segs.length - 1]) points.push({ x: g.bx, y: g.by, kind: 'vertex', shape: s.id });
-      const [mx, my] = segmentMidpoint(g);
-      points.push({ x: mx, y: my, kind: 'midpoint', shape: s.id });
-      if (g.kind === 'arc') points.push({ x: g.cx, y: g.cy, kind: 'centre', shape: s.id });
-    }
-  }
-  if (intersections) {
-    for (let i = 0; i < segsByShape.length; i++) {
-      for (let j = i + 1; j < segsByShape.length; j++) {
-        const A = segsByShape[i], B = segsByShape[j];
-        for (let a = 0; a < A.segs.length; a++) {
-          const ba = A.boxes[a];
-          for (let b = 0; b < B.segs.length; b++) {
-            const bb = B.boxes[b];
-            if (ba[0] > bb[2] || bb[0] > ba[2] || ba[1] > bb[3] || bb[1] > ba[3]) continue;
-            for (const [x, y] of segmentIntersections(A.segs[a], B.segs[b])) points.push({ x, y, kind: 'intersection', shape: A.id });
-          }
-        }
+  const own = shapes.map(ownSnap);
+  const points: SnapPoint[] = own.flatMap((o) => o.points);
+  const total = own.reduce((n, o) => n + o.segs.length, 0);
+  if (intersections && total > 0) {
+    const shapeOf = new Int32Array(total), segOf = new Int32Array(total);
+    const index = new Flatbush(total);
+    own.forEach((o, i) =>
+      o.boxes.forEach((b, k) => {
+        const id = index.add(b[0], b[1], b[2], b[3]);
+        shapeOf[id] = i;
+        segOf[id] = k;
+      }),
+    );
+    index.finish();
+    for (let id = 0; id < total; id++) {
+      const i = shapeOf[id], a = own[i].boxes[segOf[id]];
+      for (const other of index.search(a[0], a[1], a[2], a[3])) {
+        const j = shapeOf[other];
+        // Each pair of shapes once, the earlier shape naming the point.
+        if (j <= i) continue;
+        for (const [x, y] of segmentIntersections(own[i].segs[segOf[id]], own[j].segs[segOf[other]])) points.push({ x, y, kind: 'intersection', shape: shapes[i].id });
       }
     }
   }

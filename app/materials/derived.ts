@@ -26,6 +26,7 @@ import {
   type StressSection,
 } from '../../src';
 import { useEditor, useEditorState, useResults } from '../context';
+import { workerStressSection } from '../store/evaluation';
 import { activeSection } from '../store/section';
 import type { EditorState } from '../store/store';
 import { useMaterialsUi } from './hooks';
@@ -37,7 +38,7 @@ const sections = new WeakMap<Evaluation, StressSection>();
 export function stressSectionOf(doc: SectionDocument, ev: Evaluation): StressSection {
   let s = sections.get(ev);
   if (!s) {
-    s = stressSection(doc, ev);
+    s = workerStressSection(ev) ?? stressSection(doc, ev);
     sections.set(ev, s);
   }
   return s;

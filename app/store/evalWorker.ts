@@ -3,7 +3,7 @@
  * changed one), so the engine's incremental evaluator sees unchanged shapes as identical objects
  * and repeats no work for them. Runs off the main thread so the pointer never waits.
  */
-import { createEvaluator, type SectionDocument, type Shape } from '../../src';
+import { createEvaluator, stressSection, type SectionDocument, type Shape, type StressSection } from '../../src';
 import type { WorkerRequest, WorkerResponse } from './workerProtocol';
 import { SectionReplica } from './baseline';
 
@@ -22,7 +22,13 @@ self.onmessage = (e: MessageEvent<WorkerRequest>) => {
   let res: WorkerResponse;
   try {
     const ev = evaluator.evaluate(doc);
-    res = { seq: req.seq, ok: true, region: ev.region, props: ev.props, message: ev.message, warnings: ev.warnings, lines: ev.lines, materials: ev.materials, welds: ev.welds, ms: performance.now() - t };
+    let stress: StressSection | undefined;
+    try {
+      stress = stressSection(doc, ev);
+    } catch {
+      stress = undefined; // the main thread works it out again and shows the reason
+    }
+    res = { seq: req.seq, ok: true, region: ev.region, props: ev.props, message: ev.message, warnings: ev.warnings, lines: ev.lines, materials: ev.materials, welds: ev.welds, stress, ms: performance.now() - t };
     if (req.baseline) {
       const tb = performance.now();
       baseline.apply(req.baseline);

@@ -12,11 +12,18 @@
  *   second evaluator, evaluated once per baseline change (baseline.ts), never per drag frame.
  */
 import { createStore, type StoreApi } from 'zustand/vanilla';
-import { createEvaluator, type Evaluation, type SectionDocument, type Shape, type ShapeResult } from '../../src';
+import { createEvaluator, type Evaluation, type SectionDocument, type Shape, type ShapeResult, type StressSection } from '../../src';
 import { activeSection } from './section';
 import { baselineNeeded, baselineSection, sectionPart } from './baseline';
 import type { EditorStore } from './store';
 import type { WorkerRequest, WorkerResponse } from './workerProtocol';
+
+const WORKER_STRESS = new WeakMap<Evaluation, StressSection>();
+
+/** The stress section the worker sent with this evaluation, if it did. */
+export function workerStressSection(ev: Evaluation): StressSection | undefined {
+  return WORKER_STRESS.get(ev);
+}
 
 export interface LiveResults {
   /** The section the evaluation belongs to: the store's active section (it may trail a drag). */
@@ -172,7 +179,10 @@ export function createLiveResults(store: EditorStore, opts: { schedule?: Schedul
       // Only the answer to the request in flight counts (the start-up answer has none).
       if (!job || res.seq !== job.seq) return;
       let evaluation: Evaluation;
-      if (res.ok) evaluation = { region: res.region, props: res.props, message: res.message, warnings: res.warnings, lines: res.lines, materials: res.materials, welds: res.welds, shapes: shapesOf(job.doc) };
+      if (res.ok) {
+        evaluation = { region: res.region, props: res.props, message: res.message, warnings: res.warnings, lines: res.lines, materials: res.materials, welds: res.welds, shapes: shapesOf(job.doc) };
+        if (res.stress) WORKER_STRESS.set(evaluation, res.stress);
+      }
       else evaluation = evaluateSync(job.doc); // the worker failed: fall back on the main thread
       let baseline = results.getState().baseline;
       if (job.base === null) baseline = null;

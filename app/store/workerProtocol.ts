@@ -1,5 +1,5 @@
 /** Messages between the editor and the evaluation worker. */
-import type { Issue, LineGroupResult, MaterialsResult, Region, SectionDocument, SectionProperties, Shape, WeldResult } from '../../src';
+import type { Issue, LineGroupResult, MaterialsResult, Region, SectionDocument, SectionProperties, Shape, StressSection, WeldResult } from '../../src';
 import type { SectionPart } from './baseline';
 
 export interface WorkerRequest {
@@ -35,6 +35,12 @@ export type WorkerResponse =
       lines: LineGroupResult[];
       materials: MaterialsResult | null;
       welds: WeldResult[];
+      /**
+       * The section stresses and the centre of gravity work on, worked out beside the evaluation
+       * (its parts share the region above, which one message carries once): the main thread would
+       * otherwise integrate the whole region again every drag frame.
+       */
+      stress?: StressSection;
       ms: number;
       baseline?: BaselineAnswer;
     }

@@ -24,8 +24,8 @@
  * same moments, the same arithmetic with n = 1).
  */
 import type { Units } from '../units';
-import { regionBounds, type Bounds, type Region } from '../geometry/contour';
-import { centralMoments, regionMoments, type RawMoments } from '../moments/kernel';
+import type { Bounds, Region } from '../geometry/contour';
+import { centralMoments, regionBox, regionMoments, type RawMoments } from '../moments/kernel';
 import { principal, SectionError } from '../properties/section';
 import { assertMaterial, MaterialError, type Material } from './material';
 import { massPerLength } from './units';
@@ -113,7 +113,7 @@ export function mixedSection(parts: readonly MaterialPart[], reference: Material
   const live: { part: MaterialPart; m: RawMoments; bounds: Bounds; c: { A: number; xc: number; yc: number; Ix: number; Iy: number; Ixy: number } }[] = [];
   for (const part of parts) {
     assertMaterial(part.material);
-    const bounds = regionBounds(part.region);
+    const bounds = regionBox(part.region);
     if (!bounds) continue;
     // Each part's centroidal moments with no cancelling transfer (the same path as
     // sectionProperties, so one material gives exactly the geometric numbers).

@@ -213,7 +213,8 @@ export function regionMomentsAbout(region: Region, ox: number, oy: number): RawM
   for (const c of region) {
     if (c.xy.length < 4) continue;
     const x0 = c.xy[0], y0 = c.xy[1];
-    out = addMoments(out, shiftMoments(asMoments(contourAbout(c, x0, y0)), x0 - ox, y0 - oy));
+    // The summary's sums about the first vertex, kept by the contour's identity.
+    out = addMoments(out, shiftMoments(asMoments(contourSummary(c).first), x0 - ox, y0 - oy));
   }
   return out;
 }
@@ -305,6 +306,20 @@ export function contourBox(c: Contour): Bounds | null {
   const b = regionBounds([c]);
   if (b) BOXES.set(c, b);
   return b;
+}
+
+/** A region's exact bounds from its contours' boxes (kept by identity). */
+export function regionBox(region: Region): Bounds | null {
+  let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
+  for (const c of region) {
+    const b = contourBox(c);
+    if (!b) continue;
+    if (b.xmin < xmin) xmin = b.xmin;
+    if (b.xmax > xmax) xmax = b.xmax;
+    if (b.ymin < ymin) ymin = b.ymin;
+    if (b.ymax > ymax) ymax = b.ymax;
+  }
+  return xmin <= xmax ? { xmin, xmax, ymin, ymax } : null;
 }
 
 export function contourSummary(c: Contour): ContourSummary {

@@ -4,13 +4,14 @@
  * Konva node for all of it: the layer repaints as a whole anyway, and one node keeps the
  * reconciler's work per pointer move constant.
  */
-import type { LineChain, Op, Region } from '../../../src';
+import type { LineChain, Op, Region, SectionDocument, Shape } from '../../../src';
 import { useEditor, useEditorShallow, useEditorState, useResults } from '../../context';
 import { hatch, INK, opStyle } from '../../paint/ink';
 import { traceChains, traceRegion } from '../../paint/trace';
 import type { ViewTransform } from '../../view';
 import { Paint } from '../PaintNode';
 import { activeSection } from '../../store/section';
+import { paintCached } from './static-shapes';
 
 /** Paint one shape's own outline, hatched by its operation. */
 function paintShape(ctx: CanvasRenderingContext2D, region: Region, op: Op, v: ViewTransform, error: boolean) {
@@ -40,13 +41,42 @@ function paintLine(ctx: CanvasRenderingContext2D, chains: readonly LineChain[], 
   ctx.lineCap = 'butt';
 }
 
+/** Loops above which a moving section's outline is drawn as a hairline. */
+const LIGHT_OUTLINE_LOOPS = 200;
+
+const baseRecords = new WeakMap<SectionDocument, Set<Shape>>();
+
+/** The shape records of the section a gesture started from (kept per gesture). */
+function recordsAtStart(base: SectionDocument): Set<Shape> {
+  let set = baseRecords.get(base);
+  if (!set) {
+    set = new Set(activeSection(base).shapes);
+    baseRecords.set(base, set);
+  }
+  return set;
+}
+
 export function ShapesLayer() {
   const editor = useEditor();
   const v = useEditorShallow((s) => ({ scale: s.scale, ox: s.ox, oy: s.oy }));
   // The combined section may trail a drag by an evaluation; each shape's own outline does not.
   const region = useResults((r) => r.evaluation.region);
   const section = useEditorState((s) => activeSection(s.doc));
+  const gestureBase = useEditorState((s) => s.gestureBase);
   const shapes = editor.results.shapesOf(section);
+  // While a gesture runs, the shapes it has not touched come from a bitmap painted once
+  // (static-shapes.ts); the touched ones are painted on top, every frame.
+  const before = gestureBase ? recordsAtStart(gestureBase) : null;
+  const still: number[] = [], moving: number[] = [];
+  shapes.forEach((s, i) => {
+    if (s.chains) return;
+    (before && !before.has(section.shapes[i]) ? moving : still).push(i);
+  });
+  const opOf = (i: number) => section.shapes[i]?.op ?? 'add';
+  const stillPaint = {
+    items: still.map((i) => shapes[i]),
+    key: `${v.scale},${v.ox},${v.oy}|${still.map((i) => `${opOf(i)[0]}${shapes[i].error ? '!' : ''}`).join('')}`,
+  };
   return (
     <Paint
       paint={(ctx) => {
@@ -54,12 +84,17 @@ export function ShapesLayer() {
         traceRegion(ctx, region, v);
         ctx.fillStyle = INK.resultFill;
         ctx.fill('nonzero');
-        shapes.forEach((s, i) => !s.chains && paintShape(ctx, s.region, section.shapes[i]?.op ?? 'add', v, !!s.error));
+        paintCached(ctx, stillPaint, (c) => still.forEach((i) => paintShape(c, shapes[i].region, opOf(i), v, !!shapes[i].error)));
+        moving.forEach((i) => paintShape(ctx, shapes[i].region, opOf(i), v, !!shapes[i].error));
         ctx.beginPath();
         traceRegion(ctx, region, v);
         ctx.strokeStyle = INK.resultLine;
-        ctx.lineWidth = 1.6;
-        ctx.lineJoin = 'round';
+        // While a shape moves in a large section, the outline is a hairline: without a GPU a
+        // 1.6 px stroke with round joins round 4000 holes took about 70 ms a frame, a hairline
+        // a few. At rest it is drawn at full weight again.
+        const light = gestureBase !== null && region.length > LIGHT_OUTLINE_LOOPS;
+        ctx.lineWidth = light ? 1 : 1.6;
+        ctx.lineJoin = light ? 'miter' : 'round';
         ctx.stroke();
         // Line elements last: a weld along an edge of the section stays visible on that edge.
         shapes.forEach((s) => s.chains && paintLine(ctx, s.chains, v, !!s.error));
