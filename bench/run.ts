@@ -148,6 +148,15 @@ if (existsSync(dragBench)) {
     console.log(
       `browser drag: p95 frame ${result.drag_frame_p95_ms} ms (raw ${result.drag_frame_p95_raw_ms} ms), ${p.slowFrames} slow of ${p.frames} frames, ${p.evaluationsDuringDrag} evaluations for ${p.moves} pointer moves`,
     );
+    // The same drag in perforated plates of 400 and 4000 holes (one hole moved; bench/scale.ts's
+    // documents): the frame interval the user sees, and the longest frame (a stall shows here).
+    for (const n of [400, 4000]) {
+      const h = await mod.measureDragFrames({ doc: mod.perforatedDocument(n), dragId: 'h20-5', sweepPx: 120 });
+      result[`holes${n}_drag_frame_p50_ms`] = +Number(h.p50).toFixed(3);
+      result[`holes${n}_drag_frame_p95_ms`] = +Number(h.p95Periods).toFixed(3);
+      result[`holes${n}_drag_frame_max_ms`] = +Number(h.max).toFixed(3);
+      console.log(`browser drag, ${n}-hole plate: frame p50 ${h.p50.toFixed(1)} ms, p95 ${Number(h.p95Periods).toFixed(1)} ms, longest ${h.max.toFixed(1)} ms, ${h.slowFrames} slow of ${h.frames}`);
+    }
   } catch (e) {
     result.drag_frame_error = String(e instanceof Error ? e.message : e);
     console.log(`browser drag: failed: ${result.drag_frame_error}`);
