@@ -238,20 +238,11 @@ export function momentsAboveAbout(plan: CutPlan, yc: number, ox: number): HalfPl
 function crossedLoop(c: Contour, ox: number, yc: number, acc: Float64Array, pieces: Piece[]): number {
   const xy = c.xy, bulge = c.bulge;
   const n = xy.length >> 1;
-  let width = 0;
-  let started = false, firstAbove = false, firstX = 0, prevAbove = false;
-  const piece = (above: boolean, x0: number, y0: number, x1: number, y1: number, sweep: number) => {
-    if (!started) {
-      started = true;
-      firstAbove = above;
-      firstX = x0;
-    } else if (above && !prevAbove) width += x0;
-    else if (!above && prevAbove) width -= x0;
-    prevAbove = above;
-    if (!above) return;
-    if (sweep === 0) lineDx(x0, y0, x1, y1, acc);
-    else arcDx(x0, y0, x1, y1, sweep, acc);
-  };
+  walk.width = 0;
+  walk.started = false;
+  walk.firstAbove = false;
+  walk.firstX = 0;
+  walk.prevAbove = false;
   for (let i = 0; i < n; i++) {
     const j = i + 1 === n ? 0 : i + 1;
     const ax = xy[2 * i] - ox, ay = xy[2 * i + 1] - yc, bx = xy[2 * j] - ox, by = xy[2 * j + 1] - yc;
@@ -260,30 +251,52 @@ function crossedLoop(c: Contour, ox: number, yc: number, acc: Float64Array, piec
       // wholly clear of the line is one piece, with no split to compute.
       const h = (Math.hypot(bx - ax, by - ay) / 2) * Math.abs(bulge[i]) * (1 + 1e-12);
       if (Math.abs(bulge[i]) <= 1 && Math.min(ay, by) - h > 0) {
-        piece(true, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
+        piece(acc, true, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
         continue;
       }
       if (Math.abs(bulge[i]) <= 1 && Math.max(ay, by) + h < 0) {
-        piece(false, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
+        piece(acc, false, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
         continue;
       }
       pieces.length = 0;
       splitSegment(c, i, ox, yc, pieces);
-      for (const p of pieces) piece(p.above, p.x0, p.y0, p.x1, p.y1, p.sweep);
+      for (const p of pieces) piece(acc, p.above, p.x0, p.y0, p.x1, p.y1, p.sweep);
       continue;
     }
     if (ay * by < 0) {
       const xm = ax + (-ay / (by - ay)) * (bx - ax);
-      piece(ay > 0, ax, ay, xm, 0, 0);
-      piece(by > 0, xm, 0, bx, by, 0);
-    } else piece(ay + by > 0, ax, ay, bx, by, 0);
+      piece(acc, ay > 0, ax, ay, xm, 0, 0);
+      piece(acc, by > 0, xm, 0, bx, by, 0);
+    } else piece(acc, ay + by > 0, ax, ay, bx, by, 0);
   }
   // The first piece's own transition, against the last piece.
-  if (started) {
-    if (firstAbove && !prevAbove) width += firstX;
-    else if (!firstAbove && prevAbove) width -= firstX;
+  let width = walk.width;
+  if (walk.started) {
+    if (walk.firstAbove && !walk.prevAbove) width += walk.firstX;
+    else if (!walk.firstAbove && walk.prevAbove) width -= walk.firstX;
   }
   return width;
+}
+
+/**
+ * The walk along one crossed loop: the width so far and the side of the previous piece. One
+ * shared record (a loop is walked to its end before the next starts) rather than a closure per
+ * loop, since a plastic axis costs a few dozen cuts.
+ */
+const walk = { width: 0, started: false, firstAbove: false, firstX: 0, prevAbove: false };
+
+/** One piece of a crossed loop: the width where the boundary enters or leaves, and its moments when above. */
+function piece(acc: Float64Array, above: boolean, x0: number, y0: number, x1: number, y1: number, sweep: number): void {
+  if (!walk.started) {
+    walk.started = true;
+    walk.firstAbove = above;
+    walk.firstX = x0;
+  } else if (above && !walk.prevAbove) walk.width += x0;
+  else if (!above && walk.prevAbove) walk.width -= x0;
+  walk.prevAbove = above;
+  if (!above) return;
+  if (sweep === 0) lineDx(x0, y0, x1, y1, acc);
+  else arcDx(x0, y0, x1, y1, sweep, acc);
 }
 
 /**

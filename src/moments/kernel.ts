@@ -12,7 +12,7 @@
  * the centroid for centroidal ones) by the parallel-axis theorem in the direction that adds:
  * centroidal moments are never formed as m02 − A·ȳ² of origin moments, which cancels far out.
  */
-import { contourLength, regionBounds, type Bounds, type Contour, type Region } from '../geometry/contour';
+import { contourBounds, contourLength, type Bounds, type Contour, type Region } from '../geometry/contour';
 
 /** Raw moments about the document origin: m00 = A, m10 = ∫x, m01 = ∫y, m20 = ∫x², m02 = ∫y², m11 = ∫xy. */
 export interface RawMoments {
@@ -29,23 +29,20 @@ export const ZERO_MOMENTS: RawMoments = Object.freeze({ m00: 0, m10: 0, m01: 0, 
 /** Vertices per block of the polygon sums (see accumulateContour). */
 const BLOCK = 64;
 
-/** acc[i] += v with a Neumaier compensation term kept in comp[i]. */
-function addCompensated(acc: Float64Array, comp: Float64Array, i: number, v: number): void {
-  const s = acc[i], t = s + v;
-  comp[i] += Math.abs(s) >= Math.abs(v) ? s - t + v : v - t + s;
-  acc[i] = t;
-}
-
 /**
  * Moments about (ox, oy) accumulated into acc (a 6-slot array: A, ∫x, ∫y, ∫x², ∫y², ∫xy).
  * The straight part is summed in blocks of BLOCK vertices whose sums are added with a
- * compensation term, so a dense outline (2e5 vertices) does not lose 1e-12 to the running sum.
+ * Neumaier compensation term, so a dense outline (2e5 vertices) does not lose 1e-12 to the
+ * running sum. The six totals and their compensations are plain locals: this runs once per
+ * loop of every evaluation (thousands of holes), where two small arrays per call were a
+ * measurable share of the garbage collector's work.
  */
 function accumulateContour(c: Contour, ox: number, oy: number, acc: Float64Array): void {
   const xy = c.xy;
   const n = xy.length >> 1;
   if (n < 2) return;
-  const tot = new Float64Array(6), comp = new Float64Array(6);
+  let t0 = 0, t1 = 0, t2 = 0, t3 = 0, t4 = 0, t5 = 0;
+  let c0 = 0, c1 = 0, c2 = 0, c3 = 0, c4 = 0, c5 = 0;
   let x0 = xy[2 * n - 2] - ox, y0 = xy[2 * n - 1] - oy;
   for (let k = 0; k < 2 * n; ) {
     const end = Math.min(2 * n, k + 2 * BLOCK);
@@ -64,19 +61,32 @@ function accumulateContour(c: Contour, ox: number, oy: number, acc: Float64Array
       x0 = x1;
       y0 = y1;
     }
-    addCompensated(tot, comp, 0, a);
-    addCompensated(tot, comp, 1, sx);
-    addCompensated(tot, comp, 2, sy);
-    addCompensated(tot, comp, 3, sxx);
-    addCompensated(tot, comp, 4, syy);
-    addCompensated(tot, comp, 5, sxy);
+    // Neumaier: t += v, with the rounding error of each addition kept in c.
+    let t = t0 + a;
+    c0 += Math.abs(t0) >= Math.abs(a) ? t0 - t + a : a - t + t0;
+    t0 = t;
+    t = t1 + sx;
+    c1 += Math.abs(t1) >= Math.abs(sx) ? t1 - t + sx : sx - t + t1;
+    t1 = t;
+    t = t2 + sy;
+    c2 += Math.abs(t2) >= Math.abs(sy) ? t2 - t + sy : sy - t + t2;
+    t2 = t;
+    t = t3 + sxx;
+    c3 += Math.abs(t3) >= Math.abs(sxx) ? t3 - t + sxx : sxx - t + t3;
+    t3 = t;
+    t = t4 + syy;
+    c4 += Math.abs(t4) >= Math.abs(syy) ? t4 - t + syy : syy - t + t4;
+    t4 = t;
+    t = t5 + sxy;
+    c5 += Math.abs(t5) >= Math.abs(sxy) ? t5 - t + sxy : sxy - t + t5;
+    t5 = t;
   }
-  acc[0] += (tot[0] + comp[0]) / 2;
-  acc[1] += (tot[1] + comp[1]) / 6;
-  acc[2] += (tot[2] + comp[2]) / 6;
-  acc[3] += (tot[3] + comp[3]) / 12;
-  acc[4] += (tot[4] + comp[4]) / 12;
-  acc[5] += (tot[5] + comp[5]) / 24;
+  acc[0] += (t0 + c0) / 2;
+  acc[1] += (t1 + c1) / 6;
+  acc[2] += (t2 + c2) / 6;
+  acc[3] += (t3 + c3) / 12;
+  acc[4] += (t4 + c4) / 12;
+  acc[5] += (t5 + c5) / 24;
   const bulge = c.bulge;
   if (!bulge) return;
   for (let i = 0; i < n; i++) {
@@ -302,7 +312,7 @@ export function contourBox(c: Contour): Bounds | null {
   if (s) return s;
   const hit = BOXES.get(c);
   if (hit) return hit;
-  const b = regionBounds([c]);
+  const b = contourBounds(c);
   if (b) BOXES.set(c, b);
   return b;
 }
@@ -327,7 +337,7 @@ export function contourSummary(c: Contour): ContourSummary {
     }
   }
   const central = gx === x0 && gy === y0 ? first : contourAbout(c, gx, gy);
-  const out: ContourSummary = { first, gx, gy, central, ...b, length: contourLength(c) };
+  const out: ContourSummary = { first, gx, gy, central, xmin: b.xmin, xmax: b.xmax, ymin: b.ymin, ymax: b.ymax, length: contourLength(c) };
   SUMMARIES.set(c, out);
   return out;
 }
