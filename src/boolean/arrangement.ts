@@ -7,7 +7,7 @@ import {
   ARC, curveIntersections, distToCarrier, implicitAt, makeArc, makeLine, paramOf, polishIntersection,
   sameCurve, hyp, type Carrier,
 } from './carriers';
-import { type Ctx, type SourceGroup, find, union, newNode, SAG_MAX, SAG_FLOOR, FLAT_RADIUS } from './context';
+import { type Ctx, type SourceGroup, find, union, newNode, nodeCarriers, SAG_MAX, SAG_FLOOR, FLAT_RADIUS } from './context';
 import { forEachNearPair } from './spatial';
 
 /** Step 1: carriers and vertex nodes from the source contours. */
@@ -67,7 +67,10 @@ export function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
       if (m < 2) continue;
       // Node i joins carriers i − 1 and i (ids are consecutive from the first).
       const first = ctx.carriers.length, node0 = ctx.nx.length;
-      for (let i = 0; i < m; i++) newNode(ctx, v[i], v[VY + i], [first + ((i + m - 1) % m), first + i]);
+      // Vertex i starts carrier first + i; with node and carrier numbers in step (as they are
+      // while only carriers make nodes) its carrier list is left to nodeCarriers.
+      const lazy = node0 === first;
+      for (let i = 0; i < m; i++) newNode(ctx, v[i], v[VY + i], lazy ? null : [first + ((i + m - 1) % m), first + i]);
       const ids: number[] = new Array(m);
       for (let i = 0; i < m; i++) {
         const j = i + 1 === m ? 0 : i + 1;
@@ -112,7 +115,7 @@ function endpointNode(ctx: Ctx, c: Carrier, x: number, y: number): number {
 
 function addSplit(ctx: Ctx, c: Carrier, node: number): void {
   (ctx.splits[c.id] ??= []).push(node);
-  ctx.ncar[node].push(c.id);
+  nodeCarriers(ctx, node).push(c.id);
 }
 
 /** Carriers a and b meet away from a vertex they share: their loops interact. */
@@ -266,7 +269,8 @@ export function buildArrangement(ctx: Ctx): void {
   for (let i = 0; i < nn; i++) {
     const r = find(ctx, i);
     if (r !== i) {
-      for (const c of ctx.ncar[i]) if (!ctx.ncar[r].includes(c)) ctx.ncar[r].push(c);
+      const into = nodeCarriers(ctx, r);
+      for (const c of nodeCarriers(ctx, i)) if (!into.includes(c)) into.push(c);
       ctx.ncar[i] = [];
     }
   }

@@ -73,16 +73,19 @@ function boxesMeet(a: Bounds | null, b: Bounds | null): boolean {
 }
 
 /**
- * A test "does box b meet any of these boxes but number `skip`": a scan for a few boxes, a
- * flatbush index for many (a run of thousands of shapes would otherwise compare every pair).
+ * A test "does box b meet any of these boxes but number `skip`": a scan for a few boxes or a few
+ * questions, a flatbush index for many of both (a run of thousands of shapes would otherwise
+ * compare every pair). A plate with thousands of holes asks once, for its one outline: one scan
+ * costs less than sorting the boxes into an index.
  */
 function boxFinder(boxes: (Bounds | null)[]): (b: Bounds | null, skip: number) => boolean {
-  if (boxes.length <= 16) {
-    return (b, skip) => boxes.some((o, j) => j !== skip && boxesMeet(o, b));
-  }
-  let idx: Flatbush | null = null; // built on the first question
+  const scan = (b: Bounds | null, skip: number) => boxes.some((o, j) => j !== skip && boxesMeet(o, b));
+  if (boxes.length <= 16) return scan;
+  let idx: Flatbush | null = null; // built on the ninth question
+  let asked = 0;
   return (b, skip) => {
     if (!b) return false;
+    if (!idx && ++asked <= 8) return scan(b, skip);
     if (!idx) {
       idx = new Flatbush(boxes.length);
       for (const o of boxes) {
