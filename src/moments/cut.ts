@@ -183,7 +183,8 @@ export function planCuts(region: Region): CutPlan {
     xmax[k] = sm.xmax;
     ymin[k] = sm.ymin;
     ymax[k] = sm.ymax;
-    whole.set(sm.first, 6 * k);
+    const v = sm.v;
+    for (let i = 0; i < 6; i++) whole[6 * k + i] = v[i];
     firstX[k] = c.xy[0];
     firstY[k] = c.xy[1];
   }

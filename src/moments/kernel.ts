@@ -289,18 +289,43 @@ export interface CentralMoments {
  * summary is kept by the contour's identity: in a drag frame of a plate with thousands of holes,
  * only the loops that moved are integrated again.
  */
-export interface ContourSummary {
+export class ContourSummary {
+  /**
+   * All the numbers in one array (a plate with thousands of holes keeps one summary per hole):
+   * 0–5 the sums about the first vertex, 6–11 about (gx, gy), then xmin, xmax, ymin, ymax, gx,
+   * gy and the length.
+   */
+  constructor(readonly v: Float64Array) {}
   /** A, ∫x, ∫y, ∫x², ∫y², ∫xy about the first vertex (xy[0], xy[1]). */
-  readonly first: Float64Array;
+  get first(): Float64Array {
+    return this.v.subarray(0, 6);
+  }
+  /** The same sums about (gx, gy). */
+  get central(): Float64Array {
+    return this.v.subarray(6, 12);
+  }
+  get xmin(): number {
+    return this.v[12];
+  }
+  get xmax(): number {
+    return this.v[13];
+  }
+  get ymin(): number {
+    return this.v[14];
+  }
+  get ymax(): number {
+    return this.v[15];
+  }
   /** The point the second set of sums is taken about: the centroid, or the first vertex. */
-  readonly gx: number;
-  readonly gy: number;
-  readonly central: Float64Array;
-  readonly xmin: number;
-  readonly xmax: number;
-  readonly ymin: number;
-  readonly ymax: number;
-  readonly length: number;
+  get gx(): number {
+    return this.v[16];
+  }
+  get gy(): number {
+    return this.v[17];
+  }
+  get length(): number {
+    return this.v[18];
+  }
 }
 
 const SUMMARIES = new WeakMap<Contour, ContourSummary>();
@@ -322,22 +347,35 @@ export function contourSummary(c: Contour): ContourSummary {
   if (hit) return hit;
   const xy = c.xy, n = xy.length >> 1;
   const x0 = n ? xy[0] : 0, y0 = n ? xy[1] : 0;
-  const first = contourAbout(c, x0, y0);
-  const b = contourBox(c) ?? { xmin: x0, xmax: x0, ymin: y0, ymax: y0 };
+  const v = new Float64Array(19);
+  accumulateContour(c, x0, y0, v);
+  // The box kept for this contour, if any; else computed here and kept in the summary only.
+  const b = BOXES.get(c) ?? contourBounds(c) ?? { xmin: x0, xmax: x0, ymin: y0, ymax: y0 };
   let gx = x0, gy = y0;
-  const a = first[0];
+  const a = v[0];
   if (a !== 0 && Number.isFinite(a)) {
     // The loop's centroid, unless it lies outside the loop's box widened by its size (a loop
     // whose signed area nearly cancels): then the first vertex stays the better reference.
-    const cx = x0 + first[1] / a, cy = y0 + first[2] / a;
+    const cx = x0 + v[1] / a, cy = y0 + v[2] / a;
     const pad = Math.max(b.xmax - b.xmin, b.ymax - b.ymin);
     if (cx >= b.xmin - pad && cx <= b.xmax + pad && cy >= b.ymin - pad && cy <= b.ymax + pad) {
       gx = cx;
       gy = cy;
     }
   }
-  const central = gx === x0 && gy === y0 ? first : contourAbout(c, gx, gy);
-  const out: ContourSummary = { first, gx, gy, central, xmin: b.xmin, xmax: b.xmax, ymin: b.ymin, ymax: b.ymax, length: contourLength(c) };
+  if (gx === x0 && gy === y0) v.copyWithin(6, 0, 6);
+  else {
+    const central = v.subarray(6, 12);
+    accumulateContour(c, gx, gy, central);
+  }
+  v[12] = b.xmin;
+  v[13] = b.xmax;
+  v[14] = b.ymin;
+  v[15] = b.ymax;
+  v[16] = gx;
+  v[17] = gy;
+  v[18] = contourLength(c);
+  const out = new ContourSummary(v);
   SUMMARIES.set(c, out);
   return out;
 }
@@ -350,32 +388,32 @@ export function contourSummary(c: Contour): ContourSummary {
  * nothing at all, and for several it adds each loop's own A·d², which is the composite itself.
  */
 export function centralMoments(region: Region): CentralMoments {
-  const parts: { gx: number; gy: number; m: Float64Array }[] = [];
+  // Each loop's summary numbers: the sums about (gx, gy) in slots 6–11, gx and gy in 16 and 17.
+  const parts: Float64Array[] = [];
   let big = -1, bigA = -1;
   for (const c of region) {
     if (c.xy.length < 4) continue;
-    const sm = contourSummary(c);
-    const m = sm.central;
-    parts.push({ gx: sm.gx, gy: sm.gy, m });
-    if (Math.abs(m[0]) > bigA) {
-      bigA = Math.abs(m[0]);
+    const v = contourSummary(c).v;
+    parts.push(v);
+    if (Math.abs(v[6]) > bigA) {
+      bigA = Math.abs(v[6]);
       big = parts.length - 1;
     }
   }
   if (big < 0) return { A: 0, refX: 0, refY: 0, dx: 0, dy: 0, Ix: 0, Iy: 0, Ixy: 0 };
   // Reference: the centroid of the largest loop (the outer boundary, as a rule).
-  const refX = parts[big].gx, refY = parts[big].gy;
+  const refX = parts[big][16], refY = parts[big][17];
   let A = 0, sx = 0, sy = 0;
-  for (const p of parts) {
-    A += p.m[0];
-    sx += p.m[0] * (p.gx - refX) + p.m[1];
-    sy += p.m[0] * (p.gy - refY) + p.m[2];
+  for (const v of parts) {
+    A += v[6];
+    sx += v[6] * (v[16] - refX) + v[7];
+    sy += v[6] * (v[17] - refY) + v[8];
   }
   const dx = sx / A, dy = sy / A;
   let Ix = 0, Iy = 0, Ixy = 0;
-  for (const p of parts) {
-    const ex = p.gx - refX - dx, ey = p.gy - refY - dy;
-    const [a, m10, m01, m20, m02, m11] = p.m;
+  for (const v of parts) {
+    const ex = v[16] - refX - dx, ey = v[17] - refY - dy;
+    const a = v[6], m10 = v[7], m01 = v[8], m20 = v[9], m02 = v[10], m11 = v[11];
     Iy += m20 + 2 * ex * m10 + ex * ex * a;
     Ix += m02 + 2 * ey * m01 + ey * ey * a;
     Ixy += m11 + ex * m01 + ey * m10 + ex * ey * a;
