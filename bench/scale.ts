@@ -123,8 +123,7 @@ export function scaleBenchmarks(result: Record<string, number | string>): void {
 
   // 3. Perforated plates, document to properties (a fresh evaluator each time). Three warm-up
   //    calls each and the best of 20 rounds: with 8 rounds and one warm-up the ratio moved
-  //    between 10 and 22 from run to run on a machine busy with other work (a 4000-hole
-  //    evaluation is long enough to be caught by it in most rounds).
+  //    between 10 and 22 from run to run on a machine busy with other work.
   const doc400 = perforatedPlate(400), doc4000 = perforatedPlate(4000);
   const [t400, t4000] = bestOfRounds([
     () => { sink += evaluateDocument(doc400).props?.area ?? 0; },

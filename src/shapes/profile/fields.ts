@@ -176,8 +176,8 @@ export function validateProfile(shape: ProfileShape): ProfileIssue[] {
 
   // Fields relative to each other: `less` demands a < limit, `atMost` a <= limit; `what`
   // names the limit in words, with the number a reader can check against the drawing. It is
-  // written only for a message: formatting the numbers of every valid profile cost a fifth of
-  // evaluating a section of rolled profiles.
+  // written only for a message: formatting the numbers of every valid profile was about a
+  // quarter of the time spent building a rolled profile's outline.
   const less = (path: string, a: number, limit: number, what: () => string) => {
     if (!(a < limit)) issues.push({ path, message: `${label(type, path)} ${fmt(a)} must be less than ${what()}` });
   };
