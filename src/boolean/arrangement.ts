@@ -7,7 +7,7 @@ import {
   ARC, curveIntersections, distToCarrier, implicitAt, makeArc, makeLine, paramOf, polishIntersection,
   sameCurve, hyp, type Carrier,
 } from './carriers';
-import { type Ctx, type SourceGroup, find, union, newNode, SAG_MAX, SAG_FLOOR, FLAT_RADIUS } from './context';
+import { type Ctx, type SourceGroup, find, union, newNode, nodeCarriers, SAG_MAX, SAG_FLOOR, FLAT_RADIUS } from './context';
 import { forEachNearPair } from './spatial';
 
 /** Step 1: carriers and vertex nodes from the source contours. */
@@ -18,6 +18,8 @@ function plainContour(xy: Float64Array, bulge: Float64Array | null): boolean {
   return true;
 }
 
+let scratch = new Float64Array(3 * 64);
+
 export function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
   const eps = ctx.eps;
   for (const g of groups) {
@@ -26,7 +28,7 @@ export function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
       if (n < 2) continue;
       // Expand arcs over 180 degrees, then drop repeated vertices (zero-length edges). A contour
       // with finite vertices and no such arc (the usual case) is read as it is.
-      let xy: ArrayLike<number> = c.xy, bl: ArrayLike<number> = c.bulge ?? new Float64Array(n);
+      let xy: ArrayLike<number> = c.xy, bl: ArrayLike<number> | null = c.bulge;
       if (!plainContour(c.xy, c.bulge)) {
         const exy: number[] = [], ebl: number[] = [];
         for (let i = 0; i < n; i++) {
@@ -43,30 +45,37 @@ export function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
         bl = ebl;
       }
       const m0 = xy.length >> 1;
-      const vx = new Float64Array(m0), vy = new Float64Array(m0), vb = new Float64Array(m0);
+      // The kept vertices go to buffers shared by all calls (read only below, within this loop):
+      // three small arrays per loop were a large share of the allocation for thousands of holes.
+      if (scratch.length < 3 * m0) scratch = new Float64Array(Math.max(3 * m0, 2 * scratch.length));
+      const v = scratch, VY = m0, VB = 2 * m0; // x at v[i], y at v[VY + i], bulge at v[VB + i]
       let m = 0;
       for (let i = 0; i < m0; i++) {
         const x = xy[2 * i], y = xy[2 * i + 1];
-        if (m > 0 && hyp(x - vx[m - 1], y - vy[m - 1]) <= eps) {
-          vb[m - 1] = bl[i]; // the zero-length edge goes; the next edge starts at the kept vertex
+        const bi = bl ? bl[i] : 0;
+        if (m > 0 && hyp(x - v[m - 1], y - v[VY + m - 1]) <= eps) {
+          v[VB + m - 1] = bi; // the zero-length edge goes; the next edge starts at the kept vertex
           continue;
         }
-        vx[m] = x;
-        vy[m] = y;
-        vb[m] = bl[i];
+        v[m] = x;
+        v[VY + m] = y;
+        v[VB + m] = bi;
         m++;
       }
       // Closing duplicates; the surviving last vertex keeps its own outgoing bulge only if distinct.
-      while (m > 1 && hyp(vx[m - 1] - vx[0], vy[m - 1] - vy[0]) <= eps) m--;
+      while (m > 1 && hyp(v[m - 1] - v[0], v[VY + m - 1] - v[VY + 0]) <= eps) m--;
       if (m < 2) continue;
       // Node i joins carriers i − 1 and i (ids are consecutive from the first).
       const first = ctx.carriers.length, node0 = ctx.nx.length;
-      for (let i = 0; i < m; i++) newNode(ctx, vx[i], vy[i], [first + ((i + m - 1) % m), first + i]);
+      // Vertex i starts carrier first + i; with node and carrier numbers in step (as they are
+      // while only carriers make nodes) its carrier list is left to nodeCarriers.
+      const lazy = node0 === first;
+      for (let i = 0; i < m; i++) newNode(ctx, v[i], v[VY + i], lazy ? null : [first + ((i + m - 1) % m), first + i]);
       const ids: number[] = new Array(m);
       for (let i = 0; i < m; i++) {
         const j = i + 1 === m ? 0 : i + 1;
-        const ax = vx[i], ay = vy[i], bx = vx[j], by = vy[j];
-        const b = vb[i];
+        const ax = v[i], ay = v[VY + i], bx = v[j], by = v[VY + j];
+        const b = v[VB + i];
         const id = first + i;
         let car: Carrier;
         // A nearly flat arc (radius far beyond the extent, where centre-based formulas lose
@@ -106,7 +115,7 @@ function endpointNode(ctx: Ctx, c: Carrier, x: number, y: number): number {
 
 function addSplit(ctx: Ctx, c: Carrier, node: number): void {
   (ctx.splits[c.id] ??= []).push(node);
-  ctx.ncar[node].push(c.id);
+  nodeCarriers(ctx, node).push(c.id);
 }
 
 /** Carriers a and b meet away from a vertex they share: their loops interact. */
@@ -172,12 +181,16 @@ function intersectPair(ctx: Ctx, a: Carrier, b: Carrier): void {
 
 /** Ends of b that lie on a (and ends of a on b), away from their shared vertex. */
 function touchEnds(ctx: Ctx, a: Carrier, b: Carrier): void {
-  const eps = ctx.eps;
-  const ends: [Carrier, Carrier, number, number][] = [[a, b, b.ax, b.ay], [a, b, b.bx, b.by], [b, a, a.ax, a.ay], [b, a, a.bx, a.by]];
-  for (const [on, of, x, y] of ends) {
-    if (endpointNode(ctx, on, x, y) >= 0) continue; // the shared vertex (or a merged one)
-    if (distExact(on, x, y) <= eps) sharePoint(ctx, on, of, x, y);
-  }
+  touchEnd(ctx, a, b, b.ax, b.ay);
+  touchEnd(ctx, a, b, b.bx, b.by);
+  touchEnd(ctx, b, a, a.ax, a.ay);
+  touchEnd(ctx, b, a, a.bx, a.by);
+}
+
+/** The end (x, y) of carrier `of`, when it lies on carrier `on` away from their shared vertex. */
+function touchEnd(ctx: Ctx, on: Carrier, of: Carrier, x: number, y: number): void {
+  if (endpointNode(ctx, on, x, y) >= 0) return; // the shared vertex (or a merged one)
+  if (distExact(on, x, y) <= ctx.eps) sharePoint(ctx, on, of, x, y);
 }
 
 /** Distance to the carrier's true curve within its range (a flat arc is not its chord here). */
@@ -256,7 +269,8 @@ export function buildArrangement(ctx: Ctx): void {
   for (let i = 0; i < nn; i++) {
     const r = find(ctx, i);
     if (r !== i) {
-      for (const c of ctx.ncar[i]) if (!ctx.ncar[r].includes(c)) ctx.ncar[r].push(c);
+      const into = nodeCarriers(ctx, r);
+      for (const c of nodeCarriers(ctx, i)) if (!into.includes(c)) into.push(c);
       ctx.ncar[i] = [];
     }
   }

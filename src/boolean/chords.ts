@@ -5,7 +5,7 @@
 import type { IntPoint } from 'clipper-lib';
 import { ARC, paramOf, pointAt } from './carriers';
 import { CIRCUMSCRIBE, INSCRIBE } from './arrangement';
-import { type Ctx, find, FREE_STEP, MAX_STEP, SAG_MAX } from './context';
+import { type Ctx, find, FREE_STEP, MAX_STEP, nodeCarriers, SAG_MAX } from './context';
 import { NODE_UNITS } from './grid';
 
 function pushVertex(ctx: Ctx, path: IntPoint[], x: number, y: number, exact: boolean, car: number[]): void {
@@ -56,7 +56,7 @@ export function buildPaths(ctx: Ctx, loops: readonly number[]): { subj: IntPoint
       if (r0 === r1) continue; // collapsed by merging
       if (c.kind !== ARC && !ctx.splits[id]) {
         // A straight edge with no node inside: its start vertex is all clipper needs.
-        pushVertex(ctx, path, ctx.nx[r0], ctx.ny[r0], true, ctx.ncar[r0]);
+        pushVertex(ctx, path, ctx.nx[r0], ctx.ny[r0], true, nodeCarriers(ctx, r0));
         ctx.chordPieces.push(id, r0, r1);
         continue;
       }
@@ -74,7 +74,7 @@ export function buildPaths(ctx: Ctx, loops: readonly number[]): { subj: IntPoint
       seq.push({ u: 1, n: r1 });
       for (let k = 0; k + 1 < seq.length; k++) {
         const nd = seq[k].n;
-        pushVertex(ctx, path, ctx.nx[nd], ctx.ny[nd], true, ctx.ncar[nd]);
+        pushVertex(ctx, path, ctx.nx[nd], ctx.ny[nd], true, nodeCarriers(ctx, nd));
         if (c.kind !== ARC) {
           ctx.chordPieces.push(id, nd, seq[k + 1].n);
           continue;

@@ -75,7 +75,12 @@ export interface Ctx {
   trustLoops: boolean;
   nx: number[];
   ny: number[];
-  ncar: number[][];
+  /**
+   * Per node: the carriers through it. A source vertex's entry (node k starts carrier k and ends
+   * the one before it on its loop) is null until first asked for through nodeCarriers: a plate
+   * with thousands of holes would otherwise build one small array per vertex that is never read.
+   */
+  ncar: (number[] | null)[];
   parent: number[];
   splits: (number[] | null)[];
   /** Per carrier: largest chord sagitta allowed (absolute). */
@@ -128,8 +133,20 @@ export function union(ctx: Ctx, a: number, b: number): void {
   else ctx.parent[a] = b;
 }
 
-/** A new exact node at (x, y), with the carriers through it known so far. */
-export function newNode(ctx: Ctx, x: number, y: number, carriers: number[] = []): number {
+/** The carriers through node n (the list itself: callers may add to it). */
+export function nodeCarriers(ctx: Ctx, n: number): number[] {
+  const have = ctx.ncar[n];
+  if (have) return have;
+  const made = [n === ctx.loopLo[n] ? ctx.loopHi[n] : n - 1, n];
+  ctx.ncar[n] = made;
+  return made;
+}
+
+/**
+ * A new exact node at (x, y), with the carriers through it known so far; null only for source
+ * vertex k of a loop when it is also node k (see ncar).
+ */
+export function newNode(ctx: Ctx, x: number, y: number, carriers: number[] | null = []): number {
   const id = ctx.nx.length;
   ctx.nx.push(x);
   ctx.ny.push(y);

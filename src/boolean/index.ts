@@ -6,49 +6,56 @@
  * radius) and every vertex sits on an exact source vertex or an exact analytic intersection.
  * See engine.ts for the pipeline.
  */
-import { regionBounds, type Bounds, type Contour, type Region } from '../geometry/contour';
+import { contourBounds, type Bounds, type Contour, type Region } from '../geometry/contour';
+import { unionBounds } from '../geometry/bounds';
 import Flatbush from 'flatbush';
 import { contourBox } from '../moments/kernel';
 import { runBoolean } from './engine';
 
 export type BoolOp = 'union' | 'difference' | 'intersection';
 
-/** Exact bounds of a region from its contours' boxes (kept by identity across calls). */
-function boundsOf(r: Region): Bounds | null {
-  let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
-  for (const c of r) {
-    if (c.xy.length < 2) continue;
-    if (c.xy.length < 4 || !isClean([c])) {
-      const b = regionBounds([c]);
-      if (!b) continue;
-      xmin = Math.min(xmin, b.xmin);
-      xmax = Math.max(xmax, b.xmax);
-      ymin = Math.min(ymin, b.ymin);
-      ymax = Math.max(ymax, b.ymax);
-      continue;
-    }
-    const s = contourBox(c);
-    if (!s) continue;
-    xmin = Math.min(xmin, s.xmin);
-    xmax = Math.max(xmax, s.xmax);
-    ymin = Math.min(ymin, s.ymin);
-    ymax = Math.max(ymax, s.ymax);
-  }
-  return xmin <= xmax ? { xmin, xmax, ymin, ymax } : null;
+/** A region's exact bounds (from its contours' boxes, kept by identity across calls) and whether it is clean. */
+interface RegionInfo {
+  box: Bounds | null;
+  clean: boolean;
 }
 
-function boundsOverlap(ba: Bounds | null, b: Region): boolean {
-  const bb = boundsOf(b);
+/**
+ * Bounds and cleanness of a region in one pass over its contours. A clean loop's box is the
+ * one kept by identity (contourBox); a loop with unusable numbers is bounded as it is.
+ */
+function regionInfo(r: Region): RegionInfo {
+  let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
+  let clean = true;
+  for (const c of r) {
+    const ok = cleanContour(c);
+    if (!ok) clean = false;
+    if (c.xy.length < 2) continue;
+    const s = c.xy.length < 4 || !ok ? contourBounds(c) : contourBox(c);
+    if (!s) continue;
+    if (s.xmin < xmin) xmin = s.xmin;
+    if (s.xmax > xmax) xmax = s.xmax;
+    if (s.ymin < ymin) ymin = s.ymin;
+    if (s.ymax > ymax) ymax = s.ymax;
+  }
+  return { box: xmin <= xmax ? { xmin, xmax, ymin, ymax } : null, clean };
+}
+
+function boxesOverlap(ba: Bounds | null, bb: Bounds | null): boolean {
   if (!ba || !bb) return false;
   return !(bb.xmin > ba.xmax || bb.xmax < ba.xmin || bb.ymin > ba.ymax || bb.ymax < ba.ymin);
 }
 
 /** True when every number is finite and every bulge within [-1, 1] (safe to hand back as is). */
+function cleanContour(c: Contour): boolean {
+  const xy = c.xy, bulge = c.bulge;
+  for (let i = 0; i < xy.length; i++) if (!Number.isFinite(xy[i])) return false;
+  if (bulge) for (let i = 0; i < bulge.length; i++) if (!(Math.abs(bulge[i]) <= 1)) return false;
+  return true;
+}
+
 function isClean(r: Region): boolean {
-  for (const c of r) {
-    for (const v of c.xy) if (!Number.isFinite(v)) return false;
-    if (c.bulge) for (const b of c.bulge) if (!(Math.abs(b) <= 1)) return false;
-  }
+  for (const c of r) if (!cleanContour(c)) return false;
   return true;
 }
 
@@ -66,16 +73,19 @@ function boxesMeet(a: Bounds | null, b: Bounds | null): boolean {
 }
 
 /**
- * A test "does box b meet any of these boxes but number `skip`": a scan for a few boxes, a
- * flatbush index for many (a run of thousands of shapes would otherwise compare every pair).
+ * A test "does box b meet any of these boxes but number `skip`": a scan for a few boxes or a few
+ * questions, a flatbush index for many of both (a run of thousands of shapes would otherwise
+ * compare every pair). A plate with thousands of holes asks once, for its one outline: one scan
+ * costs less than sorting the boxes into an index.
  */
 function boxFinder(boxes: (Bounds | null)[]): (b: Bounds | null, skip: number) => boolean {
-  if (boxes.length <= 16) {
-    return (b, skip) => boxes.some((o, j) => j !== skip && boxesMeet(o, b));
-  }
-  let idx: Flatbush | null = null; // built on the first question
+  const scan = (b: Bounds | null, skip: number) => boxes.some((o, j) => j !== skip && boxesMeet(o, b));
+  if (boxes.length <= 16) return scan;
+  let idx: Flatbush | null = null; // built on the ninth question
+  let asked = 0;
   return (b, skip) => {
     if (!b) return false;
+    if (!idx && ++asked <= 8) return scan(b, skip);
     if (!idx) {
       idx = new Flatbush(boxes.length);
       for (const o of boxes) {
@@ -98,20 +108,26 @@ function boxFinder(boxes: (Bounds | null)[]): (b: Bounds | null, skip: number) =
  */
 export function booleanRegions(subject: Region, clips: Region[], op: BoolOp): Region {
   let cl = clips.filter((c) => c.length > 0);
+  // Each clip's bounds and cleanness, found once (a run of thousands of holes asks for each twice).
+  let info = cl.map(regionInfo);
+  const subjInfo = regionInfo(subject);
   if (op !== 'union') {
     // Clips that cannot touch the subject change nothing.
-    const sb = boundsOf(subject);
-    cl = cl.filter((c) => boundsOverlap(sb, c));
+    const sb = subjInfo.box;
+    const meets = info.map((f) => boxesOverlap(sb, f.box));
+    cl = cl.filter((_, k) => meets[k]);
+    info = info.filter((_, k) => meets[k]);
     if (cl.length === 0) return op === 'difference' ? passThrough(subject) : [];
     if (subject.length === 0) return [];
   } else if (cl.length === 0) return passThrough(subject);
   const kept: Contour[] = [];
   let subj: Region = subject;
-  if (op !== 'intersection' && isClean(subject) && cl.every(isClean)) {
-    const all = boundsOf([...subject, ...cl.flat()]);
+  if (op !== 'intersection' && subjInfo.clean && info.every((f) => f.clean)) {
+    let all = subjInfo.box;
+    for (const f of info) all = unionBounds(all, f.box);
     const tol = all ? 1e-9 * Math.max(all.xmax - all.xmin, all.ymax - all.ymin) : 0;
-    const clipBoxes = cl.map((c) => widened(boundsOf(c), tol));
-    const subjBoxes = subject.map((c) => widened(boundsOf([c]), tol));
+    const clipBoxes = info.map((f) => widened(f.box, tol));
+    const subjBoxes = subject.map((c) => widened(regionInfo([c]).box, tol));
     const clipsNear = boxFinder(clipBoxes), subjNear = boxFinder(subjBoxes);
     const active: Contour[] = [];
     subject.forEach((c, k) => (clipsNear(subjBoxes[k], -1) ? active.push(c) : kept.push(c)));

@@ -135,26 +135,36 @@ export function settleFreeLoops(ctx: Ctx, free: readonly number[], box: Float64A
   if (L === 0) loopIdx.add(0, 0, 0, 0);
   loopIdx.finish();
   const big = new Uint8Array(L);
-  for (const l of free) {
+  // The loops whose boxes hold (x, y) are visited inside the index search (the filter adds their
+  // windings and keeps nothing), so the thousands of questions of a perforated plate build no
+  // result lists.
+  let l = 0, x = 0, y = 0, w0 = 0, w1 = 0;
+  let anyBig: boolean;
+  const visit = (o: number): boolean => {
+    if (o === l) return false;
+    const ids = ctx.loops[o].ids;
+    if (ids.length > SCAN_LIMIT) {
+      big[o] = 1;
+      anyBig = true;
+      return false;
+    }
+    let w = 0;
+    for (const id of ids) w += windingOf(ctx.carriers[id], x, y);
+    if (ctx.loops[o].group === 0) w0 += w;
+    else w1 += w;
+    return false;
+  };
+  for (l of free) {
     if (ctx.loops[l].ids.length < 2) continue;
     const A = loopArea(ctx, l);
     if (!(A !== 0) || !Number.isFinite(A)) continue;
     const c0 = ctx.carriers[ctx.loops[l].ids[0]];
-    const x = c0.ax, y = c0.ay;
-    let w0 = 0, w1 = 0, anyBig = false;
-    for (const o of loopIdx.search(x, y, x, y)) {
-      if (o === l) continue;
-      const ids = ctx.loops[o].ids;
-      if (ids.length > SCAN_LIMIT) {
-        big[o] = 1;
-        anyBig = true;
-        continue;
-      }
-      let w = 0;
-      for (const id of ids) w += windingOf(ctx.carriers[id], x, y);
-      if (ctx.loops[o].group === 0) w0 += w;
-      else w1 += w;
-    }
+    x = c0.ax;
+    y = c0.ay;
+    w0 = 0;
+    w1 = 0;
+    anyBig = false;
+    loopIdx.search(x, y, x, y, visit);
     if (anyBig) {
       const [b0, b1] = windingsAt(ctx, x, y, (k) => !big[ctx.loopOf[k.id]]);
       w0 += b0;

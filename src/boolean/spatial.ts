@@ -113,7 +113,11 @@ export function forEachNearPair(ctx: Ctx, visit: (a: Carrier, b: Carrier) => voi
     for (let i = 0; i < n; i++) cost += bound(s, hi[i] + eps, true) - bound(s, lo[i], false);
     return { order, cost };
   };
-  const cheap = 16 * n + 1024;
+  // One index query costs about as much as a few hundred steps of the sweep's inner loop (a
+  // comparison of numbers read in order), so the sweep is kept up to 128 box starts per box: a
+  // plate's column of 40 holes (80 arcs sharing one x-range) stays a sweep, a row of thousands
+  // of holes along the sweep axis does not.
+  const cheap = 128 * n + 1024;
   let axis = sweep(xlo, xhi);
   let [lo, hi, olo, ohi] = [xlo, xhi, ylo, yhi];
   if (axis.cost > cheap) {
@@ -125,13 +129,22 @@ export function forEachNearPair(ctx: Ctx, visit: (a: Carrier, b: Carrier) => voi
   }
   if (axis.cost <= cheap) {
     const order = axis.order;
+    // The boxes in sweep order, each bound already widened by eps, so the inner loop reads
+    // consecutive numbers (the same comparisons as lo[b] > hi[a] + eps and so on).
+    const sLo = new Float64Array(n), sHi = new Float64Array(n), sOlo = new Float64Array(n), sOhi = new Float64Array(n);
     for (let p = 0; p < n; p++) {
       const a = order[p];
+      sLo[p] = lo[a];
+      sHi[p] = hi[a] + eps;
+      sOlo[p] = olo[a];
+      sOhi[p] = ohi[a];
+    }
+    for (let p = 0; p < n; p++) {
+      const end = sHi[p], top = sOhi[p] + eps, bottom = sOlo[p] - eps;
       for (let q = p + 1; q < n; q++) {
-        const b = order[q];
-        if (lo[b] > hi[a] + eps) break;
-        if (olo[b] > ohi[a] + eps || ohi[b] < olo[a] - eps) continue;
-        visit(cs[a], cs[b]);
+        if (sLo[q] > end) break;
+        if (sOlo[q] > top || sOhi[q] < bottom) continue;
+        visit(cs[order[p]], cs[order[q]]);
       }
     }
     return;

@@ -10,7 +10,7 @@ import {
   ARC, LINE, curveIntersections, curvePoint, distToCurve, nearestPoint, paramOf, polishIntersection,
   sameCurve, wrapAngle, hyp, type Carrier,
 } from './carriers';
-import { type Ctx, find } from './context';
+import { type Ctx, find, nodeCarriers } from './context';
 import { digonPick, pieceSweep } from './digons';
 import { carrierIndex, carriersInBox, classify } from './spatial';
 
@@ -379,7 +379,7 @@ export function tracePath(ctx: Ctx, path: IntPoint[]): Contour | null {
       px.push(ctx.nx[nd]);
       py.push(ctx.ny[nd]);
       rec.push(-1);
-      sets.push(ctx.ncar[nd]);
+      sets.push(nodeCarriers(ctx, nd));
     }
   }
   const m = px.length;

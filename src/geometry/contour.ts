@@ -232,43 +232,70 @@ export function arcPointAtAngle(ax: number, ay: number, bx: number, by: number, 
 
 /** Exact bounds: vertices plus the points where an arc's outward normal is axis-aligned. */
 export function regionBounds(r: Region): Bounds | null {
-  let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
-  const take = (x: number, y: number) => {
+  const box = [Infinity, -Infinity, Infinity, -Infinity];
+  for (const c of r) takeContour(c, box);
+  if (box[0] > box[1]) return null;
+  return { xmin: box[0], xmax: box[1], ymin: box[2], ymax: box[3] };
+}
+
+/** Exact bounds of one contour (as regionBounds of [c]), or null when it has no vertex. */
+export function contourBounds(c: Contour): Bounds | null {
+  const box = [Infinity, -Infinity, Infinity, -Infinity];
+  takeContour(c, box);
+  if (box[0] > box[1]) return null;
+  return { xmin: box[0], xmax: box[1], ymin: box[2], ymax: box[3] };
+}
+
+/**
+ * Widen box [xmin, xmax, ymin, ymax] by the contour's vertices and its arcs' extreme points.
+ * The arc points are arcPointAtAngle's, written out with no array or closure per point: this
+ * runs for every loop of every evaluation (a plate with thousands of holes).
+ */
+function takeContour(c: Contour, box: number[]): void {
+  let xmin = box[0], xmax = box[1], ymin = box[2], ymax = box[3];
+  const xy = c.xy, bulge = c.bulge;
+  const n = xy.length >> 1;
+  for (let i = 0; i < n; i++) {
+    const x = xy[2 * i], y = xy[2 * i + 1];
     if (x < xmin) xmin = x;
     if (x > xmax) xmax = x;
     if (y < ymin) ymin = y;
     if (y > ymax) ymax = y;
-  };
-  for (const c of r) {
-    const n = c.xy.length >> 1;
-    for (let i = 0; i < n; i++) {
-      const x = c.xy[2 * i], y = c.xy[2 * i + 1];
-      take(x, y);
-      const b = c.bulge ? c.bulge[i] : 0;
-      if (b === 0) continue;
-      const j = (i + 1) % n;
-      const bx = c.xy[2 * j], by = c.xy[2 * j + 1];
-      const L = Math.hypot(bx - x, by - y);
-      if (!(L > 0)) continue;
-      const phi = 4 * Math.atan(b), alpha = Math.abs(phi) / 2;
-      const ex = (bx - x) / L, ey = (by - y) / L;
-      const sg = phi > 0 ? 1 : -1;
-      const ux = sg * ey, uy = -sg * ex;
-      // The outward normal at θ is u cosθ + e sinθ; it equals the axis direction d at
-      // θ = atan2(d·e, d·u), an extreme of the arc when |θ| < α.
-      for (const [dx, dy] of AXES) {
-        const th = Math.atan2(dx * ex + dy * ey, dx * ux + dy * uy);
-        if (Math.abs(th) < alpha) {
-          const [px, py] = arcPointAtAngle(x, y, bx, by, phi, th);
-          take(px, py);
-        }
+    const b = bulge ? bulge[i] : 0;
+    if (b === 0) continue;
+    const j = (i + 1) % n;
+    const bx = xy[2 * j], by = xy[2 * j + 1];
+    const L = Math.hypot(bx - x, by - y);
+    if (!(L > 0)) continue;
+    const phi = 4 * Math.atan(b), alpha = Math.abs(phi) / 2;
+    const ex = (bx - x) / L, ey = (by - y) / L;
+    const sg = phi > 0 ? 1 : -1;
+    const ux = sg * ey, uy = -sg * ex;
+    // The outward normal at θ is u cosθ + e sinθ; it equals the axis direction d at
+    // θ = atan2(d·e, d·u), an extreme of the arc when |θ| < α.
+    for (let k = 0; k < 4; k++) {
+      const dx = AXIS_X[k], dy = AXIS_Y[k];
+      const th = Math.atan2(dx * ex + dy * ey, dx * ux + dy * uy);
+      if (Math.abs(th) < alpha) {
+        // arcPointAtAngle(x, y, bx, by, phi, th), the same operations in the same order.
+        const h = L / 2, sa = Math.sin(alpha);
+        const w = sa > 0 ? (2 * h * Math.sin((alpha + th) / 2) * Math.sin((alpha - th) / 2)) / sa : 0;
+        const t = sa > 0 ? (h * Math.sin(th)) / sa : 0;
+        const px = (x + bx) / 2 + ux * w + ex * t, py = (y + by) / 2 + uy * w + ey * t;
+        if (px < xmin) xmin = px;
+        if (px > xmax) xmax = px;
+        if (py < ymin) ymin = py;
+        if (py > ymax) ymax = py;
       }
     }
   }
-  if (xmin > xmax) return null;
-  return { xmin, xmax, ymin, ymax };
+  box[0] = xmin;
+  box[1] = xmax;
+  box[2] = ymin;
+  box[3] = ymax;
 }
-const AXES: readonly (readonly [number, number])[] = [[1, 0], [0, 1], [-1, 0], [0, -1]];
+const AXIS_X = Float64Array.of(1, 0, -1, 0);
+const AXIS_Y = Float64Array.of(0, 1, 0, -1);
 
 /** True when angle t lies strictly inside the sweep that starts at t0 (either direction). */
 export function angleInSweep(t: number, t0: number, sweep: number): boolean {

@@ -155,13 +155,19 @@ function splitFlatArc(ax: number, ay: number, bx: number, by: number, phi: numbe
  * costs about the holes on that line.
  */
 export interface CutPlan {
+  /** The loops (for a turned plan, built on first use: the cuts themselves ask only for crossed loops). */
   readonly contours: readonly Contour[];
+  /** Loop k, alone (a turned plan turns only the loops a cut crosses). */
+  loop(k: number): Contour;
   readonly xmin: Float64Array;
   readonly xmax: Float64Array;
   readonly ymin: Float64Array;
   readonly ymax: Float64Array;
-  /** Per loop: A, ∫x, ∫y, ∫x², ∫y², ∫xy about its first vertex. */
-  readonly whole: readonly Float64Array[];
+  /** Per loop k, in slots 6k to 6k + 5: A, ∫x, ∫y, ∫x², ∫y², ∫xy about its first vertex. */
+  readonly whole: Float64Array;
+  /** Per loop: its first vertex. */
+  readonly firstX: Float64Array;
+  readonly firstY: Float64Array;
 }
 
 export function planCuts(region: Region): CutPlan {
@@ -169,33 +175,59 @@ export function planCuts(region: Region): CutPlan {
   for (const c of region) if (c.xy.length >= 4) contours.push(c);
   const n = contours.length;
   const xmin = new Float64Array(n), xmax = new Float64Array(n), ymin = new Float64Array(n), ymax = new Float64Array(n);
-  const whole: Float64Array[] = [];
-  contours.forEach((c, k) => {
+  const whole = new Float64Array(6 * n), firstX = new Float64Array(n), firstY = new Float64Array(n);
+  for (let k = 0; k < n; k++) {
+    const c = contours[k];
     const sm = contourSummary(c);
     xmin[k] = sm.xmin;
     xmax[k] = sm.xmax;
     ymin[k] = sm.ymin;
     ymax[k] = sm.ymax;
-    whole.push(sm.first);
-  });
-  return { contours, xmin, xmax, ymin, ymax, whole };
+    const v = sm.v;
+    for (let i = 0; i < 6; i++) whole[6 * k + i] = v[i];
+    firstX[k] = c.xy[0];
+    firstY[k] = c.xy[1];
+  }
+  return { contours, loop: (k) => contours[k], xmin, xmax, ymin, ymax, whole, firstX, firstY };
 }
 
 /**
  * The plan of the region turned by a quarter turn (quarterTurnRegion's sense), from this plan's
- * boxes and moments, exactly (swapped and negated), without integrating anything again.
+ * boxes and moments, exactly (swapped and negated), without integrating anything again. Loops
+ * are turned when first asked for: the plastic axis about y crosses only a few of a perforated
+ * plate's thousands of holes, and turning every one cost more than the cuts.
  */
 export function turnPlan(plan: CutPlan, sense: 1 | -1): CutPlan {
-  const contours = quarterTurnRegion(plan.contours, sense);
-  const whole = plan.whole.map((w) =>
-    sense > 0
-      ? Float64Array.of(w[0], -w[2], w[1], w[4], w[3], -w[5]) // (x, y) -> (−y, x)
-      : Float64Array.of(w[0], w[2], -w[1], w[4], w[3], -w[5]), // (x, y) -> (y, −x)
-  );
+  const n = plan.xmin.length;
+  const w = plan.whole;
+  const whole = new Float64Array(6 * n);
+  for (let k = 0; k < 6 * n; k += 6) {
+    // (x, y) -> (−y, x) for sense +1, (x, y) -> (y, −x) for sense −1.
+    whole[k] = w[k];
+    whole[k + 1] = sense > 0 ? -w[k + 2] : w[k + 2];
+    whole[k + 2] = sense > 0 ? w[k + 1] : -w[k + 1];
+    whole[k + 3] = w[k + 4];
+    whole[k + 4] = w[k + 3];
+    whole[k + 5] = -w[k + 5];
+  }
   const neg = (a: Float64Array) => a.map((v) => -v);
+  const turned: (Contour | undefined)[] = new Array(n);
+  const loop = (k: number): Contour => (turned[k] ??= quarterTurnRegion([plan.loop(k)], sense)[0]);
+  let all: Contour[] | null = null;
+  const frame = {
+    loop,
+    whole,
+    get contours(): readonly Contour[] {
+      if (!all) {
+        all = [];
+        for (let k = 0; k < n; k++) all.push(loop(k));
+      }
+      return all;
+    },
+  };
   return sense > 0
-    ? { contours, xmin: neg(plan.ymax), xmax: neg(plan.ymin), ymin: plan.xmin, ymax: plan.xmax, whole }
-    : { contours, xmin: plan.ymin, xmax: plan.ymax, ymin: neg(plan.xmax), ymax: neg(plan.xmin), whole };
+    ? Object.assign(frame, { xmin: neg(plan.ymax), xmax: neg(plan.ymin), ymin: plan.xmin, ymax: plan.xmax, firstX: neg(plan.firstY), firstY: plan.firstX })
+    : Object.assign(frame, { xmin: plan.ymin, xmax: plan.ymax, ymin: neg(plan.xmax), ymax: neg(plan.xmin), firstX: plan.firstY, firstY: neg(plan.firstX) });
 }
 
 /**
@@ -207,23 +239,23 @@ export function momentsAboveAbout(plan: CutPlan, yc: number, ox: number): HalfPl
   const acc = new Float64Array(6);
   let width = 0;
   const pieces: Piece[] = [];
-  const { contours, ymin, ymax, whole } = plan;
-  for (let k = 0; k < contours.length; k++) {
+  const { ymin, ymax, whole, firstX, firstY } = plan;
+  const n = ymin.length;
+  for (let k = 0; k < n; k++) {
     if (ymax[k] <= yc) continue; // wholly below (or touching from below): nothing above the line
-    const c = contours[k];
     if (ymin[k] > yc) {
       // Wholly above: the loop's own moments, carried from its first vertex to (ox, yc).
-      const w = whole[k];
-      const dx = c.xy[0] - ox, dy = c.xy[1] - yc;
-      acc[0] += w[0];
-      acc[1] += w[1] + dx * w[0];
-      acc[2] += w[2] + dy * w[0];
-      acc[3] += w[3] + 2 * dx * w[1] + dx * dx * w[0];
-      acc[4] += w[4] + 2 * dy * w[2] + dy * dy * w[0];
-      acc[5] += w[5] + dx * w[2] + dy * w[1] + dx * dy * w[0];
+      const o = 6 * k;
+      const dx = firstX[k] - ox, dy = firstY[k] - yc;
+      acc[0] += whole[o];
+      acc[1] += whole[o + 1] + dx * whole[o];
+      acc[2] += whole[o + 2] + dy * whole[o];
+      acc[3] += whole[o + 3] + 2 * dx * whole[o + 1] + dx * dx * whole[o];
+      acc[4] += whole[o + 4] + 2 * dy * whole[o + 2] + dy * dy * whole[o];
+      acc[5] += whole[o + 5] + dx * whole[o + 2] + dy * whole[o + 1] + dx * dy * whole[o];
       continue;
     }
-    width += crossedLoop(c, ox, yc, acc, pieces);
+    width += crossedLoop(plan.loop(k), ox, yc, acc, pieces);
   }
   return { m00: acc[0], m10: acc[1], m01: acc[2], m20: acc[3], m02: acc[4], m11: acc[5], width };
 }
@@ -238,20 +270,11 @@ export function momentsAboveAbout(plan: CutPlan, yc: number, ox: number): HalfPl
 function crossedLoop(c: Contour, ox: number, yc: number, acc: Float64Array, pieces: Piece[]): number {
   const xy = c.xy, bulge = c.bulge;
   const n = xy.length >> 1;
-  let width = 0;
-  let started = false, firstAbove = false, firstX = 0, prevAbove = false;
-  const piece = (above: boolean, x0: number, y0: number, x1: number, y1: number, sweep: number) => {
-    if (!started) {
-      started = true;
-      firstAbove = above;
-      firstX = x0;
-    } else if (above && !prevAbove) width += x0;
-    else if (!above && prevAbove) width -= x0;
-    prevAbove = above;
-    if (!above) return;
-    if (sweep === 0) lineDx(x0, y0, x1, y1, acc);
-    else arcDx(x0, y0, x1, y1, sweep, acc);
-  };
+  walk.width = 0;
+  walk.started = false;
+  walk.firstAbove = false;
+  walk.firstX = 0;
+  walk.prevAbove = false;
   for (let i = 0; i < n; i++) {
     const j = i + 1 === n ? 0 : i + 1;
     const ax = xy[2 * i] - ox, ay = xy[2 * i + 1] - yc, bx = xy[2 * j] - ox, by = xy[2 * j + 1] - yc;
@@ -260,30 +283,52 @@ function crossedLoop(c: Contour, ox: number, yc: number, acc: Float64Array, piec
       // wholly clear of the line is one piece, with no split to compute.
       const h = (Math.hypot(bx - ax, by - ay) / 2) * Math.abs(bulge[i]) * (1 + 1e-12);
       if (Math.abs(bulge[i]) <= 1 && Math.min(ay, by) - h > 0) {
-        piece(true, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
+        piece(acc, true, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
         continue;
       }
       if (Math.abs(bulge[i]) <= 1 && Math.max(ay, by) + h < 0) {
-        piece(false, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
+        piece(acc, false, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
         continue;
       }
       pieces.length = 0;
       splitSegment(c, i, ox, yc, pieces);
-      for (const p of pieces) piece(p.above, p.x0, p.y0, p.x1, p.y1, p.sweep);
+      for (const p of pieces) piece(acc, p.above, p.x0, p.y0, p.x1, p.y1, p.sweep);
       continue;
     }
     if (ay * by < 0) {
       const xm = ax + (-ay / (by - ay)) * (bx - ax);
-      piece(ay > 0, ax, ay, xm, 0, 0);
-      piece(by > 0, xm, 0, bx, by, 0);
-    } else piece(ay + by > 0, ax, ay, bx, by, 0);
+      piece(acc, ay > 0, ax, ay, xm, 0, 0);
+      piece(acc, by > 0, xm, 0, bx, by, 0);
+    } else piece(acc, ay + by > 0, ax, ay, bx, by, 0);
   }
   // The first piece's own transition, against the last piece.
-  if (started) {
-    if (firstAbove && !prevAbove) width += firstX;
-    else if (!firstAbove && prevAbove) width -= firstX;
+  let width = walk.width;
+  if (walk.started) {
+    if (walk.firstAbove && !walk.prevAbove) width += walk.firstX;
+    else if (!walk.firstAbove && walk.prevAbove) width -= walk.firstX;
   }
   return width;
+}
+
+/**
+ * The walk along one crossed loop: the width so far and the side of the previous piece. One
+ * shared record (a loop is walked to its end before the next starts) rather than a closure per
+ * loop, since a plastic axis costs a few dozen cuts.
+ */
+const walk = { width: 0, started: false, firstAbove: false, firstX: 0, prevAbove: false };
+
+/** One piece of a crossed loop: the width where the boundary enters or leaves, and its moments when above. */
+function piece(acc: Float64Array, above: boolean, x0: number, y0: number, x1: number, y1: number, sweep: number): void {
+  if (!walk.started) {
+    walk.started = true;
+    walk.firstAbove = above;
+    walk.firstX = x0;
+  } else if (above && !walk.prevAbove) walk.width += x0;
+  else if (!above && walk.prevAbove) walk.width -= x0;
+  walk.prevAbove = above;
+  if (!above) return;
+  if (sweep === 0) lineDx(x0, y0, x1, y1, acc);
+  else arcDx(x0, y0, x1, y1, sweep, acc);
 }
 
 /**

@@ -12,7 +12,7 @@
  * the centroid for centroidal ones) by the parallel-axis theorem in the direction that adds:
  * centroidal moments are never formed as m02 − A·ȳ² of origin moments, which cancels far out.
  */
-import { contourLength, regionBounds, type Bounds, type Contour, type Region } from '../geometry/contour';
+import { contourBounds, contourLength, type Bounds, type Contour, type Region } from '../geometry/contour';
 
 /** Raw moments about the document origin: m00 = A, m10 = ∫x, m01 = ∫y, m20 = ∫x², m02 = ∫y², m11 = ∫xy. */
 export interface RawMoments {
@@ -29,23 +29,20 @@ export const ZERO_MOMENTS: RawMoments = Object.freeze({ m00: 0, m10: 0, m01: 0, 
 /** Vertices per block of the polygon sums (see accumulateContour). */
 const BLOCK = 64;
 
-/** acc[i] += v with a Neumaier compensation term kept in comp[i]. */
-function addCompensated(acc: Float64Array, comp: Float64Array, i: number, v: number): void {
-  const s = acc[i], t = s + v;
-  comp[i] += Math.abs(s) >= Math.abs(v) ? s - t + v : v - t + s;
-  acc[i] = t;
-}
-
 /**
  * Moments about (ox, oy) accumulated into acc (a 6-slot array: A, ∫x, ∫y, ∫x², ∫y², ∫xy).
  * The straight part is summed in blocks of BLOCK vertices whose sums are added with a
- * compensation term, so a dense outline (2e5 vertices) does not lose 1e-12 to the running sum.
+ * Neumaier compensation term, so a dense outline (2e5 vertices) does not lose 1e-12 to the
+ * running sum. The six totals and their compensations are plain locals: this runs once per
+ * loop of every evaluation (thousands of holes), where two small arrays per call were a
+ * measurable share of the garbage collector's work.
  */
 function accumulateContour(c: Contour, ox: number, oy: number, acc: Float64Array): void {
   const xy = c.xy;
   const n = xy.length >> 1;
   if (n < 2) return;
-  const tot = new Float64Array(6), comp = new Float64Array(6);
+  let t0 = 0, t1 = 0, t2 = 0, t3 = 0, t4 = 0, t5 = 0;
+  let c0 = 0, c1 = 0, c2 = 0, c3 = 0, c4 = 0, c5 = 0;
   let x0 = xy[2 * n - 2] - ox, y0 = xy[2 * n - 1] - oy;
   for (let k = 0; k < 2 * n; ) {
     const end = Math.min(2 * n, k + 2 * BLOCK);
@@ -64,19 +61,32 @@ function accumulateContour(c: Contour, ox: number, oy: number, acc: Float64Array
       x0 = x1;
       y0 = y1;
     }
-    addCompensated(tot, comp, 0, a);
-    addCompensated(tot, comp, 1, sx);
-    addCompensated(tot, comp, 2, sy);
-    addCompensated(tot, comp, 3, sxx);
-    addCompensated(tot, comp, 4, syy);
-    addCompensated(tot, comp, 5, sxy);
+    // Neumaier: t += v, with the rounding error of each addition kept in c.
+    let t = t0 + a;
+    c0 += Math.abs(t0) >= Math.abs(a) ? t0 - t + a : a - t + t0;
+    t0 = t;
+    t = t1 + sx;
+    c1 += Math.abs(t1) >= Math.abs(sx) ? t1 - t + sx : sx - t + t1;
+    t1 = t;
+    t = t2 + sy;
+    c2 += Math.abs(t2) >= Math.abs(sy) ? t2 - t + sy : sy - t + t2;
+    t2 = t;
+    t = t3 + sxx;
+    c3 += Math.abs(t3) >= Math.abs(sxx) ? t3 - t + sxx : sxx - t + t3;
+    t3 = t;
+    t = t4 + syy;
+    c4 += Math.abs(t4) >= Math.abs(syy) ? t4 - t + syy : syy - t + t4;
+    t4 = t;
+    t = t5 + sxy;
+    c5 += Math.abs(t5) >= Math.abs(sxy) ? t5 - t + sxy : sxy - t + t5;
+    t5 = t;
   }
-  acc[0] += (tot[0] + comp[0]) / 2;
-  acc[1] += (tot[1] + comp[1]) / 6;
-  acc[2] += (tot[2] + comp[2]) / 6;
-  acc[3] += (tot[3] + comp[3]) / 12;
-  acc[4] += (tot[4] + comp[4]) / 12;
-  acc[5] += (tot[5] + comp[5]) / 24;
+  acc[0] += (t0 + c0) / 2;
+  acc[1] += (t1 + c1) / 6;
+  acc[2] += (t2 + c2) / 6;
+  acc[3] += (t3 + c3) / 12;
+  acc[4] += (t4 + c4) / 12;
+  acc[5] += (t5 + c5) / 24;
   const bulge = c.bulge;
   if (!bulge) return;
   for (let i = 0; i < n; i++) {
@@ -280,18 +290,43 @@ export interface CentralMoments {
  * summary is kept by the contour's identity: in a drag frame of a plate with thousands of holes,
  * only the loops that moved are integrated again.
  */
-export interface ContourSummary {
+export class ContourSummary {
+  /**
+   * All the numbers in one array (a plate with thousands of holes keeps one summary per hole):
+   * 0–5 the sums about the first vertex, 6–11 about (gx, gy), then xmin, xmax, ymin, ymax, gx,
+   * gy and the length.
+   */
+  constructor(readonly v: Float64Array) {}
   /** A, ∫x, ∫y, ∫x², ∫y², ∫xy about the first vertex (xy[0], xy[1]). */
-  readonly first: Float64Array;
+  get first(): Float64Array {
+    return this.v.subarray(0, 6);
+  }
+  /** The same sums about (gx, gy). */
+  get central(): Float64Array {
+    return this.v.subarray(6, 12);
+  }
+  get xmin(): number {
+    return this.v[12];
+  }
+  get xmax(): number {
+    return this.v[13];
+  }
+  get ymin(): number {
+    return this.v[14];
+  }
+  get ymax(): number {
+    return this.v[15];
+  }
   /** The point the second set of sums is taken about: the centroid, or the first vertex. */
-  readonly gx: number;
-  readonly gy: number;
-  readonly central: Float64Array;
-  readonly xmin: number;
-  readonly xmax: number;
-  readonly ymin: number;
-  readonly ymax: number;
-  readonly length: number;
+  get gx(): number {
+    return this.v[16];
+  }
+  get gy(): number {
+    return this.v[17];
+  }
+  get length(): number {
+    return this.v[18];
+  }
 }
 
 const SUMMARIES = new WeakMap<Contour, ContourSummary>();
@@ -303,7 +338,7 @@ export function contourBox(c: Contour): Bounds | null {
   if (s) return s;
   const hit = BOXES.get(c);
   if (hit) return hit;
-  const b = regionBounds([c]);
+  const b = contourBounds(c);
   if (b) BOXES.set(c, b);
   return b;
 }
@@ -327,22 +362,35 @@ export function contourSummary(c: Contour): ContourSummary {
   if (hit) return hit;
   const xy = c.xy, n = xy.length >> 1;
   const x0 = n ? xy[0] : 0, y0 = n ? xy[1] : 0;
-  const first = contourAbout(c, x0, y0);
-  const b = contourBox(c) ?? { xmin: x0, xmax: x0, ymin: y0, ymax: y0 };
+  const v = new Float64Array(19);
+  accumulateContour(c, x0, y0, v);
+  // The box kept for this contour, if any; else computed here and kept in the summary only.
+  const b = BOXES.get(c) ?? contourBounds(c) ?? { xmin: x0, xmax: x0, ymin: y0, ymax: y0 };
   let gx = x0, gy = y0;
-  const a = first[0];
+  const a = v[0];
   if (a !== 0 && Number.isFinite(a)) {
     // The loop's centroid, unless it lies outside the loop's box widened by its size (a loop
     // whose signed area nearly cancels): then the first vertex stays the better reference.
-    const cx = x0 + first[1] / a, cy = y0 + first[2] / a;
+    const cx = x0 + v[1] / a, cy = y0 + v[2] / a;
     const pad = Math.max(b.xmax - b.xmin, b.ymax - b.ymin);
     if (cx >= b.xmin - pad && cx <= b.xmax + pad && cy >= b.ymin - pad && cy <= b.ymax + pad) {
       gx = cx;
       gy = cy;
     }
   }
-  const central = gx === x0 && gy === y0 ? first : contourAbout(c, gx, gy);
-  const out: ContourSummary = { first, gx, gy, central, ...b, length: contourLength(c) };
+  if (gx === x0 && gy === y0) v.copyWithin(6, 0, 6);
+  else {
+    const central = v.subarray(6, 12);
+    accumulateContour(c, gx, gy, central);
+  }
+  v[12] = b.xmin;
+  v[13] = b.xmax;
+  v[14] = b.ymin;
+  v[15] = b.ymax;
+  v[16] = gx;
+  v[17] = gy;
+  v[18] = contourLength(c);
+  const out = new ContourSummary(v);
   SUMMARIES.set(c, out);
   return out;
 }
@@ -355,32 +403,32 @@ export function contourSummary(c: Contour): ContourSummary {
  * nothing at all, and for several it adds each loop's own A·d², which is the composite itself.
  */
 export function centralMoments(region: Region): CentralMoments {
-  const parts: { gx: number; gy: number; m: Float64Array }[] = [];
+  // Each loop's summary numbers: the sums about (gx, gy) in slots 6–11, gx and gy in 16 and 17.
+  const parts: Float64Array[] = [];
   let big = -1, bigA = -1;
   for (const c of region) {
     if (c.xy.length < 4) continue;
-    const sm = contourSummary(c);
-    const m = sm.central;
-    parts.push({ gx: sm.gx, gy: sm.gy, m });
-    if (Math.abs(m[0]) > bigA) {
-      bigA = Math.abs(m[0]);
+    const v = contourSummary(c).v;
+    parts.push(v);
+    if (Math.abs(v[6]) > bigA) {
+      bigA = Math.abs(v[6]);
       big = parts.length - 1;
     }
   }
   if (big < 0) return { A: 0, refX: 0, refY: 0, dx: 0, dy: 0, Ix: 0, Iy: 0, Ixy: 0 };
   // Reference: the centroid of the largest loop (the outer boundary, as a rule).
-  const refX = parts[big].gx, refY = parts[big].gy;
+  const refX = parts[big][16], refY = parts[big][17];
   let A = 0, sx = 0, sy = 0;
-  for (const p of parts) {
-    A += p.m[0];
-    sx += p.m[0] * (p.gx - refX) + p.m[1];
-    sy += p.m[0] * (p.gy - refY) + p.m[2];
+  for (const v of parts) {
+    A += v[6];
+    sx += v[6] * (v[16] - refX) + v[7];
+    sy += v[6] * (v[17] - refY) + v[8];
   }
   const dx = sx / A, dy = sy / A;
   let Ix = 0, Iy = 0, Ixy = 0;
-  for (const p of parts) {
-    const ex = p.gx - refX - dx, ey = p.gy - refY - dy;
-    const [a, m10, m01, m20, m02, m11] = p.m;
+  for (const v of parts) {
+    const ex = v[16] - refX - dx, ey = v[17] - refY - dy;
+    const a = v[6], m10 = v[7], m01 = v[8], m20 = v[9], m02 = v[10], m11 = v[11];
     Iy += m20 + 2 * ex * m10 + ex * ex * a;
     Ix += m02 + 2 * ey * m01 + ey * ey * a;
     Ixy += m11 + ex * m01 + ey * m10 + ex * ey * a;

@@ -85,7 +85,7 @@ export function inertiaAboutAxis(p: SectionProperties, px: number, py: number, a
 
 /** The region's exact bounds, from its cut plan's per-loop boxes (null when it has no loop). */
 function planBounds(plan: CutPlan): Bounds | null {
-  const n = plan.contours.length;
+  const n = plan.xmin.length;
   if (n === 0) return null;
   let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
   for (let k = 0; k < n; k++) {
