@@ -202,13 +202,6 @@ export function addCircularSegment(ax: number, ay: number, bx: number, by: numbe
   acc[5] += ox * oy * A + ox * my + oy * mx + ux * uy * (Ixx - Iyy);
 }
 
-/** The six sums of one contour about (ox, oy). */
-function contourAbout(c: Contour, ox: number, oy: number): Float64Array {
-  const acc = new Float64Array(6);
-  accumulateContour(c, ox, oy, acc);
-  return acc;
-}
-
 function asMoments(acc: ArrayLike<number>): RawMoments {
   return { m00: acc[0], m10: acc[1], m01: acc[2], m20: acc[3], m02: acc[4], m11: acc[5] };
 }
