@@ -216,8 +216,16 @@ export function regionMomentsAbout(region: Region, ox: number, oy: number): RawM
   for (const c of region) {
     if (c.xy.length < 4) continue;
     const x0 = c.xy[0], y0 = c.xy[1];
-    // The summary's sums about the first vertex, kept by the contour's identity.
-    out = addMoments(out, shiftMoments(asMoments(contourSummary(c).first), x0 - ox, y0 - oy));
+    // The kept summary's sums about the first vertex when there is one; else one pass (a whole
+    // summary is two passes and the length, wasted on a loop asked only for its area).
+    const kept = SUMMARIES.get(c);
+    let first: Float64Array;
+    if (kept) first = kept.first;
+    else {
+      first = new Float64Array(6);
+      accumulateContour(c, x0, y0, first);
+    }
+    out = addMoments(out, shiftMoments(asMoments(first), x0 - ox, y0 - oy));
   }
   return out;
 }
