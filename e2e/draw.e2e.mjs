@@ -190,6 +190,11 @@ export const tests = [
       assert.ok((await page.textContent('[data-error-for="flangeThickness"]')).length > 10, 'a message for an impossible flange');
       close(await prop(page, 'area'), before, 'area unchanged after refused input');
       assert.equal((await docShapes(page))[0].flangeThickness, 10);
+      // Escape gives the stored value back and clears the message (the blur that follows does
+      // not apply the refused text again).
+      await page.press(sel, 'Escape');
+      assert.equal(await page.inputValue(sel), '10');
+      assert.equal(await page.$('[data-error-for="flangeThickness"]'), null, 'no message after Escape');
     },
   },
   {

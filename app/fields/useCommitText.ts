@@ -14,6 +14,9 @@ export function useCommitText(shown: string, commit: (text: string, setText: (t:
   const [text, setText] = useState(shown);
   const [error, setError] = useState<string | null>(null);
   const focused = useRef(false);
+  // Enter and Escape leave the field themselves: the blur that follows must not apply the text
+  // again (its handler still holds the text from before Escape restored it).
+  const left = useRef(false);
   // A change from elsewhere (a drag, undo) replaces the text unless the user is typing here.
   useEffect(() => {
     if (!focused.current) {
@@ -40,15 +43,20 @@ export function useCommitText(shown: string, commit: (text: string, setText: (t:
     onChange: (e: { target: { value: string } }) => setText(e.target.value),
     onBlur: (_e: FocusEvent<HTMLInputElement>) => {
       focused.current = false;
-      apply();
+      if (left.current) left.current = false;
+      else apply();
     },
     onKeyDown: (e: KeyboardEvent<HTMLInputElement>) => {
       e.stopPropagation();
       if (e.key === 'Enter') {
-        if (apply()) e.currentTarget.blur();
+        if (apply()) {
+          left.current = true;
+          e.currentTarget.blur();
+        }
       } else if (e.key === 'Escape') {
         setText(shown);
         setError(null);
+        left.current = true;
         e.currentTarget.blur();
       }
     },
