@@ -6,11 +6,12 @@
  * radius) and every vertex sits on an exact source vertex or an exact analytic intersection.
  * See engine.ts for the pipeline.
  */
-import { contourBounds, type Bounds, type Contour, type Region } from '../geometry/contour';
+import { contourBounds, reverseContour, type Bounds, type Contour, type Region } from '../geometry/contour';
 import { unionBounds } from '../geometry/bounds';
 import Flatbush from 'flatbush';
 import { contourBox } from '../moments/kernel';
 import { runBoolean } from './engine';
+import { RegionSegments } from './region-winding';
 
 export type BoolOp = 'union' | 'difference' | 'intersection';
 
@@ -131,15 +132,30 @@ export function booleanRegions(subject: Region, clips: Region[], op: BoolOp): Re
     const clipsNear = boxFinder(clipBoxes), subjNear = boxFinder(subjBoxes);
     const active: Contour[] = [];
     subject.forEach((c, k) => (clipsNear(subjBoxes[k], -1) ? active.push(c) : kept.push(c)));
-    if (op === 'union') {
-      const busy: Region[] = [];
-      cl.forEach((c, k) => {
-        const alone = !subjNear(clipBoxes[k], -1) && !clipsNear(clipBoxes[k], k);
-        if (alone) kept.push(...c);
-        else busy.push(c);
-      });
-      cl = busy;
-    }
+    // A clip that meets no other clip and no segment of the subject lies inside one face of the
+    // subject, where the subject's winding number is the same everywhere: one exact winding
+    // number at its first point says whether it is in the material. Union adds it when it is
+    // not, difference cuts it out as a hole when it is; either way it never goes to clipper.
+    // (A plate with thousands of clear holes is then linear: no carriers, no grid, no trace.)
+    let faces: RegionSegments | null = null;
+    const busy: Region[] = [];
+    cl.forEach((c, k) => {
+      const b = clipBoxes[k];
+      if (!b || clipsNear(b, k)) return void busy.push(c);
+      if (!subjNear(b, -1)) {
+        // Clear of every subject loop's box: outside the subject (a cut there removes nothing).
+        if (op === 'union') kept.push(...c);
+        return;
+      }
+      faces ??= new RegionSegments(subject);
+      const first = c.find((q) => q.xy.length >= 2);
+      if (faces.hasFlatArc || !first || faces.meets(b.xmin, b.ymin, b.xmax, b.ymax)) return void busy.push(c);
+      const inside = faces.windingAt(first.xy[0], first.xy[1]) > 0;
+      if (op === 'union' && !inside) kept.push(...c);
+      else if (op === 'difference' && inside) for (const q of c) kept.push(reverseContour(q));
+      // Otherwise the clip changes nothing: a union inside the material, a cut outside it.
+    });
+    cl = busy;
     subj = active;
     if (cl.length === 0) return [...kept, ...subj];
     if (subj.length === 0 && op === 'difference') return kept;
