@@ -10,69 +10,72 @@
  * for thousands of points of a region with thousands of loops stays near-linear.
  */
 import Flatbush from 'flatbush';
-import { arcFromChord, type Contour, type Region } from '../geometry/contour';
+import { arcFromChord, type Region } from '../geometry/contour';
 
-interface Seg {
-  ax: number;
-  ay: number;
-  bx: number;
-  by: number;
-  /** Signed sweep (0 for a line), and for an arc its circle. */
-  phi: number;
-  cx: number;
-  cy: number;
-  r: number;
-}
-
-/** The segments of a region and a box around each ([xmin, ymin, xmax, ymax]; an arc's whole circle). */
+/** The segments of a region as flat arrays: each one's ends, and a box around it ([xmin, ymin, xmax, ymax]; an arc's whole circle). */
 export class RegionSegments {
-  readonly segs: Seg[] = [];
-  readonly boxes: Float64Array;
+  /** ax, ay, bx, by of each segment. */
+  private readonly ends: Float64Array;
+  private readonly boxes: Float64Array;
+  readonly length: number;
   /**
    * True when an arc is very flat (radius over 1e4 × its chord): its circle's box is far too big
-   * to tell anything, and its centre too far away to count windings with. Callers then take the
-   * general path.
+   * to tell anything. Callers then take the general path.
    */
-  readonly hasFlatArc: boolean;
+  readonly hasFlatArc: boolean = false;
   private index: Flatbush | null = null;
+  private asked = 0;
   private maxX = -Infinity;
 
   constructor(region: Region) {
-    for (const c of region) addContour(this.segs, c);
-    this.hasFlatArc = this.segs.some((g) => g.phi !== 0 && !(g.r <= 1e4 * Math.hypot(g.bx - g.ax, g.by - g.ay)));
-    this.boxes = new Float64Array(4 * this.segs.length);
-    this.segs.forEach((s, k) => {
-      const b = this.boxes;
-      if (s.phi === 0) {
-        b[4 * k] = Math.min(s.ax, s.bx);
-        b[4 * k + 1] = Math.min(s.ay, s.by);
-        b[4 * k + 2] = Math.max(s.ax, s.bx);
-        b[4 * k + 3] = Math.max(s.ay, s.by);
-      } else {
-        b[4 * k] = s.cx - s.r;
-        b[4 * k + 1] = s.cy - s.r;
-        b[4 * k + 2] = s.cx + s.r;
-        b[4 * k + 3] = s.cy + s.r;
+    let n = 0;
+    for (const c of region) if (c.xy.length >= 4) n += c.xy.length >> 1;
+    this.length = n;
+    const ends = (this.ends = new Float64Array(4 * n));
+    const boxes = (this.boxes = new Float64Array(4 * n));
+    let k = 0;
+    for (const c of region) {
+      const xy = c.xy, m = xy.length >> 1;
+      if (m < 2) continue;
+      for (let i = 0; i < m; i++, k++) {
+        const j = i + 1 === m ? 0 : i + 1;
+        const ax = xy[2 * i], ay = xy[2 * i + 1], bx = xy[2 * j], by = xy[2 * j + 1];
+        ends[4 * k] = ax;
+        ends[4 * k + 1] = ay;
+        ends[4 * k + 2] = bx;
+        ends[4 * k + 3] = by;
+        const b = c.bulge ? c.bulge[i] : 0;
+        if (b === 0) {
+          boxes[4 * k] = Math.min(ax, bx);
+          boxes[4 * k + 1] = Math.min(ay, by);
+          boxes[4 * k + 2] = Math.max(ax, bx);
+          boxes[4 * k + 3] = Math.max(ay, by);
+        } else {
+          const { cx, cy, r } = arcFromChord(ax, ay, bx, by, 4 * Math.atan(b));
+          if (!(r <= 1e4 * Math.hypot(bx - ax, by - ay))) this.hasFlatArc = true;
+          boxes[4 * k] = cx - r;
+          boxes[4 * k + 1] = cy - r;
+          boxes[4 * k + 2] = cx + r;
+          boxes[4 * k + 3] = cy + r;
+        }
+        if (boxes[4 * k + 2] > this.maxX) this.maxX = boxes[4 * k + 2];
       }
-      if (b[4 * k + 2] > this.maxX) this.maxX = b[4 * k + 2];
-    });
+    }
   }
 
-  get length(): number {
-    return this.segs.length;
-  }
-
-  private near(x0: number, y0: number, x1: number, y1: number): Iterable<number> {
-    const n = this.segs.length;
-    if (n <= 32) {
+  /**
+   * The segments whose box meets (x0, y0)–(x1, y1): a scan for the first few questions (one clip
+   * against a large outline costs no index), a flatbush index after that.
+   */
+  private near(x0: number, y0: number, x1: number, y1: number): ArrayLike<number> {
+    const n = this.length, b = this.boxes;
+    if (!this.index && (n <= 32 || ++this.asked <= 16)) {
       const out: number[] = [];
-      const b = this.boxes;
       for (let k = 0; k < n; k++) if (!(b[4 * k] > x1 || b[4 * k + 2] < x0 || b[4 * k + 1] > y1 || b[4 * k + 3] < y0)) out.push(k);
       return out;
     }
     if (!this.index) {
       const idx = new Flatbush(n);
-      const b = this.boxes;
       for (let k = 0; k < n; k++) idx.add(b[4 * k], b[4 * k + 1], b[4 * k + 2], b[4 * k + 3]);
       idx.finish();
       this.index = idx;
@@ -82,8 +85,7 @@ export class RegionSegments {
 
   /** True when some segment's box meets the box (x0, y0)–(x1, y1). */
   meets(x0: number, y0: number, x1: number, y1: number): boolean {
-    for (const _ of this.near(x0, y0, x1, y1)) return true;
-    return false;
+    return this.near(x0, y0, x1, y1).length > 0;
   }
 
   /**
@@ -92,30 +94,17 @@ export class RegionSegments {
    */
   windingAt(x: number, y: number): number {
     let w = 0;
-    for (const k of this.near(x, y, Math.max(x, this.maxX), y)) w += segmentWinding(this.segs[k], x, y);
+    const near = this.near(x, y, Math.max(x, this.maxX), y), e = this.ends;
+    for (let i = 0; i < near.length; i++) {
+      const k = near[i];
+      w += chordWinding(e[4 * k], e[4 * k + 1], e[4 * k + 2], e[4 * k + 3], x, y);
+    }
     return w;
   }
 }
 
-function addContour(out: Seg[], c: Contour): void {
-  const xy = c.xy, n = xy.length >> 1;
-  if (n < 2) return;
-  for (let i = 0; i < n; i++) {
-    const j = i + 1 === n ? 0 : i + 1;
-    const ax = xy[2 * i], ay = xy[2 * i + 1], bx = xy[2 * j], by = xy[2 * j + 1];
-    const b = c.bulge ? c.bulge[i] : 0;
-    if (b === 0) out.push({ ax, ay, bx, by, phi: 0, cx: 0, cy: 0, r: 0 });
-    else {
-      const phi = 4 * Math.atan(b);
-      const { cx, cy, r } = arcFromChord(ax, ay, bx, by, phi);
-      out.push({ ax, ay, bx, by, phi, cx, cy, r });
-    }
-  }
-}
-
 /** One chord's share of the winding number at (x, y): the crossing rule of carriers.ts, windingOf. */
-function segmentWinding(s: Seg, x: number, y: number): number {
-  const { ax, ay, bx, by } = s;
+function chordWinding(ax: number, ay: number, bx: number, by: number, x: number, y: number): number {
   let side = (bx - ax) * (y - ay) - (x - ax) * (by - ay);
   if (side === 0) side = bx !== ax ? bx - ax : ay - by;
   if (ay <= y) return by > y && side > 0 ? 1 : 0;
