@@ -32,7 +32,18 @@ describe('snap crossings through the spatial index', () => {
             for (const a of segs[i]) for (const b of segs[j]) for (const [x, y] of segmentIntersections(a, b)) want.push(key(x, y));
         expect(got).toEqual(want.sort());
       }),
-      { numRuns: 200 },
+      { numRuns: 1000 },
     );
+  });
+
+  it('finds a circle grazing an edge a rounding error outside its box (regression, seed 581386360)', () => {
+    const shapes = [
+      { id: 'a', type: 'rectangle', at: [-37, -50], width: 2, height: 19 },
+      { id: 'b', type: 'circle', center: [-36, 2], radius: 33 },
+    ] as Shape[];
+    const doc: SectionDocument = { format: 'kern-section', version: 2, units: 'mm', shapes };
+    const hits = snapPoints(createEvaluator().shapes(doc), true).filter((p) => p.kind === 'intersection');
+    // The circle's lowest point (−36, 2 − 33) touches the rectangle's top edge y = −31.
+    expect(hits.some((p) => Math.abs(p.x + 36) < 1e-9 && Math.abs(p.y + 31) < 1e-9)).toBe(true);
   });
 });

@@ -126,17 +126,22 @@ export function snapPoints(shapes: readonly ShapeResult[], intersections: boolea
   if (intersections && total > 0) {
     const shapeOf = new Int32Array(total), segOf = new Int32Array(total);
     const index = new Flatbush(total);
+    // Boxes widened by more than the tangency tolerance of segmentIntersections (1e-9 of a
+    // segment's size): a circle that grazes an edge meets it a rounding error outside its box.
+    const padded = new Float64Array(4 * total);
     own.forEach((o, i) =>
       o.boxes.forEach((b, k) => {
-        const id = index.add(b[0], b[1], b[2], b[3]);
+        const pad = 1e-8 * Math.max(b[2] - b[0], b[3] - b[1]);
+        const id = index.add(b[0] - pad, b[1] - pad, b[2] + pad, b[3] + pad);
+        padded.set([b[0] - pad, b[1] - pad, b[2] + pad, b[3] + pad], 4 * id);
         shapeOf[id] = i;
         segOf[id] = k;
       }),
     );
     index.finish();
     for (let id = 0; id < total; id++) {
-      const i = shapeOf[id], a = own[i].boxes[segOf[id]];
-      for (const other of index.search(a[0], a[1], a[2], a[3])) {
+      const i = shapeOf[id];
+      for (const other of index.search(padded[4 * id], padded[4 * id + 1], padded[4 * id + 2], padded[4 * id + 3])) {
         const j = shapeOf[other];
         // Each pair of shapes once, the earlier shape naming the point.
         if (j <= i) continue;
