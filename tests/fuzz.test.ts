@@ -93,8 +93,10 @@ describe('fuzzed documents', () => {
         valid++;
         expectFiniteEvaluation(r.doc);
       }),
-      { numRuns: 400 },
+      { numRuns: 600 },
     );
-    expect(valid).toBeGreaterThan(50);
+    // About 16 % of the generated documents are valid (54 to 73 of 400 in 12 runs); 60 of 600
+    // is more than four standard deviations below that mean, so only a broken generator fails.
+    expect(valid).toBeGreaterThan(60);
   });
 });
