@@ -9,19 +9,12 @@ import { existsSync } from 'node:fs';
 import { booleanRegions } from '../src/boolean';
 import { contourFrom, type Region } from '../src/geometry/contour';
 import { polygonMoments } from '../src/moments/kernel';
-import { createEvaluator, evaluateDocument } from '../src';
+import { evaluateDocument } from '../src';
 import { computeRegionTorsion } from '../src/torsion';
 import { fiftyShapeDocument } from './doc50';
+import { dragEvalFrames, median } from './measure';
 import { scaleBenchmarks } from './scale';
 
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)];
-}
-function p95(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.min(s.length - 1, Math.floor(0.95 * s.length))];
-}
 
 /** Median time (ms) of fn over enough repetitions to pass `minMs`, after a warm-up. */
 function time(fn: () => void, minMs = 200, minReps = 5): number {
@@ -108,21 +101,13 @@ result.doc50_eval_ms = +time(() => {
   sink += evaluateDocument(doc).props?.area ?? 0;
 }, 1000).toFixed(3);
 {
-  const ev = createEvaluator();
-  ev.evaluate(doc);
-  const frames: number[] = [];
-  const idx = doc.shapes.findIndex((s) => s.id === 'i3');
-  for (let f = 0; f < 240; f++) {
-    const moved = doc.shapes.slice();
-    const s = moved[idx];
+  const d = dragEvalFrames(doc, 'i3', (s, f) => {
     if (s.type !== 'i-beam') throw new Error('benchmark document changed');
-    moved[idx] = { ...s, at: [s.at[0] + 40 * Math.sin(f / 20), s.at[1] + 5 * Math.cos(f / 30)] };
-    const t = performance.now();
-    sink += ev.evaluate({ ...doc, shapes: moved }).props?.area ?? 0;
-    frames.push(performance.now() - t);
-  }
-  result.doc50_drag_eval_median_ms = +median(frames.slice(20)).toFixed(3);
-  result.doc50_drag_eval_p95_ms = +p95(frames.slice(20)).toFixed(3);
+    return { ...s, at: [s.at[0] + 40 * Math.sin(f / 20), s.at[1] + 5 * Math.cos(f / 30)] };
+  });
+  sink += d.sink;
+  result.doc50_drag_eval_median_ms = +d.median.toFixed(3);
+  result.doc50_drag_eval_p95_ms = +d.p95.toFixed(3);
 }
 console.log(`doc50: cold ${result.doc50_eval_ms} ms, drag frame median ${result.doc50_drag_eval_median_ms} ms, p95 ${result.doc50_drag_eval_p95_ms} ms`);
 

@@ -11,7 +11,8 @@
  */
 import { booleanRegions } from '../src/boolean';
 import { contourFrom, type Region } from '../src/geometry/contour';
-import { createEvaluator, evaluateDocument, type SectionDocument, type Shape } from '../src';
+import { evaluateDocument, type SectionDocument, type Shape } from '../src';
+import { dragEvalFrames } from './measure';
 
 // polygon-clipping reads its queue limits when it loads: raise them first (2e5-vertex inputs
 // exceed the default of 1e6 queued events on self-overlapping input).
@@ -80,16 +81,6 @@ function bestOfRounds(fns: (() => void)[], rounds: number, warmup = 1): number[]
   return best;
 }
 
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)];
-}
-
-function p95(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.min(s.length - 1, Math.floor(0.95 * s.length))];
-}
-
 let sink = 0;
 
 export function scaleBenchmarks(result: Record<string, number | string>): void {
@@ -136,21 +127,13 @@ export function scaleBenchmarks(result: Record<string, number | string>): void {
 
   // 4. Drag frames: one hole of the 400-hole plate moved per frame (engine evaluation only).
   {
-    const ev = createEvaluator();
-    ev.evaluate(doc400);
-    const idx = doc400.shapes.findIndex((s) => s.id === 'h20-5');
-    const frames: number[] = [];
-    for (let f = 0; f < 240; f++) {
-      const moved = doc400.shapes.slice();
-      const s = moved[idx];
+    const d = dragEvalFrames(doc400, 'h20-5', (s, f) => {
       if (s.type !== 'circle') throw new Error('benchmark document changed');
-      moved[idx] = { ...s, center: [s.center[0] + 40 * Math.sin(f / 20), s.center[1] + 30 * Math.cos(f / 30)] };
-      const t = performance.now();
-      sink += ev.evaluate({ ...doc400, shapes: moved }).props?.area ?? 0;
-      frames.push(performance.now() - t);
-    }
-    result.holes400_drag_eval_p95_ms = +p95(frames.slice(20)).toFixed(3);
-    result.holes400_drag_eval_median_ms = +median(frames.slice(20)).toFixed(3);
+      return { ...s, center: [s.center[0] + 40 * Math.sin(f / 20), s.center[1] + 30 * Math.cos(f / 30)] };
+    });
+    sink += d.sink;
+    result.holes400_drag_eval_p95_ms = +d.p95.toFixed(3);
+    result.holes400_drag_eval_median_ms = +d.median.toFixed(3);
     console.log(`400-hole plate drag: p95 ${result.holes400_drag_eval_p95_ms} ms, median ${result.holes400_drag_eval_median_ms} ms per frame`);
   }
   if (sink === 42) console.log('');
