@@ -8,6 +8,7 @@ import { useEffect, useState } from 'react';
 import { REVISION_FIELDS, type RevisionField } from '../ops/checker';
 import { useEditor, useEditorState } from '../context';
 import './checker.css';
+import { Dialog } from './Dialog';
 
 const COLUMN: Record<RevisionField, { head: string; hint: string }> = {
   revision: { head: 'Revision', hint: 'A' },
@@ -110,57 +111,32 @@ export function CheckerDialog() {
   const notes = useEditorState((s) => s.doc.notes) ?? '';
   const checked = useEditorState((s) => s.doc.checked);
   if (!open) return null;
-  const close = () => {
-    // Leaving the dialog saves the field being typed in (its blur runs first).
-    (document.activeElement as HTMLElement | null)?.blur?.();
-    editor.store.setState({ checkerOpen: false });
-  };
   return (
-    <div
-      className="overlay"
-      style={{ zIndex: 30 }}
-      role="dialog"
-      aria-modal="true"
-      aria-label="Revisions, notes and check"
-      data-testid="checker-dialog"
-      onKeyDown={(e) => {
-        e.stopPropagation();
-        if (e.key === 'Escape') close();
-      }}
-    >
-      <div className="overlay-card ck-card">
-        <div className="overlay-head">
-          <h2>Revisions, notes and check</h2>
-          <div style={{ flex: 1 }} />
-          <button className="btn" data-testid="checker-close" onClick={close}>
-            Done
+    <Dialog title="Revisions, notes and check" testId="checker-dialog" closeTestId="checker-close" cardClass="ck-card" onClose={() => editor.store.setState({ checkerOpen: false })}>
+      <div className="ck-body">
+        <h3 className="ck-h">Revision history</h3>
+        <RevisionTable />
+        <div>
+          <button className="btn" data-command="doc.addRevision" onClick={() => editor.run('doc.addRevision')}>
+            Add revision
           </button>
         </div>
-        <div className="ck-body">
-          <h3 className="ck-h">Revision history</h3>
-          <RevisionTable />
-          <div>
-            <button className="btn" data-command="doc.addRevision" onClick={() => editor.run('doc.addRevision')}>
-              Add revision
-            </button>
-          </div>
-          <h3 className="ck-h">
-            <label htmlFor="checker-notes">Notes</label>
-          </h3>
-          <CommittedText stored={notes} save={(v) => editor.run('doc.setNotes', v)} multiline attrs={{ id: 'checker-notes', 'data-checker-field': 'notes', placeholder: 'Assumptions, open points, references…' }} />
-          <h3 className="ck-h">Check</h3>
-          <div className="ck-signoff">
-            <label htmlFor="checker-by">Checked by</label>
-            <CommittedText stored={checked?.by ?? ''} save={(value) => editor.run('doc.setChecked', { field: 'by', value })} attrs={{ id: 'checker-by', 'data-checker-field': 'checked-by', placeholder: 'Name' }} />
-            <label htmlFor="checker-date">Date</label>
-            <CommittedText stored={checked?.date ?? ''} save={(value) => editor.run('doc.setChecked', { field: 'date', value })} attrs={{ id: 'checker-date', 'data-checker-field': 'checked-date', placeholder: '2026-12-02' }} />
-          </div>
-          <p className="ck-muted">
-            Kept in the section document and printed in the report beside the figure; the latest revision and the checker also fill the title block. Each change is one step of undo. The
-            signature is left for the checker's hand.
-          </p>
+        <h3 className="ck-h">
+          <label htmlFor="checker-notes">Notes</label>
+        </h3>
+        <CommittedText stored={notes} save={(v) => editor.run('doc.setNotes', v)} multiline attrs={{ id: 'checker-notes', 'data-checker-field': 'notes', placeholder: 'Assumptions, open points, references…' }} />
+        <h3 className="ck-h">Check</h3>
+        <div className="ck-signoff">
+          <label htmlFor="checker-by">Checked by</label>
+          <CommittedText stored={checked?.by ?? ''} save={(value) => editor.run('doc.setChecked', { field: 'by', value })} attrs={{ id: 'checker-by', 'data-checker-field': 'checked-by', placeholder: 'Name' }} />
+          <label htmlFor="checker-date">Date</label>
+          <CommittedText stored={checked?.date ?? ''} save={(value) => editor.run('doc.setChecked', { field: 'date', value })} attrs={{ id: 'checker-date', 'data-checker-field': 'checked-date', placeholder: '2026-12-02' }} />
         </div>
+        <p className="ck-muted">
+          Kept in the section document and printed in the report beside the figure; the latest revision and the checker also fill the title block. Each change is one step of undo. The
+          signature is left for the checker's hand.
+        </p>
       </div>
-    </div>
+    </Dialog>
   );
 }

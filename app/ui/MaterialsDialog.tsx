@@ -13,6 +13,7 @@ import { materialsUi } from '../materials/state';
 import { addLibraryMaterial, addMaterial, removeMaterial, setReference, setStressUnit, updateMaterial, type MaterialFields } from '../ops/materials';
 import { materialColours } from '../paint/materials';
 import '../materials/materials.css';
+import { Dialog } from './Dialog';
 
 function MaterialRow({ m, colour, isReference, unit }: { m: Material; colour: string; isReference: boolean; unit: string }) {
   const editor = useEditor();
@@ -151,81 +152,57 @@ export function MaterialsDialog() {
   const unit = useEditorState((s) => s.doc.stressUnit ?? 'MPa');
   const [unitProblem, setUnitProblem] = useState<string | null>(null);
   if (!open) return null;
-  const close = () => {
-    (document.activeElement as HTMLElement | null)?.blur?.();
-    materialsUi(editor.store).setState({ dialogOpen: false });
-  };
   const colours = materialColours(materials);
   return (
-    <div
-      className="overlay xc-side"
-      style={{ zIndex: 30 }}
-      role="dialog"
-      aria-modal="true"
-      aria-label="Materials"
-      data-testid="materials-dialog"
-      onKeyDown={(e) => {
-        e.stopPropagation();
-        if (e.key === 'Escape') close();
-      }}
-    >
-      <div className="overlay-card xc-card mat-card">
-        <div className="overlay-head">
-          <h2>Materials</h2>
-          <div style={{ flex: 1 }} />
-          <button className="btn" data-testid="materials-close" onClick={close}>
-            Done
-          </button>
+    <Dialog title="Materials" testId="materials-dialog" closeTestId="materials-close" cardClass="xc-card mat-card" overlayClass="xc-side" onClose={() => materialsUi(editor.store).setState({ dialogOpen: false })}>
+      <div className="xc-body">
+        <div className="mat-units">
+          <label>
+            E and fy in{' '}
+            <select data-testid="stress-unit" value={unit} onChange={(e) => setUnitProblem(setStressUnit(editor.ctx, e.target.value as StressUnit))}>
+              {STRESS_UNITS.map((u) => (
+                <option key={u} value={u}>
+                  {u}
+                </option>
+              ))}
+            </select>
+          </label>
+          <span className="xc-muted">density in kg/m³. Changing the unit converts E and fy; stresses are shown in it too.</span>
         </div>
-        <div className="xc-body">
-          <div className="mat-units">
-            <label>
-              E and fy in{' '}
-              <select data-testid="stress-unit" value={unit} onChange={(e) => setUnitProblem(setStressUnit(editor.ctx, e.target.value as StressUnit))}>
-                {STRESS_UNITS.map((u) => (
-                  <option key={u} value={u}>
-                    {u}
-                  </option>
-                ))}
-              </select>
-            </label>
-            <span className="xc-muted">density in kg/m³. Changing the unit converts E and fy; stresses are shown in it too.</span>
-          </div>
-          {unitProblem && <p className="field-error">{unitProblem}</p>}
-          {materials?.length ? (
-            <table className="mat-table" data-testid="materials-table">
-              <thead>
-                <tr>
-                  <th title="Reference material: n = E / E_ref = 1; the transformed section is expressed in it">Ref.</th>
-                  <th />
-                  <th>Name</th>
-                  <th>E ({unit})</th>
-                  <th>fy ({unit})</th>
-                  <th>Density (kg/m³)</th>
-                  <th>ν</th>
-                  <th />
-                </tr>
-              </thead>
-              <tbody>
-                {materials.map((m) => (
-                  <MaterialRow key={m.id} m={m} colour={colours.get(m.id)!} isReference={m.id === reference} unit={unit} />
-                ))}
-              </tbody>
-            </table>
-          ) : (
-            <p className="hint">No materials: the section is one material and has geometric properties only. Add materials to get the centre of gravity, the mass per length and the transformed section. The first one added becomes the reference; shapes with no material of their own take the reference.</p>
-          )}
-          <p className="xc-muted">
-            fy is the strength the plastic moment uses (the yield or proof stress of a metal, the bending strength of timber and glass, the compressive strength of concrete). Give each shape its material in the
-            selection panel; where shapes overlap, the later one's material counts.
-          </p>
-          <LibraryAdd unit={unit} />
-          <HandAdd unit={unit} />
-          <p className="mat-caution">
-            {TRANSFORMED_CAUTION} {PLASTIC_CAUTION} Library values are starting points for a sketch, not design values. {CODE_DEFERRAL}
-          </p>
-        </div>
+        {unitProblem && <p className="field-error">{unitProblem}</p>}
+        {materials?.length ? (
+          <table className="mat-table" data-testid="materials-table">
+            <thead>
+              <tr>
+                <th title="Reference material: n = E / E_ref = 1; the transformed section is expressed in it">Ref.</th>
+                <th />
+                <th>Name</th>
+                <th>E ({unit})</th>
+                <th>fy ({unit})</th>
+                <th>Density (kg/m³)</th>
+                <th>ν</th>
+                <th />
+              </tr>
+            </thead>
+            <tbody>
+              {materials.map((m) => (
+                <MaterialRow key={m.id} m={m} colour={colours.get(m.id)!} isReference={m.id === reference} unit={unit} />
+              ))}
+            </tbody>
+          </table>
+        ) : (
+          <p className="hint">No materials: the section is one material and has geometric properties only. Add materials to get the centre of gravity, the mass per length and the transformed section. The first one added becomes the reference; shapes with no material of their own take the reference.</p>
+        )}
+        <p className="xc-muted">
+          fy is the strength the plastic moment uses (the yield or proof stress of a metal, the bending strength of timber and glass, the compressive strength of concrete). Give each shape its material in the
+          selection panel; where shapes overlap, the later one's material counts.
+        </p>
+        <LibraryAdd unit={unit} />
+        <HandAdd unit={unit} />
+        <p className="mat-caution">
+          {TRANSFORMED_CAUTION} {PLASTIC_CAUTION} Library values are starting points for a sketch, not design values. {CODE_DEFERRAL}
+        </p>
       </div>
-    </div>
+    </Dialog>
   );
 }

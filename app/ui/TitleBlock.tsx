@@ -9,6 +9,7 @@ import { exchangeStore } from '../exchange/state';
 import { useEditor, useEditorState } from '../context';
 import { CommandButton } from '../fields/CommandButton';
 import '../exchange/exchange.css';
+import { Dialog } from './Dialog';
 
 const LABEL: Record<TitleField, string> = {
   name: 'Name',
@@ -62,49 +63,21 @@ export function TitleBlockDialog() {
   const open = useExchange((s) => s.titleOpen);
   const units = useEditorState((s) => s.doc.units);
   if (!open) return null;
-  const close = () => {
-    // Leaving the dialog saves the field being typed in (its blur runs first).
-    (document.activeElement as HTMLElement | null)?.blur?.();
-    exchangeStore(editor.store).setState({ titleOpen: false });
-  };
   return (
-    <div
-      className="overlay"
-      style={{ zIndex: 30 }}
-      role="dialog"
-      aria-modal="true"
-      aria-label="Title block"
-      data-testid="title-dialog"
-      ref={(el) => {
-        if (el && !el.contains(document.activeElement)) el.querySelector('input')?.focus();
-      }}
-      onKeyDown={(e) => {
-        e.stopPropagation();
-        if (e.key === 'Escape') close();
-      }}
-    >
-      <div className="overlay-card xc-card">
-        <div className="overlay-head">
-          <h2>Title block</h2>
-          <div style={{ flex: 1 }} />
-          <button className="btn" data-testid="title-close" onClick={close}>
-            Done
-          </button>
+    <Dialog title="Title block" testId="title-dialog" closeTestId="title-close" cardClass="xc-card" focusInput onClose={() => exchangeStore(editor.store).setState({ titleOpen: false })}>
+      <div className="xc-body">
+        <div className="xc-title-grid">
+          {TITLE_FIELDS.map((f) => (
+            <TitleInput key={f} field={f} />
+          ))}
+          <span>Units</span>
+          <span className="xc-muted">{units} (change them in the results panel)</span>
         </div>
-        <div className="xc-body">
-          <div className="xc-title-grid">
-            {TITLE_FIELDS.map((f) => (
-              <TitleInput key={f} field={f} />
-            ))}
-            <span>Units</span>
-            <span className="xc-muted">{units} (change them in the results panel)</span>
-          </div>
-          <p className="xc-muted">Kept in the section document and printed in the report. Each change is one step of undo.</p>
-          <div>
-            <CommandButton name="doc.checker">Revision history, notes and check…</CommandButton>
-          </div>
+        <p className="xc-muted">Kept in the section document and printed in the report. Each change is one step of undo.</p>
+        <div>
+          <CommandButton name="doc.checker">Revision history, notes and check…</CommandButton>
         </div>
       </div>
-    </div>
+    </Dialog>
   );
 }
