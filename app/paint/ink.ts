@@ -72,6 +72,17 @@ export function opStyle(op: Op): { line: string; dash: number[]; fill: 'none' | 
   }
 }
 
+/** A ringed cross at (x, y): a circle of radius r and arms reaching `arm` each way, stroked. */
+export function crosshair(ctx: CanvasRenderingContext2D, x: number, y: number, r: number, arm: number): void {
+  ctx.beginPath();
+  ctx.arc(x, y, r, 0, 2 * Math.PI);
+  ctx.moveTo(x - arm, y);
+  ctx.lineTo(x + arm, y);
+  ctx.moveTo(x, y - arm);
+  ctx.lineTo(x, y + arm);
+  ctx.stroke();
+}
+
 /** Text on a pale plate so it reads over hatching and grid. */
 export function label(ctx: CanvasRenderingContext2D, text: string, x: number, y: number, color: string): void {
   ctx.font = '11px ui-sans-serif, system-ui, sans-serif';

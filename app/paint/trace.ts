@@ -43,8 +43,23 @@ export function traceChains(ctx: CanvasRenderingContext2D, chains: readonly Line
   }
 }
 
-/** Add the region's contours to the current path, in screen coordinates. */
-export function traceRegion(ctx: CanvasRenderingContext2D, region: Region, v: ViewTransform): void {
+const pathCache = new WeakMap<Region, { scale: number; ox: number; oy: number; path: Path2D }>();
+
+/**
+ * The region's outline as a Path2D in screen coordinates, kept for the region and view: a layer
+ * that fills the region and strokes it again after painting the shapes traces it once per frame.
+ */
+export function regionPath(region: Region, v: ViewTransform): Path2D {
+  const hit = pathCache.get(region);
+  if (hit && hit.scale === v.scale && hit.ox === v.ox && hit.oy === v.oy) return hit.path;
+  const path = new Path2D();
+  traceRegion(path, region, v);
+  pathCache.set(region, { scale: v.scale, ox: v.ox, oy: v.oy, path });
+  return path;
+}
+
+/** Add the region's contours to the current path (or to a Path2D), in screen coordinates. */
+export function traceRegion(ctx: CanvasRenderingContext2D | Path2D, region: Region, v: ViewTransform): void {
   const polys = regionPolylines(region, 0.35 / v.scale);
   for (const p of polys) {
     const n = p.length >> 1;

@@ -7,7 +7,7 @@
 import type { LineChain, Op, Region, SectionDocument, Shape } from '../../../src';
 import { useEditor, useEditorShallow, useEditorState, useResults } from '../../context';
 import { hatch, INK, opStyle } from '../../paint/ink';
-import { traceChains, traceRegion } from '../../paint/trace';
+import { regionPath, traceChains, traceRegion } from '../../paint/trace';
 import type { ViewTransform } from '../../view';
 import { Paint } from '../PaintNode';
 import { activeSection } from '../../store/section';
@@ -80,14 +80,11 @@ export function ShapesLayer() {
   return (
     <Paint
       paint={(ctx) => {
-        ctx.beginPath();
-        traceRegion(ctx, region, v);
+        const outline = regionPath(region, v);
         ctx.fillStyle = INK.resultFill;
-        ctx.fill('nonzero');
+        ctx.fill(outline, 'nonzero');
         paintCached(ctx, stillPaint, (c) => still.forEach((i) => paintShape(c, shapes[i].region, opOf(i), v, !!shapes[i].error)));
         moving.forEach((i) => paintShape(ctx, shapes[i].region, opOf(i), v, !!shapes[i].error));
-        ctx.beginPath();
-        traceRegion(ctx, region, v);
         ctx.strokeStyle = INK.resultLine;
         // While a shape moves in a large section, the outline is a hairline: without a GPU a
         // 1.6 px stroke with round joins round 4000 holes took about 70 ms a frame, a hairline
@@ -95,7 +92,7 @@ export function ShapesLayer() {
         const light = gestureBase !== null && region.length > LIGHT_OUTLINE_LOOPS;
         ctx.lineWidth = light ? 1 : 1.6;
         ctx.lineJoin = light ? 'miter' : 'round';
-        ctx.stroke();
+        ctx.stroke(outline);
         // Line elements last: a weld along an edge of the section stays visible on that edge.
         shapes.forEach((s) => s.chains && paintLine(ctx, s.chains, v, !!s.error));
       }}

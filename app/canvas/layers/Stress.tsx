@@ -8,7 +8,7 @@ import { formatNumber, stressAt, type LoadCase, type StressPoint } from '../../.
 import { useEditorShallow, useEditorState, useResults } from '../../context';
 import { useLoadCase } from '../../materials/derived';
 import { useMaterialsUi } from '../../materials/hooks';
-import { label } from '../../paint/ink';
+import { crosshair, label } from '../../paint/ink';
 import { STRESS_INK, stressColour } from '../../paint/materials';
 import { traceRegion } from '../../paint/trace';
 import { toScreen, type ViewTransform } from '../../view';
@@ -141,13 +141,7 @@ export function StressMarksLayer() {
           const [x, y] = toScreen(v, probe[0], probe[1]);
           ctx.strokeStyle = STRESS_INK.probe;
           ctx.lineWidth = 1.5;
-          ctx.beginPath();
-          ctx.arc(x, y, 5, 0, 2 * Math.PI);
-          ctx.moveTo(x - 10, y);
-          ctx.lineTo(x + 10, y);
-          ctx.moveTo(x, y - 10);
-          ctx.lineTo(x, y + 10);
-          ctx.stroke();
+          crosshair(ctx, x, y, 5, 10);
           const at = stressAt(lc.field, probe[0], probe[1]);
           const text = at.inside ? at.stresses.map((s) => `σ = ${formatNumber(s.value)} ${unit}${many || at.stresses.length > 1 ? ` (${nameOf(s.material)})` : ''}`).join(', ') : 'outside the section';
           label(ctx, text, x + 12, y - 8, STRESS_INK.probe);

@@ -6,7 +6,7 @@
  */
 import { formatNumber, type LineGroupResult, type WeldResult } from '../../../src';
 import { useEditorShallow, useEditorState, useResults } from '../../context';
-import { label } from '../../paint/ink';
+import { crosshair, label } from '../../paint/ink';
 import { toScreen, type ViewTransform } from '../../view';
 import { Paint } from '../PaintNode';
 
@@ -32,13 +32,7 @@ function paintCentroid(ctx: CanvasRenderingContext2D, g: LineGroupResult, v: Vie
   const [x, y] = toScreen(v, g.props.centroid.x, g.props.centroid.y);
   ctx.strokeStyle = WELD_INK.centroid;
   ctx.lineWidth = 1.2;
-  ctx.beginPath();
-  ctx.arc(x, y, 5, 0, 2 * Math.PI);
-  ctx.moveTo(x - 8, y);
-  ctx.lineTo(x + 8, y);
-  ctx.moveTo(x, y - 8);
-  ctx.lineTo(x, y + 8);
-  ctx.stroke();
+  crosshair(ctx, x, y, 5, 8);
   label(ctx, 'G', x + 8, y + 14, WELD_INK.centroid);
 }
 
