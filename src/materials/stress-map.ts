@@ -10,7 +10,7 @@
  * consumers that want samples (a raster, a probe, a test). Each row is located with the exact
  * crossings of the boundary (locate.ts), so a grid of nx × ny costs O(ny · segments + nx · ny).
  */
-import { regionBounds } from '../geometry/contour';
+import { regionsBounds } from '../geometry/bounds';
 import type { XY } from './mixed';
 import type { StressExtremes } from './extremes';
 import { rowCrossings } from './locate';
@@ -63,18 +63,11 @@ export interface StressGrid {
 /** σ at the centres of an nx × ny grid over the section's bounds. */
 export function sampleStressGrid(f: StressField, nx = 64, ny = 64): StressGrid {
   const cols = Math.max(1, Math.min(4096, Math.floor(nx))), rows = Math.max(1, Math.min(4096, Math.floor(ny)));
-  let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
-  for (const p of f.parts) {
-    const b = regionBounds(p.region);
-    if (!b) continue;
-    xmin = Math.min(xmin, b.xmin);
-    xmax = Math.max(xmax, b.xmax);
-    ymin = Math.min(ymin, b.ymin);
-    ymax = Math.max(ymax, b.ymax);
-  }
+  const box = regionsBounds(f.parts.map((p) => p.region));
   const values = new Float64Array(cols * rows).fill(NaN);
   const part = new Int32Array(cols * rows).fill(-1);
-  if (!(xmax >= xmin)) return { nx: cols, ny: rows, x0: 0, y0: 0, dx: 0, dy: 0, values, part };
+  if (!box) return { nx: cols, ny: rows, x0: 0, y0: 0, dx: 0, dy: 0, values, part };
+  const { xmin, xmax, ymin, ymax } = box;
   const dx = (xmax - xmin) / cols, dy = (ymax - ymin) / rows;
   const x0 = xmin + dx / 2, y0 = ymin + dy / 2;
   for (let j = 0; j < rows; j++) {

@@ -13,6 +13,7 @@
  *    side. Two pieces on the same side of one edge overlap, which is reported.
  */
 import Flatbush from 'flatbush';
+import { regionsBounds } from '../geometry/bounds';
 import { regionBounds, type Region } from '../geometry/contour';
 import { distanceToEdge, edgeParameter, type EdgeShape } from './edge-geometry';
 import { placeText, TorsionError } from './errors';
@@ -58,17 +59,10 @@ export interface Frame {
 }
 
 export function exactBoundary(pieces: readonly PieceInput[], frame?: Frame): ExactBoundary {
-  let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
-  pieces.forEach((p, k) => {
-    checkRegion(p.region, k);
-    const b = regionBounds(p.region);
-    if (!b) return;
-    xmin = Math.min(xmin, b.xmin);
-    xmax = Math.max(xmax, b.xmax);
-    ymin = Math.min(ymin, b.ymin);
-    ymax = Math.max(ymax, b.ymax);
-  });
-  if (!(xmax > xmin && ymax > ymin)) throw new TorsionError('the section is empty or has no area to twist');
+  pieces.forEach((p, k) => checkRegion(p.region, k));
+  const box = regionsBounds(pieces.map((p) => p.region));
+  if (!box || !(box.xmax > box.xmin && box.ymax > box.ymin)) throw new TorsionError('the section is empty or has no area to twist');
+  const { xmin, xmax, ymin, ymax } = box;
   const originX = frame ? frame.originX : (xmin + xmax) / 2, originY = frame ? frame.originY : (ymin + ymax) / 2;
   const size = frame ? frame.size : Math.max(xmax - xmin, ymax - ymin);
   const snap = SNAP_RATIO * size;

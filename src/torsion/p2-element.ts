@@ -29,7 +29,7 @@ export const QUAD_W: readonly number[] = [W1, W1, W1, W2, W2, W2];
 export const NQ = 6;
 
 /** The six node positions as area coordinates (L1, L2, L3). */
-const NODE_L: readonly (readonly [number, number, number])[] = [
+export const NODE_L: readonly (readonly [number, number, number])[] = [
   [1, 0, 0],
   [0, 1, 0],
   [0, 0, 1],

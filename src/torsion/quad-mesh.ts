@@ -14,7 +14,7 @@
  * over as the starting guess of the fine solve.
  */
 import { edgePoint, type EdgeShape } from './edge-geometry';
-import { NQ, QDETA, QDXI, shapeGradients, shapeValues } from './p2-element';
+import { NODE_L, NQ, QDETA, QDXI, shapeGradients, shapeValues } from './p2-element';
 import type { LinearMesh } from './refine';
 import type { Csr } from './sparse-ops';
 
@@ -167,15 +167,6 @@ const CHILD_SIDES: readonly (readonly (readonly [number, 0 | 1] | null)[])[] = [
   [null, [1, 1], [2, 0]],
   [null, null, null],
 ];
-/** Area coordinates of the parent's six nodes. */
-const PARENT_NODE_L: readonly (readonly [number, number, number])[] = [
-  [1, 0, 0],
-  [0, 1, 0],
-  [0, 0, 1],
-  [0.5, 0.5, 0],
-  [0, 0.5, 0.5],
-  [0.5, 0, 0.5],
-];
 
 /** Split every element into four: the mesh of half the element size, and where its nodes lie. */
 export function splitUniformly(c: QuadMesh): { mesh: QuadMesh; prolongation: Prolongation } {
@@ -214,7 +205,7 @@ export function splitUniformly(c: QuadMesh): { mesh: QuadMesh; prolongation: Pro
       for (let s = 0; s < 3; s++) {
         const mid = mesh.elem[6 * f + 3 + s];
         if (parent[mid] >= 0) continue;
-        const p = PARENT_NODE_L[CHILDREN[k][s]], q = PARENT_NODE_L[CHILDREN[k][(s + 1) % 3]];
+        const p = NODE_L[CHILDREN[k][s]], q = NODE_L[CHILDREN[k][(s + 1) % 3]];
         parent[mid] = e;
         L[3 * mid] = (p[0] + q[0]) / 2;
         L[3 * mid + 1] = (p[1] + q[1]) / 2;
