@@ -60,6 +60,11 @@ export const tests = [
       assert.equal(await page.$('[data-prop="cg.y"]'), null);
 
       // Materials from the library; the first added is the reference.
+      // The dialog takes the focus when it opens: Escape closes it at once, and it opens again.
+      await page.click('.topbar [data-command="materials.open"]');
+      await page.waitForSelector('[data-testid="materials-dialog"]');
+      await page.keyboard.press('Escape');
+      assert.equal(await page.$('[data-testid="materials-dialog"]'), null, 'Escape closes the dialog it just opened');
       await page.click('.topbar [data-command="materials.open"]');
       await page.waitForSelector('[data-testid="materials-dialog"]');
       await page.selectOption('[data-testid="library-select"]', 'softwood-c24');

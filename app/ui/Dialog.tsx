@@ -1,6 +1,7 @@
 /**
- * The shell the editor's side dialogs share: a modal overlay that keeps keys to itself, Escape
- * and Done close it, and closing first lets the field being typed in save (its blur runs first).
+ * The shell the editor's side dialogs share: a modal overlay that takes the focus and keeps keys
+ * to itself, Escape and Done close it, and closing first lets the field being typed in save (its
+ * blur runs first).
  */
 import type { ReactNode } from 'react';
 
@@ -13,7 +14,7 @@ export function Dialog(props: {
   /** Extra classes of the overlay and of its card. */
   overlayClass?: string;
   cardClass: string;
-  /** Put the focus in the first input when it opens. */
+  /** Put the focus in the first input when it opens (else on Done). */
   focusInput?: boolean;
   children: ReactNode;
 }) {
@@ -29,13 +30,12 @@ export function Dialog(props: {
       aria-modal="true"
       aria-label={props.title}
       data-testid={props.testId}
-      ref={
-        props.focusInput
-          ? (el) => {
-              if (el && !el.contains(document.activeElement)) el.querySelector('input')?.focus();
-            }
-          : undefined
-      }
+      ref={(el) => {
+        // The dialog takes the focus when it opens (so Escape reaches it): the first input, or Done.
+        if (!el || el.contains(document.activeElement)) return;
+        const target = props.focusInput ? el.querySelector<HTMLElement>('input') : null;
+        (target ?? el.querySelector<HTMLElement>(`[data-testid="${props.closeTestId}"]`))?.focus();
+      }}
       onKeyDown={(e) => {
         e.stopPropagation();
         if (e.key === 'Escape') close();
