@@ -261,6 +261,8 @@ export function createEvaluator(): Evaluator {
       const runs: Run[] = [];
       const elements: { group: string; id: string; chains: LineChain[] }[] = [];
       const layers: { region: Region; op: Op; material: string }[] = [];
+      // Only a document with materials composes them (one record per shape otherwise wasted).
+      const withMaterials = !!doc.materials?.length;
       let areaShapes = 0;
       doc.shapes.forEach((s, idx) => {
         const c = cached(s);
@@ -274,7 +276,7 @@ export function createEvaluator(): Evaluator {
         areaShapes++;
         if (c.error || c.region.length === 0) return;
         const op = s.op ?? 'add';
-        layers.push({ region: c.region, op, material: s.material ?? doc.reference ?? '' });
+        if (withMaterials) layers.push({ region: c.region, op, material: s.material ?? doc.reference ?? '' });
         const last = runs[runs.length - 1];
         if (last && last.op === op && op !== 'intersect') last.inputs.push(c.region);
         else runs.push({ op, inputs: [c.region] });

@@ -3,15 +3,10 @@
  * that every boolean output edge is traced back to, with parameters, distances, exact
  * intersections and the exact point classification used to settle ties.
  */
-import { arcPointAtAngle } from '../geometry/contour';
+import { arcPointAtAngle, lengthOf } from '../geometry/contour';
 
-/**
- * Length of (dx, dy). Math.hypot guards against overflow at 1e154 and is several times slower in
- * V8; boolean coordinates are finite and far below that, and this is on every vertex's path.
- */
-export function hyp(dx: number, dy: number): number {
-  return Math.sqrt(dx * dx + dy * dy);
-}
+/** Length of (dx, dy) (on every vertex's path: see lengthOf). */
+export const hyp = lengthOf;
 
 export const LINE = 0;
 export const ARC = 1;

@@ -6,8 +6,7 @@
  * radius) and every vertex sits on an exact source vertex or an exact analytic intersection.
  * See engine.ts for the pipeline.
  */
-import { contourBounds, reverseContour, type Bounds, type Contour, type Region } from '../geometry/contour';
-import { unionBounds } from '../geometry/bounds';
+import { contourBounds, reverseContour, type Contour, type Region } from '../geometry/contour';
 import Flatbush from 'flatbush';
 import { contourBox } from '../moments/kernel';
 import { runBoolean } from './engine';
@@ -15,17 +14,43 @@ import { RegionSegments } from './region-winding';
 
 export type BoolOp = 'union' | 'difference' | 'intersection';
 
-/** A region's exact bounds (from its contours' boxes, kept by identity across calls) and whether it is clean. */
-interface RegionInfo {
-  box: Bounds | null;
-  clean: boolean;
+/**
+ * Boxes of many regions in one flat array, four numbers each in flatbush's order (xmin, ymin,
+ * xmax, ymax), with xmin = +∞ for a region that has none. A run of thousands of holes asks for
+ * each box several times: flat numbers, not a box object per region and per question, keep the
+ * garbage collector's work in proportion to the holes.
+ */
+class BoxList {
+  readonly v: Float64Array;
+  constructor(readonly length: number) {
+    this.v = new Float64Array(4 * length);
+  }
+  has(k: number): boolean {
+    return this.v[4 * k] <= this.v[4 * k + 2];
+  }
+  /** True when box k and (x0, y0)–(x1, y1) overlap (touching counts). */
+  meets(k: number, x0: number, y0: number, x1: number, y1: number): boolean {
+    const v = this.v, o = 4 * k;
+    return v[o] <= v[o + 2] && !(x0 > v[o + 2] || x1 < v[o] || y0 > v[o + 3] || y1 < v[o + 1]);
+  }
+  /** Every box widened by tol on each side, so that touching boxes count as overlapping. */
+  widen(tol: number): void {
+    const v = this.v;
+    for (let k = 0; k < this.length; k++) {
+      if (!this.has(k)) continue;
+      v[4 * k] -= tol;
+      v[4 * k + 1] -= tol;
+      v[4 * k + 2] += tol;
+      v[4 * k + 3] += tol;
+    }
+  }
 }
 
 /**
- * Bounds and cleanness of a region in one pass over its contours. A clean loop's box is the
- * one kept by identity (contourBox); a loop with unusable numbers is bounded as it is.
+ * The exact bounds of region r into boxes (slot k), and whether it is clean. A clean loop's box
+ * is the one kept by identity (contourBox); a loop with unusable numbers is bounded as it is.
  */
-function regionInfo(r: Region): RegionInfo {
+function boxOf(r: Region, boxes: BoxList, k: number): boolean {
   let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
   let clean = true;
   for (const c of r) {
@@ -39,12 +64,12 @@ function regionInfo(r: Region): RegionInfo {
     if (s.ymin < ymin) ymin = s.ymin;
     if (s.ymax > ymax) ymax = s.ymax;
   }
-  return { box: xmin <= xmax ? { xmin, xmax, ymin, ymax } : null, clean };
-}
-
-function boxesOverlap(ba: Bounds | null, bb: Bounds | null): boolean {
-  if (!ba || !bb) return false;
-  return !(bb.xmin > ba.xmax || bb.xmax < ba.xmin || bb.ymin > ba.ymax || bb.ymax < ba.ymin);
+  const v = boxes.v;
+  v[4 * k] = xmin <= xmax ? xmin : Infinity;
+  v[4 * k + 1] = ymin;
+  v[4 * k + 2] = xmax;
+  v[4 * k + 3] = ymax;
+  return clean;
 }
 
 /** True when every number is finite and every bulge within [-1, 1] (safe to hand back as is). */
@@ -65,38 +90,44 @@ function passThrough(r: Region): Region {
   return isClean(r) ? r.slice() : runBoolean([{ contours: r, group: 0 }], 'union').region;
 }
 
-/** Bounds widened by a tolerance, so that touching boxes count as overlapping. */
-function widened(b: Bounds | null, tol: number): Bounds | null {
-  return b && { xmin: b.xmin - tol, xmax: b.xmax + tol, ymin: b.ymin - tol, ymax: b.ymax + tol };
-}
-function boxesMeet(a: Bounds | null, b: Bounds | null): boolean {
-  return !!a && !!b && !(b.xmin > a.xmax || b.xmax < a.xmin || b.ymin > a.ymax || b.ymax < a.ymin);
-}
-
 /**
- * A test "does box b meet any of these boxes but number `skip`": a scan for a few boxes or a few
- * questions, a flatbush index for many of both (a run of thousands of shapes would otherwise
- * compare every pair). A plate with thousands of holes asks once, for its one outline: one scan
- * costs less than sorting the boxes into an index.
+ * A test "does the box (x0, y0)–(x1, y1) meet any box of the list but number `skip`": a scan for
+ * a few boxes or a few questions, a flatbush index for many of both (a run of thousands of shapes
+ * would otherwise compare every pair). A plate with thousands of holes asks once, for its one
+ * outline: one scan costs less than sorting the boxes into an index.
  */
-function boxFinder(boxes: (Bounds | null)[]): (b: Bounds | null, skip: number) => boolean {
-  const scan = (b: Bounds | null, skip: number) => boxes.some((o, j) => j !== skip && boxesMeet(o, b));
-  if (boxes.length <= 16) return scan;
+type BoxTest = (x0: number, y0: number, x1: number, y1: number, skip: number) => boolean;
+function boxFinder(boxes: BoxList): BoxTest {
+  const n = boxes.length;
+  const scan: BoxTest = (x0, y0, x1, y1, skip) => {
+    for (let j = 0; j < n; j++) if (j !== skip && boxes.meets(j, x0, y0, x1, y1)) return true;
+    return false;
+  };
+  if (n <= 16) return scan;
   let idx: Flatbush | null = null; // built on the ninth question
   let asked = 0;
-  return (b, skip) => {
-    if (!b) return false;
-    if (!idx && ++asked <= 8) return scan(b, skip);
+  let skipping = -1;
+  const keep = (j: number) => j !== skipping && boxes.has(j);
+  return (x0, y0, x1, y1, skip) => {
+    if (!idx && ++asked <= 8) return scan(x0, y0, x1, y1, skip);
     if (!idx) {
-      idx = new Flatbush(boxes.length);
-      for (const o of boxes) {
-        if (o) idx.add(o.xmin, o.ymin, o.xmax, o.ymax);
-        else idx.add(0, 0, 0, 0); // an empty region: filtered out below
+      idx = new Flatbush(n);
+      const v = boxes.v;
+      for (let j = 0; j < n; j++) {
+        if (boxes.has(j)) idx.add(v[4 * j], v[4 * j + 1], v[4 * j + 2], v[4 * j + 3]);
+        else idx.add(0, 0, 0, 0); // an empty region: filtered out by keep
       }
       idx.finish();
     }
-    return idx.collides(b.xmin, b.ymin, b.xmax, b.ymax, (j) => j !== skip && boxes[j] !== null);
+    skipping = skip;
+    return idx.collides(x0, y0, x1, y1, keep);
   };
+}
+
+/** Box k of a list, asked of a box test (false when the region has no box). */
+function asks(test: BoxTest, list: BoxList, k: number, skip: number): boolean {
+  const v = list.v, o = 4 * k;
+  return list.has(k) && test(v[o], v[o + 1], v[o + 2], v[o + 3], skip);
 }
 
 /**
@@ -110,28 +141,49 @@ function boxFinder(boxes: (Bounds | null)[]): (b: Bounds | null, skip: number) =
 export function booleanRegions(subject: Region, clips: Region[], op: BoolOp): Region {
   let cl = clips.filter((c) => c.length > 0);
   // Each clip's bounds and cleanness, found once (a run of thousands of holes asks for each twice).
-  let info = cl.map(regionInfo);
-  const subjInfo = regionInfo(subject);
+  let boxes = new BoxList(cl.length);
+  const cleanClip = new Uint8Array(cl.length);
+  cl.forEach((c, k) => (cleanClip[k] = boxOf(c, boxes, k) ? 1 : 0));
+  let clean = cleanClip.every((f) => f === 1);
+  const subjBox = new BoxList(1);
+  const subjClean = boxOf(subject, subjBox, 0);
   if (op !== 'union') {
     // Clips that cannot touch the subject change nothing.
-    const sb = subjInfo.box;
-    const meets = info.map((f) => boxesOverlap(sb, f.box));
-    cl = cl.filter((_, k) => meets[k]);
-    info = info.filter((_, k) => meets[k]);
+    const sb = subjBox.v;
+    const meets: number[] = [];
+    for (let k = 0; k < cl.length; k++) if (subjBox.has(0) && boxes.meets(k, sb[0], sb[1], sb[2], sb[3])) meets.push(k);
+    if (meets.length < cl.length) {
+      const fewer = new BoxList(meets.length);
+      meets.forEach((k, j) => fewer.v.set(boxes.v.subarray(4 * k, 4 * k + 4), 4 * j));
+      clean = meets.every((k) => cleanClip[k] === 1);
+      cl = meets.map((k) => cl[k]);
+      boxes = fewer;
+    }
     if (cl.length === 0) return op === 'difference' ? passThrough(subject) : [];
     if (subject.length === 0) return [];
   } else if (cl.length === 0) return passThrough(subject);
   const kept: Contour[] = [];
   let subj: Region = subject;
-  if (op !== 'intersection' && subjInfo.clean && info.every((f) => f.clean)) {
-    let all = subjInfo.box;
-    for (const f of info) all = unionBounds(all, f.box);
-    const tol = all ? 1e-9 * Math.max(all.xmax - all.xmin, all.ymax - all.ymin) : 0;
-    const clipBoxes = info.map((f) => widened(f.box, tol));
-    const subjBoxes = subject.map((c) => widened(regionInfo([c]).box, tol));
-    const clipsNear = boxFinder(clipBoxes), subjNear = boxFinder(subjBoxes);
+  if (op !== 'intersection' && subjClean && clean) {
+    let xmin = Infinity, ymin = Infinity, xmax = -Infinity, ymax = -Infinity;
+    for (const list of [subjBox, boxes]) {
+      const v = list.v;
+      for (let k = 0; k < list.length; k++) {
+        if (!list.has(k)) continue;
+        xmin = Math.min(xmin, v[4 * k]);
+        ymin = Math.min(ymin, v[4 * k + 1]);
+        xmax = Math.max(xmax, v[4 * k + 2]);
+        ymax = Math.max(ymax, v[4 * k + 3]);
+      }
+    }
+    const tol = xmin <= xmax ? 1e-9 * Math.max(xmax - xmin, ymax - ymin) : 0;
+    boxes.widen(tol);
+    const subjBoxes = new BoxList(subject.length);
+    subject.forEach((c, k) => boxOf([c], subjBoxes, k));
+    subjBoxes.widen(tol);
+    const clipsNear = boxFinder(boxes), subjNear = boxFinder(subjBoxes);
     const active: Contour[] = [];
-    subject.forEach((c, k) => (clipsNear(subjBoxes[k], -1) ? active.push(c) : kept.push(c)));
+    subject.forEach((c, k) => (asks(clipsNear, subjBoxes, k, -1) ? active.push(c) : kept.push(c)));
     // A clip that meets no other clip and no segment of the subject lies inside one face of the
     // subject, where the subject's winding number is the same everywhere: one exact winding
     // number at its first point says whether it is in the material. Union adds it when it is
@@ -139,22 +191,33 @@ export function booleanRegions(subject: Region, clips: Region[], op: BoolOp): Re
     // (A plate with thousands of clear holes is then linear: no carriers, no grid, no trace.)
     let faces: RegionSegments | null = null;
     const busy: Region[] = [];
-    cl.forEach((c, k) => {
-      const b = clipBoxes[k];
-      if (!b || clipsNear(b, k)) return void busy.push(c);
-      if (!subjNear(b, -1)) {
+    const b = boxes.v;
+    for (let k = 0; k < cl.length; k++) {
+      const c = cl[k];
+      if (!boxes.has(k) || asks(clipsNear, boxes, k, k)) {
+        busy.push(c);
+        continue;
+      }
+      if (!asks(subjNear, boxes, k, -1)) {
         // Clear of every subject loop's box: outside the subject (a cut there removes nothing).
-        if (op === 'union') kept.push(...c);
-        return;
+        if (op === 'union') for (const q of c) kept.push(q);
+        continue;
       }
       faces ??= new RegionSegments(subject);
-      const first = c.find((q) => q.xy.length >= 2);
-      if (faces.hasFlatArc || !first || faces.meets(b.xmin, b.ymin, b.xmax, b.ymax)) return void busy.push(c);
+      let first: Contour | null = null;
+      for (const q of c) if (q.xy.length >= 2) {
+        first = q;
+        break;
+      }
+      if (faces.hasFlatArc || !first || faces.meets(b[4 * k], b[4 * k + 1], b[4 * k + 2], b[4 * k + 3])) {
+        busy.push(c);
+        continue;
+      }
       const inside = faces.windingAt(first.xy[0], first.xy[1]) > 0;
-      if (op === 'union' && !inside) kept.push(...c);
+      if (op === 'union' && !inside) for (const q of c) kept.push(q);
       else if (op === 'difference' && inside) for (const q of c) kept.push(reverseContour(q));
       // Otherwise the clip changes nothing: a union inside the material, a cut outside it.
-    });
+    }
     cl = busy;
     subj = active;
     if (cl.length === 0) return [...kept, ...subj];

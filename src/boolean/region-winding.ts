@@ -10,7 +10,7 @@
  * for thousands of points of a region with thousands of loops stays near-linear.
  */
 import Flatbush from 'flatbush';
-import { arcFromChord, type Region } from '../geometry/contour';
+import { arcFromChord, lengthOf, type Region } from '../geometry/contour';
 
 /** The segments of a region as flat arrays: each one's ends, and a box around it ([xmin, ymin, xmax, ymax]; an arc's whole circle). */
 export class RegionSegments {
@@ -52,7 +52,7 @@ export class RegionSegments {
           boxes[4 * k + 3] = Math.max(ay, by);
         } else {
           const { cx, cy, r } = arcFromChord(ax, ay, bx, by, 4 * Math.atan(b));
-          if (!(r <= 1e4 * Math.hypot(bx - ax, by - ay))) this.hasFlatArc = true;
+          if (!(r <= 1e4 * lengthOf(bx - ax, by - ay))) this.hasFlatArc = true;
           boxes[4 * k] = cx - r;
           boxes[4 * k + 1] = cy - r;
           boxes[4 * k + 2] = cx + r;
@@ -64,42 +64,57 @@ export class RegionSegments {
   }
 
   /**
-   * The segments whose box meets (x0, y0)–(x1, y1): a scan for the first few questions (one clip
-   * against a large outline costs no index), a flatbush index after that.
+   * The flatbush index of the segments' boxes once it pays: never for a few segments, and only
+   * after the first few questions (one clip against a large outline costs no index).
    */
-  private near(x0: number, y0: number, x1: number, y1: number): ArrayLike<number> {
-    const n = this.length, b = this.boxes;
-    if (!this.index && (n <= 32 || ++this.asked <= 16)) {
-      const out: number[] = [];
-      for (let k = 0; k < n; k++) if (!(b[4 * k] > x1 || b[4 * k + 2] < x0 || b[4 * k + 1] > y1 || b[4 * k + 3] < y0)) out.push(k);
-      return out;
-    }
+  private indexed(): Flatbush | null {
+    if (!this.index && (this.length <= 32 || ++this.asked <= 16)) return null;
     if (!this.index) {
+      const n = this.length, b = this.boxes;
       const idx = new Flatbush(n);
       for (let k = 0; k < n; k++) idx.add(b[4 * k], b[4 * k + 1], b[4 * k + 2], b[4 * k + 3]);
       idx.finish();
       this.index = idx;
     }
-    return this.index.search(x0, y0, x1, y1);
+    return this.index;
   }
 
   /** True when some segment's box meets the box (x0, y0)–(x1, y1). */
   meets(x0: number, y0: number, x1: number, y1: number): boolean {
-    return this.near(x0, y0, x1, y1).length > 0;
+    const idx = this.indexed();
+    if (idx) return idx.collides(x0, y0, x1, y1);
+    const b = this.boxes;
+    for (let k = 0; k < this.length; k++) if (!(b[4 * k] > x1 || b[4 * k + 2] < x0 || b[4 * k + 1] > y1 || b[4 * k + 3] < y0)) return true;
+    return false;
   }
+
+  /** The point a winding number is being counted at, and the count so far (see windingAt). */
+  private wx = 0;
+  private wy = 0;
+  private w = 0;
+  /** Adds segment k's crossing to the count; as a search filter it keeps nothing, so no list is built. */
+  private readonly count = (k: number): boolean => {
+    const e = this.ends;
+    this.w += chordWinding(e[4 * k], e[4 * k + 1], e[4 * k + 2], e[4 * k + 3], this.wx, this.wy);
+    return false;
+  };
 
   /**
    * The winding number at (x, y), a point outside every segment's box (see above): only
    * segments whose box reaches the ray to +x can count.
    */
   windingAt(x: number, y: number): number {
-    let w = 0;
-    const near = this.near(x, y, Math.max(x, this.maxX), y), e = this.ends;
-    for (let i = 0; i < near.length; i++) {
-      const k = near[i];
-      w += chordWinding(e[4 * k], e[4 * k + 1], e[4 * k + 2], e[4 * k + 3], x, y);
+    const x1 = Math.max(x, this.maxX);
+    this.wx = x;
+    this.wy = y;
+    this.w = 0;
+    const idx = this.indexed();
+    if (idx) idx.search(x, y, x1, y, this.count);
+    else {
+      const b = this.boxes;
+      for (let k = 0; k < this.length; k++) if (!(b[4 * k] > x1 || b[4 * k + 2] < x || b[4 * k + 1] > y || b[4 * k + 3] < y)) this.count(k);
     }
-    return w;
+    return this.w;
   }
 }
 

@@ -11,6 +11,8 @@
  *   kept by every constructor in this module, which keeps the radius well conditioned.
  * - A region is a list of contours whose signed moments add: an outer boundary runs CCW and a
  *   hole runs CW. Regions produced by the boolean module never overlap themselves.
+ * - Contours are values: nothing writes into a contour's arrays once it is built, so contours may
+ *   share them (every full circle shares one bulge array).
  */
 
 export interface Contour {
@@ -21,6 +23,17 @@ export interface Contour {
 export type Region = readonly Contour[];
 
 export type Vec2 = readonly [number, number];
+
+/**
+ * The length of (dx, dy). Math.hypot's value, but V8 does not inline Math.hypot: each call boxes
+ * its result on the heap, and the moment, bounds and boolean paths call it for every arc of
+ * every loop (a plate with thousands of holes). The square root of the sum of squares is within
+ * an ulp of it; where the squares would leave the double range, Math.hypot itself is used.
+ */
+export function lengthOf(dx: number, dy: number): number {
+  const s = dx * dx + dy * dy;
+  return s < 1e300 && s > 1e-300 ? Math.sqrt(s) : Math.hypot(dx, dy);
+}
 
 /** Build a contour from interleaved vertices and optional per-segment bulges. */
 export function contourFrom(xy: ArrayLike<number>, bulge?: ArrayLike<number> | null): Contour {
@@ -65,7 +78,7 @@ export function segmentArc(c: Contour, i: number): { cx: number; cy: number; r: 
 /** Centre and radius of the arc from a to b with signed sweep phi. */
 export function arcFromChord(ax: number, ay: number, bx: number, by: number, phi: number) {
   const dx = bx - ax, dy = by - ay;
-  const L = Math.hypot(dx, dy);
+  const L = lengthOf(dx, dy);
   const alpha = Math.abs(phi) / 2;
   const r = L / (2 * Math.sin(alpha));
   // Unit vector from the centre towards the arc's midpoint: the chord's right normal for phi > 0.
@@ -85,7 +98,7 @@ export function arcFromChord(ax: number, ay: number, bx: number, by: number, phi
  */
 export function arcFromBulge(ax: number, ay: number, bx: number, by: number, bulge: number) {
   const dx = bx - ax, dy = by - ay;
-  const L = Math.hypot(dx, dy);
+  const L = lengthOf(dx, dy);
   const ab = Math.abs(bulge), b2 = bulge * bulge;
   const r = (L * (1 + b2)) / (4 * ab);
   const d = (L * (1 - b2)) / (4 * ab); // r cos α, negative past a half circle
@@ -99,7 +112,7 @@ export function sweepThrough(ax: number, ay: number, mx: number, my: number, bx:
   // The inscribed-angle theorem: the sweep is twice the angle between the chords at the middle
   // point, measured so that a CCW arc (m to the right of a->b) is positive.
   const cross = (mx - ax) * (by - ay) - (my - ay) * (bx - ax);
-  const scale = Math.hypot(mx - ax, my - ay) * Math.hypot(bx - ax, by - ay);
+  const scale = lengthOf(mx - ax, my - ay) * lengthOf(bx - ax, by - ay);
   if (!(Math.abs(cross) > 1e-12 * scale)) return NaN;
   // Angle a-m-b at m; the arc through m subtends 2*(pi - angle) on the far side.
   const v1x = ax - mx, v1y = ay - my, v2x = bx - mx, v2y = by - my;
@@ -132,8 +145,15 @@ export function pushArc(xy: number[], bulge: number[], ax: number, ay: number, b
 
 /** A full circle as two CCW half-circle arcs starting at angle 0. */
 export function circleContour(cx: number, cy: number, r: number): Contour {
-  return { xy: Float64Array.of(cx + r, cy, cx - r, cy), bulge: Float64Array.of(1, 1) };
+  return { xy: Float64Array.of(cx + r, cy, cx - r, cy), bulge: CIRCLE_CCW };
 }
+/**
+ * The bulges of a full circle, counter-clockwise and clockwise, shared by every circle and every
+ * circular hole: a typed array costs about 200 bytes however short, and a plate with thousands of
+ * holes would otherwise hold thousands of copies of these two numbers.
+ */
+const CIRCLE_CCW = Float64Array.of(1, 1);
+const CIRCLE_CW = Float64Array.of(-1, -1);
 
 /** Polygon contour from points (no arcs). */
 export function polygonContour(points: readonly Vec2[]): Contour {
@@ -154,7 +174,8 @@ export function reverseContour(c: Contour): Contour {
     xy[2 * i + 1] = c.xy[2 * (n - 1 - i) + 1];
   }
   let bulge: Float64Array | null = null;
-  if (c.bulge) {
+  if (c.bulge === CIRCLE_CCW || c.bulge === CIRCLE_CW) bulge = c.bulge === CIRCLE_CCW ? CIRCLE_CW : CIRCLE_CCW;
+  else if (c.bulge) {
     bulge = new Float64Array(n);
     // Old segment k runs v_k -> v_{k+1}; in the reversed loop it runs from new index n-2-k.
     for (let k = 0; k < n; k++) bulge[(2 * n - 2 - k) % n] = -c.bulge[k];
@@ -217,7 +238,7 @@ export interface Bounds {
  * is involved, so arcs of any flatness stay exact.
  */
 export function arcPointAtAngle(ax: number, ay: number, bx: number, by: number, phi: number, theta: number): [number, number] {
-  const L = Math.hypot(bx - ax, by - ay);
+  const L = lengthOf(bx - ax, by - ay);
   if (!(L > 0)) return [ax, ay];
   const h = L / 2, alpha = Math.abs(phi) / 2;
   const sa = Math.sin(alpha);
@@ -238,6 +259,18 @@ export function regionBounds(r: Region): Bounds | null {
   return { xmin: box[0], xmax: box[1], ymin: box[2], ymax: box[3] };
 }
 
+/**
+ * Exact bounds of one contour written into out[at..at + 3] as xmin, xmax, ymin, ymax (xmin > xmax
+ * when it has no vertex), for callers that keep many boxes in one array.
+ */
+export function contourBoundsInto(c: Contour, out: number[], at: number): void {
+  out[at] = Infinity;
+  out[at + 1] = -Infinity;
+  out[at + 2] = Infinity;
+  out[at + 3] = -Infinity;
+  takeContour(c, out, at);
+}
+
 /** Exact bounds of one contour (as regionBounds of [c]), or null when it has no vertex. */
 export function contourBounds(c: Contour): Bounds | null {
   const box = [Infinity, -Infinity, Infinity, -Infinity];
@@ -247,12 +280,12 @@ export function contourBounds(c: Contour): Bounds | null {
 }
 
 /**
- * Widen box [xmin, xmax, ymin, ymax] by the contour's vertices and its arcs' extreme points.
+ * Widen box [xmin, xmax, ymin, ymax] (from slot `at`) by the contour's vertices and its arcs' extreme points.
  * The arc points are arcPointAtAngle's, written out with no array or closure per point: this
  * runs for every loop of every evaluation (a plate with thousands of holes).
  */
-function takeContour(c: Contour, box: number[]): void {
-  let xmin = box[0], xmax = box[1], ymin = box[2], ymax = box[3];
+function takeContour(c: Contour, box: number[], at = 0): void {
+  let xmin = box[at], xmax = box[at + 1], ymin = box[at + 2], ymax = box[at + 3];
   const xy = c.xy, bulge = c.bulge;
   const n = xy.length >> 1;
   for (let i = 0; i < n; i++) {
@@ -265,7 +298,7 @@ function takeContour(c: Contour, box: number[]): void {
     if (b === 0) continue;
     const j = (i + 1) % n;
     const bx = xy[2 * j], by = xy[2 * j + 1];
-    const L = Math.hypot(bx - x, by - y);
+    const L = lengthOf(bx - x, by - y);
     if (!(L > 0)) continue;
     const phi = 4 * Math.atan(b), alpha = Math.abs(phi) / 2;
     const ex = (bx - x) / L, ey = (by - y) / L;
@@ -289,10 +322,10 @@ function takeContour(c: Contour, box: number[]): void {
       }
     }
   }
-  box[0] = xmin;
-  box[1] = xmax;
-  box[2] = ymin;
-  box[3] = ymax;
+  box[at] = xmin;
+  box[at + 1] = xmax;
+  box[at + 2] = ymin;
+  box[at + 3] = ymax;
 }
 const AXIS_X = Float64Array.of(1, 0, -1, 0);
 const AXIS_Y = Float64Array.of(0, 1, 0, -1);
@@ -311,7 +344,7 @@ export function contourLength(c: Contour): number {
   let sum = 0;
   for (let i = 0; i < n; i++) {
     const j = (i + 1) % n;
-    const L = Math.hypot(c.xy[2 * j] - c.xy[2 * i], c.xy[2 * j + 1] - c.xy[2 * i + 1]);
+    const L = lengthOf(c.xy[2 * j] - c.xy[2 * i], c.xy[2 * j + 1] - c.xy[2 * i + 1]);
     const phi = c.bulge ? 4 * Math.atan(c.bulge[i]) : 0;
     const half = Math.abs(phi) / 2;
     // Arc length = L · α / sin α; the series keeps flat arcs finite.
@@ -335,7 +368,7 @@ export function contourPolyline(c: Contour, tol: number): number[] {
     const j = (i + 1) % n;
     const bx = c.xy[2 * j], by = c.xy[2 * j + 1];
     const alpha = Math.abs(phi) / 2;
-    const r = Math.hypot(bx - ax, by - ay) / (2 * Math.sin(alpha));
+    const r = lengthOf(bx - ax, by - ay) / (2 * Math.sin(alpha));
     const maxStep = tol >= r ? Math.PI / 2 : 2 * Math.acos(1 - tol / r);
     const k = Math.min(4096, Math.max(1, Math.ceil(Math.abs(phi) / Math.max(maxStep, 1e-3))));
     for (let s = 1; s < k; s++) {

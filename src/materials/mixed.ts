@@ -25,7 +25,7 @@
  */
 import type { Units } from '../units';
 import type { Bounds, Region } from '../geometry/contour';
-import { centralMoments, regionBox, regionMoments, type RawMoments } from '../moments/kernel';
+import { centralMoments, regionBox, regionMoments, type CentralMoments, type RawMoments } from '../moments/kernel';
 import { principal, SectionError } from '../properties/section';
 import { assertMaterial, MaterialError, type Material } from './material';
 import { massPerLength } from './units';
@@ -110,7 +110,7 @@ function unionBounds(bs: Bounds[]): Bounds {
  */
 export function mixedSection(parts: readonly MaterialPart[], reference: Material, units: Units): MixedSection {
   assertMaterial(reference, `reference material "${reference?.id}"`);
-  const live: { part: MaterialPart; m: RawMoments; bounds: Bounds; c: { A: number; xc: number; yc: number; Ix: number; Iy: number; Ixy: number } }[] = [];
+  const live: { part: MaterialPart; m: RawMoments; bounds: Bounds; cm: CentralMoments; c: { A: number; xc: number; yc: number; Ix: number; Iy: number; Ixy: number } }[] = [];
   for (const part of parts) {
     assertMaterial(part.material);
     const bounds = regionBox(part.region);
@@ -124,7 +124,7 @@ export function mixedSection(parts: readonly MaterialPart[], reference: Material
       continue;
     }
     const c = { A: cm.A, xc: cm.refX + cm.dx, yc: cm.refY + cm.dy, Ix: cm.Ix, Iy: cm.Iy, Ixy: cm.Ixy };
-    live.push({ part, m: regionMoments(part.region), bounds, c });
+    live.push({ part, m: regionMoments(part.region), bounds, cm, c });
   }
   if (live.length === 0) throw new SectionError('The section is empty: it has no area.');
   const Eref = reference.E;
@@ -176,9 +176,13 @@ export function mixedSection(parts: readonly MaterialPart[], reference: Material
   const pr = principal(Ix, Iy, Ixy);
 
   const modulus = (I: number, n: number, c: number) => (c > 0 ? I / (n * c) : null);
+  // Fibre distances through the first part's reference point and the centroid's offset from it,
+  // as sectionProperties takes them: the digits survive far from the origin, and one material
+  // gives its numbers exactly.
+  const { refX, refY, dx: ox, dy: oy } = live[0].cm;
   const partResults: PartResult[] = perPart.map((p) => {
-    const top = p.bounds.ymax - yt, bottom = yt - p.bounds.ymin;
-    const right = p.bounds.xmax - xt, left = xt - p.bounds.xmin;
+    const top = p.bounds.ymax - refY - (oy + dyt), bottom = oy + dyt - (p.bounds.ymin - refY);
+    const right = p.bounds.xmax - refX - (ox + dxt), left = ox + dxt - (p.bounds.xmin - refX);
     return {
       material: p.part.material,
       region: p.part.region,

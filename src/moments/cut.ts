@@ -9,7 +9,7 @@
  * case. The cut width is the summed length of the closing pieces, Σ x_entry − Σ x_exit.
  */
 import type { Contour, Region } from '../geometry/contour';
-import { arcFromChord, quarterTurnRegion } from '../geometry/contour';
+import { arcFromChord, lengthOf, quarterTurnRegion } from '../geometry/contour';
 import { addCircularSegment, contourSummary, regionReference, shiftMoments, type RawMoments } from './kernel';
 
 export interface HalfPlaneMoments extends RawMoments {
@@ -17,18 +17,26 @@ export interface HalfPlaneMoments extends RawMoments {
   width: number;
 }
 
-interface Piece {
-  // Sub-segment [t0, t1] of a segment; arcs keep their circle, lines their endpoints.
-  above: boolean;
-  x0: number;
-  y0: number;
-  x1: number;
-  y1: number;
-  sweep: number;
+/**
+ * The pieces of one split segment, six numbers each (above: 1 or 0, x0, y0, x1, y1, sweep), in
+ * one reused array: a segment splits into at most three pieces, and a plastic axis takes a few
+ * dozen cuts through every arc of the outline, where an object per piece was a good share of
+ * the garbage collector's work.
+ */
+const PIECES = new Float64Array(18);
+function putPiece(k: number, above: boolean, x0: number, y0: number, x1: number, y1: number, sweep: number): number {
+  const o = 6 * k;
+  PIECES[o] = above ? 1 : 0;
+  PIECES[o + 1] = x0;
+  PIECES[o + 2] = y0;
+  PIECES[o + 3] = x1;
+  PIECES[o + 4] = y1;
+  PIECES[o + 5] = sweep;
+  return k + 1;
 }
 
-/** Split segment i of contour c at the crossings of y = yc and push the pieces. */
-function splitSegment(c: Contour, i: number, ox: number, oy: number, out: Piece[]): void {
+/** Split segment i of contour c at the crossings of y = oy into PIECES; returns the piece count. */
+function splitSegment(c: Contour, i: number, ox: number, oy: number): number {
   const n = c.xy.length >> 1;
   const j = i + 1 === n ? 0 : i + 1;
   const yc = 0;
@@ -38,37 +46,36 @@ function splitSegment(c: Contour, i: number, ox: number, oy: number, out: Piece[
     if ((ay - yc) * (by - yc) < 0) {
       const t = (yc - ay) / (by - ay);
       const xm = ax + t * (bx - ax);
-      out.push({ above: ay > yc, x0: ax, y0: ay, x1: xm, y1: yc, sweep: 0 });
-      out.push({ above: by > yc, x0: xm, y0: yc, x1: bx, y1: by, sweep: 0 });
-    } else {
-      const above = (ay + by) / 2 > yc;
-      out.push({ above, x0: ax, y0: ay, x1: bx, y1: by, sweep: 0 });
+      putPiece(0, ay > yc, ax, ay, xm, yc, 0);
+      return putPiece(1, by > yc, xm, yc, bx, by, 0);
     }
-    return;
+    return putPiece(0, (ay + by) / 2 > yc, ax, ay, bx, by, 0);
   }
   const phi = 4 * Math.atan(b);
-  if (Math.abs(phi) < 0.02) {
-    splitFlatArc(ax, ay, bx, by, phi, yc, out);
-    return;
-  }
+  if (Math.abs(phi) < 0.02) return splitFlatArc(ax, ay, bx, by, phi, yc);
   const { cx, cy, r } = arcFromChord(ax, ay, bx, by, phi);
   const t0 = Math.atan2(ay - cy, ax - cx);
-  // Parameters (fractions of the sweep) where the arc meets y = yc.
-  const cuts: number[] = [];
+  // Parameters (fractions of the sweep) where the arc meets y = yc, in increasing order.
+  let f1 = 2, f2 = 2;
   const sy = (yc - cy) / r;
   if (Math.abs(sy) < 1) {
     const base = Math.asin(sy);
-    for (const ang of [base, Math.PI - base]) {
+    for (let m = 0; m < 2; m++) {
+      const ang = m === 0 ? base : Math.PI - base;
       let d = phi > 0 ? ang - t0 : t0 - ang;
       d = ((d % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI);
       const f = d / Math.abs(phi);
-      if (f > 1e-12 && f < 1 - 1e-12) cuts.push(f);
+      if (!(f > 1e-12 && f < 1 - 1e-12)) continue;
+      if (f < f1) {
+        f2 = f1;
+        f1 = f;
+      } else if (f < f2) f2 = f;
     }
-    cuts.sort((p, q) => p - q);
   }
-  let px = ax, py = ay, pf = 0;
-  const ends = [...cuts, 1];
-  for (const f of ends) {
+  let px = ax, py = ay, pf = 0, count = 0;
+  for (let m = 0; m < 3; m++) {
+    const f = m === 0 ? f1 : m === 1 ? f2 : 1;
+    if (f > 1) continue;
     let qx: number, qy: number;
     if (f === 1) {
       qx = bx;
@@ -79,12 +86,12 @@ function splitSegment(c: Contour, i: number, ox: number, oy: number, out: Piece[
       qy = yc;
     }
     const mid = t0 + phi * ((pf + f) / 2);
-    const above = cy + r * Math.sin(mid) > yc;
-    out.push({ above, x0: px, y0: py, x1: qx, y1: qy, sweep: phi * (f - pf) });
+    count = putPiece(count, cy + r * Math.sin(mid) > yc, px, py, qx, qy, phi * (f - pf));
     px = qx;
     py = qy;
     pf = f;
   }
+  return count;
 }
 
 /**
@@ -95,8 +102,8 @@ function splitSegment(c: Contour, i: number, ox: number, oy: number, out: Piece[
  * cancellation. Meeting y = yc is a line in (t, w); substituting gives a quadratic whose root
  * near the chord is taken in the stable form C / q.
  */
-function splitFlatArc(ax: number, ay: number, bx: number, by: number, phi: number, yc: number, out: Piece[]): void {
-  const L = Math.hypot(bx - ax, by - ay);
+function splitFlatArc(ax: number, ay: number, bx: number, by: number, phi: number, yc: number): number {
+  const L = lengthOf(bx - ax, by - ay);
   const h = L / 2, alpha = Math.abs(phi) / 2;
   const sa = Math.sin(alpha), ca = Math.cos(alpha);
   const sg = phi > 0 ? 1 : -1;
@@ -128,7 +135,7 @@ function splitFlatArc(ax: number, ay: number, bx: number, by: number, phi: numbe
   }
   const cuts = ts.filter((t) => t > -1 + 1e-12 && t < 1 - 1e-12).sort((p, q) => p - q);
   const theta = (t: number) => Math.asin(Math.max(-1, Math.min(1, t * sa)));
-  let px = ax, py = ay, pt = -1;
+  let px = ax, py = ay, pt = -1, count = 0;
   for (const t of [...cuts, 1]) {
     let qx: number, qy: number;
     if (t === 1) {
@@ -141,11 +148,12 @@ function splitFlatArc(ax: number, ay: number, bx: number, by: number, phi: numbe
     }
     const tm = (pt + t) / 2;
     const above = my + ey * h * tm + uy * wOf(tm) > yc;
-    out.push({ above, x0: px, y0: py, x1: qx, y1: qy, sweep: sg * (theta(t) - theta(pt)) });
+    count = putPiece(count, above, px, py, qx, qy, sg * (theta(t) - theta(pt)));
     px = qx;
     py = qy;
     pt = t;
   }
+  return count;
 }
 
 /**
@@ -238,7 +246,6 @@ export function turnPlan(plan: CutPlan, sense: 1 | -1): CutPlan {
 export function momentsAboveAbout(plan: CutPlan, yc: number, ox: number): HalfPlaneMoments {
   const acc = new Float64Array(6);
   let width = 0;
-  const pieces: Piece[] = [];
   const { ymin, ymax, whole, firstX, firstY } = plan;
   const n = ymin.length;
   for (let k = 0; k < n; k++) {
@@ -255,7 +262,7 @@ export function momentsAboveAbout(plan: CutPlan, yc: number, ox: number): HalfPl
       acc[5] += whole[o + 5] + dx * whole[o + 2] + dy * whole[o + 1] + dx * dy * whole[o];
       continue;
     }
-    width += crossedLoop(plan.loop(k), ox, yc, acc, pieces);
+    width += crossedLoop(plan.loop(k), ox, yc, acc);
   }
   return { m00: acc[0], m10: acc[1], m01: acc[2], m20: acc[3], m02: acc[4], m11: acc[5], width };
 }
@@ -267,7 +274,7 @@ export function momentsAboveAbout(plan: CutPlan, yc: number, ox: number): HalfPl
  * line ends; where it leaves, one starts. All six G carry a factor y, so closing pieces on y = 0
  * add no moment, only width.
  */
-function crossedLoop(c: Contour, ox: number, yc: number, acc: Float64Array, pieces: Piece[]): number {
+function crossedLoop(c: Contour, ox: number, yc: number, acc: Float64Array): number {
   const xy = c.xy, bulge = c.bulge;
   const n = xy.length >> 1;
   walk.width = 0;
@@ -278,28 +285,20 @@ function crossedLoop(c: Contour, ox: number, yc: number, acc: Float64Array, piec
   for (let i = 0; i < n; i++) {
     const j = i + 1 === n ? 0 : i + 1;
     const ax = xy[2 * i] - ox, ay = xy[2 * i + 1] - yc, bx = xy[2 * j] - ox, by = xy[2 * j + 1] - yc;
+    let count: number;
     if (bulge && bulge[i] !== 0) {
       // An arc of at most a half turn stays within its height (L/2)·|bulge| of its chord: one
       // wholly clear of the line is one piece, with no split to compute.
-      const h = (Math.hypot(bx - ax, by - ay) / 2) * Math.abs(bulge[i]) * (1 + 1e-12);
-      if (Math.abs(bulge[i]) <= 1 && Math.min(ay, by) - h > 0) {
-        piece(acc, true, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
-        continue;
-      }
-      if (Math.abs(bulge[i]) <= 1 && Math.max(ay, by) + h < 0) {
-        piece(acc, false, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
-        continue;
-      }
-      pieces.length = 0;
-      splitSegment(c, i, ox, yc, pieces);
-      for (const p of pieces) piece(acc, p.above, p.x0, p.y0, p.x1, p.y1, p.sweep);
-      continue;
-    }
-    if (ay * by < 0) {
+      const h = (lengthOf(bx - ax, by - ay) / 2) * Math.abs(bulge[i]) * (1 + 1e-12);
+      if (Math.abs(bulge[i]) <= 1 && Math.min(ay, by) - h > 0) count = putPiece(0, true, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
+      else if (Math.abs(bulge[i]) <= 1 && Math.max(ay, by) + h < 0) count = putPiece(0, false, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
+      else count = splitSegment(c, i, ox, yc);
+    } else if (ay * by < 0) {
       const xm = ax + (-ay / (by - ay)) * (bx - ax);
-      piece(acc, ay > 0, ax, ay, xm, 0, 0);
-      piece(acc, by > 0, xm, 0, bx, by, 0);
-    } else piece(acc, ay + by > 0, ax, ay, bx, by, 0);
+      putPiece(0, ay > 0, ax, ay, xm, 0, 0);
+      count = putPiece(1, by > 0, xm, 0, bx, by, 0);
+    } else count = putPiece(0, ay + by > 0, ax, ay, bx, by, 0);
+    for (let o = 0; o < 6 * count; o += 6) piece(acc, o);
   }
   // The first piece's own transition, against the last piece.
   let width = walk.width;
@@ -317,8 +316,9 @@ function crossedLoop(c: Contour, ox: number, yc: number, acc: Float64Array, piec
  */
 const walk = { width: 0, started: false, firstAbove: false, firstX: 0, prevAbove: false };
 
-/** One piece of a crossed loop: the width where the boundary enters or leaves, and its moments when above. */
-function piece(acc: Float64Array, above: boolean, x0: number, y0: number, x1: number, y1: number, sweep: number): void {
+/** One piece of a crossed loop (PIECES from offset o): the width where the boundary enters or leaves, and its moments when above. */
+function piece(acc: Float64Array, o: number): void {
+  const above = PIECES[o] === 1, x0 = PIECES[o + 1];
   if (!walk.started) {
     walk.started = true;
     walk.firstAbove = above;
@@ -327,6 +327,7 @@ function piece(acc: Float64Array, above: boolean, x0: number, y0: number, x1: nu
   else if (!above && walk.prevAbove) walk.width -= x0;
   walk.prevAbove = above;
   if (!above) return;
+  const y0 = PIECES[o + 2], x1 = PIECES[o + 3], y1 = PIECES[o + 4], sweep = PIECES[o + 5];
   if (sweep === 0) lineDx(x0, y0, x1, y1, acc);
   else arcDx(x0, y0, x1, y1, sweep, acc);
 }

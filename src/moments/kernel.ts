@@ -12,7 +12,7 @@
  * the centroid for centroidal ones) by the parallel-axis theorem in the direction that adds:
  * centroidal moments are never formed as m02 − A·ȳ² of origin moments, which cancels far out.
  */
-import { contourBounds, contourLength, type Bounds, type Contour, type Region } from '../geometry/contour';
+import { contourBoundsInto, contourLength, lengthOf, type Bounds, type Contour, type Region } from '../geometry/contour';
 
 /** Raw moments about the document origin: m00 = A, m10 = ∫x, m01 = ∫y, m20 = ∫x², m02 = ∫y², m11 = ∫xy. */
 export interface RawMoments {
@@ -150,7 +150,7 @@ const CHORD_FRAME_BELOW = 0.3;
  */
 export function addCircularSegment(ax: number, ay: number, bx: number, by: number, phi: number, acc: Float64Array): void {
   const dx = bx - ax, dy = by - ay;
-  const L = Math.hypot(dx, dy);
+  const L = lengthOf(dx, dy);
   if (!(L > 0)) return;
   const alpha = Math.abs(phi) / 2;
   const sa = Math.sin(alpha), ca = Math.cos(alpha);
@@ -219,11 +219,12 @@ export function regionMomentsAbout(region: Region, ox: number, oy: number): RawM
     // The kept summary's sums about the first vertex when there is one; else one pass (a whole
     // summary is two passes and the length, wasted on a loop asked only for its area).
     const kept = SUMMARIES.get(c);
-    let first: Float64Array;
-    if (kept) first = kept.first;
+    let first: ArrayLike<number>;
+    if (kept) first = kept.v;
     else {
-      first = new Float64Array(6);
-      accumulateContour(c, x0, y0, first);
+      const acc = new Float64Array(6);
+      accumulateContour(c, x0, y0, acc);
+      first = acc;
     }
     out = addMoments(out, shiftMoments(asMoments(first), x0 - ox, y0 - oy));
   }
@@ -295,16 +296,18 @@ export class ContourSummary {
   /**
    * All the numbers in one array (a plate with thousands of holes keeps one summary per hole):
    * 0–5 the sums about the first vertex, 6–11 about (gx, gy), then xmin, xmax, ymin, ymax, gx,
-   * gy and the length.
+   * gy and the length. A plain array of doubles, not a Float64Array: 19 numbers (152 bytes) are
+   * past the size V8 keeps a typed array's data on its own heap, and a separate buffer per loop
+   * cost the garbage collector more than the sums did at thousands of holes.
    */
-  constructor(readonly v: Float64Array) {}
+  constructor(readonly v: number[]) {}
   /** A, ∫x, ∫y, ∫x², ∫y², ∫xy about the first vertex (xy[0], xy[1]). */
-  get first(): Float64Array {
-    return this.v.subarray(0, 6);
+  get first(): number[] {
+    return this.v.slice(0, 6);
   }
   /** The same sums about (gx, gy). */
-  get central(): Float64Array {
-    return this.v.subarray(6, 12);
+  get central(): number[] {
+    return this.v.slice(6, 12);
   }
   get xmin(): number {
     return this.v[12];
@@ -330,8 +333,38 @@ export class ContourSummary {
   }
 }
 
+/** Nineteen doubles, as an array V8 stores unboxed (a literal of non-integers starts as doubles). */
+function summaryNumbers(): number[] {
+  return [NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN];
+}
+
+/** Six sums accumulated in one reused array, then copied where they belong. */
+const SCRATCH = new Float64Array(6);
+function sumsInto(c: Contour, ox: number, oy: number, out: number[], at: number): void {
+  SCRATCH.fill(0);
+  accumulateContour(c, ox, oy, SCRATCH);
+  for (let i = 0; i < 6; i++) out[at + i] = SCRATCH[i];
+}
+
+/** A contour's box kept alone (before its summary is asked for): four doubles in one array. */
+class KeptBox {
+  constructor(readonly v: number[]) {}
+  get xmin(): number {
+    return this.v[0];
+  }
+  get xmax(): number {
+    return this.v[1];
+  }
+  get ymin(): number {
+    return this.v[2];
+  }
+  get ymax(): number {
+    return this.v[3];
+  }
+}
+
 const SUMMARIES = new WeakMap<Contour, ContourSummary>();
-const BOXES = new WeakMap<Contour, Bounds>();
+const BOXES = new WeakMap<Contour, KeptBox>();
 
 /** A contour's exact box, kept by identity (the summary's, or computed alone when asked first). */
 export function contourBox(c: Contour): Bounds | null {
@@ -339,8 +372,11 @@ export function contourBox(c: Contour): Bounds | null {
   if (s) return s;
   const hit = BOXES.get(c);
   if (hit) return hit;
-  const b = contourBounds(c);
-  if (b) BOXES.set(c, b);
+  const v = [NaN, NaN, NaN, NaN];
+  contourBoundsInto(c, v, 0);
+  if (!(v[0] <= v[1])) return null;
+  const b = new KeptBox(v);
+  BOXES.set(c, b);
   return b;
 }
 
@@ -363,31 +399,34 @@ export function contourSummary(c: Contour): ContourSummary {
   if (hit) return hit;
   const xy = c.xy, n = xy.length >> 1;
   const x0 = n ? xy[0] : 0, y0 = n ? xy[1] : 0;
-  const v = new Float64Array(19);
-  accumulateContour(c, x0, y0, v);
+  const v = summaryNumbers();
+  sumsInto(c, x0, y0, v, 0);
   // The box kept for this contour, if any; else computed here and kept in the summary only.
-  const b = BOXES.get(c) ?? contourBounds(c) ?? { xmin: x0, xmax: x0, ymin: y0, ymax: y0 };
+  const kept = BOXES.get(c);
+  if (kept) {
+    v[12] = kept.xmin;
+    v[13] = kept.xmax;
+    v[14] = kept.ymin;
+    v[15] = kept.ymax;
+  } else contourBoundsInto(c, v, 12);
+  if (!(v[12] <= v[13])) {
+    v[12] = v[13] = x0;
+    v[14] = v[15] = y0;
+  }
   let gx = x0, gy = y0;
   const a = v[0];
   if (a !== 0 && Number.isFinite(a)) {
     // The loop's centroid, unless it lies outside the loop's box widened by its size (a loop
     // whose signed area nearly cancels): then the first vertex stays the better reference.
     const cx = x0 + v[1] / a, cy = y0 + v[2] / a;
-    const pad = Math.max(b.xmax - b.xmin, b.ymax - b.ymin);
-    if (cx >= b.xmin - pad && cx <= b.xmax + pad && cy >= b.ymin - pad && cy <= b.ymax + pad) {
+    const pad = Math.max(v[13] - v[12], v[15] - v[14]);
+    if (cx >= v[12] - pad && cx <= v[13] + pad && cy >= v[14] - pad && cy <= v[15] + pad) {
       gx = cx;
       gy = cy;
     }
   }
-  if (gx === x0 && gy === y0) v.copyWithin(6, 0, 6);
-  else {
-    const central = v.subarray(6, 12);
-    accumulateContour(c, gx, gy, central);
-  }
-  v[12] = b.xmin;
-  v[13] = b.xmax;
-  v[14] = b.ymin;
-  v[15] = b.ymax;
+  if (gx === x0 && gy === y0) for (let i = 0; i < 6; i++) v[6 + i] = v[i];
+  else sumsInto(c, gx, gy, v, 6);
   v[16] = gx;
   v[17] = gy;
   v[18] = contourLength(c);
@@ -405,7 +444,7 @@ export function contourSummary(c: Contour): ContourSummary {
  */
 export function centralMoments(region: Region): CentralMoments {
   // Each loop's summary numbers: the sums about (gx, gy) in slots 6–11, gx and gy in 16 and 17.
-  const parts: Float64Array[] = [];
+  const parts: number[][] = [];
   let big = -1, bigA = -1;
   for (const c of region) {
     if (c.xy.length < 4) continue;

@@ -23,7 +23,7 @@
  * Cuts parallel to y ("right of x = at") work in the section turned +90° exactly,
  * (x, y) → (−y, x), as `cutSection` does; "above" then means "right of" and "below" "left of".
  */
-import { arcPointAtAngle, transformContour, type Contour, type Region } from '../geometry/contour';
+import { arcPointAtAngle, lengthOf, transformContour, type Contour, type Region } from '../geometry/contour';
 
 export interface OneSidedWidths {
   /** b(at + 0): the width just above the cut (just right of it for axis 'x'). */
@@ -76,7 +76,7 @@ function addLine(ax: number, ay: number, bx: number, by: number, c: number, ref:
  * cos(θ − ψ) = K with ψ = atan2(e_y, u_y) and K = (c − M_y) sinα/h + u_y cosα (u_y² + e_y² = 1).
  */
 function addArc(ax: number, ay: number, bx: number, by: number, phi: number, c: number, ref: number, s: Sums): void {
-  const L = Math.hypot(bx - ax, by - ay);
+  const L = lengthOf(bx - ax, by - ay);
   if (!(L > 0)) return;
   const h = L / 2, alpha = Math.abs(phi) / 2;
   const sa = Math.sin(alpha), ca = Math.cos(alpha);

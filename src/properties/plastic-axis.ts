@@ -40,13 +40,17 @@ function weightedAbove(parts: readonly PlasticPart[], c: number, ox: number) {
   return { A, Q, width };
 }
 
-/** The y where the weighted area above equals `half`. */
-function balancingCut(parts: readonly PlasticPart[], ox: number, lo: number, hi: number, half: number): number {
+/**
+ * The y where the weighted area above equals `half`, starting from `start` (the weighted
+ * centroid: the axis lies there for a section symmetric about it, and near it as a rule), and
+ * the weighted first moment above it, from the last cut taken.
+ */
+function balancingCut(parts: readonly PlasticPart[], ox: number, lo: number, hi: number, half: number, start: number): { at: number; Q: number } {
   let a = lo, b = hi;
-  let c = (a + b) / 2;
+  let c = start > a && start < b ? start : (a + b) / 2;
   const tol = 4 * Number.EPSILON * Math.max(Math.abs(a), Math.abs(b), b - a);
+  let h = weightedAbove(parts, c, ox);
   for (let k = 0; k < 200; k++) {
-    const h = weightedAbove(parts, c, ox);
     const f = h.A - half;
     if (f > 0) a = c;
     else b = c;
@@ -56,17 +60,20 @@ function balancingCut(parts: readonly PlasticPart[], ox: number, lo: number, hi:
     if (!(next > a && next < b)) next = (a + b) / 2;
     if (Math.abs(next - c) <= tol) break;
     c = next;
+    h = weightedAbove(parts, c, ox);
   }
-  return c;
+  return { at: c, Q: h.Q };
 }
 
 /** Plastic modulus about the horizontal balancing axis y = yp, and yp. */
 function aboutHorizontal(parts: readonly PlasticPart[], ymin: number, ymax: number): { Z: number; at: number } {
   const ox = parts[0].cm.refX;
-  let W = 0;
-  parts.forEach((p, k) => (W = k === 0 ? p.w * p.cm.A : W + p.w * p.cm.A));
-  const yp = balancingCut(parts, ox, ymin, ymax, W / 2);
-  const Qa = weightedAbove(parts, yp, ox).Q;
+  let W = 0, Wy = 0;
+  parts.forEach((p, k) => {
+    W = k === 0 ? p.w * p.cm.A : W + p.w * p.cm.A;
+    Wy = k === 0 ? p.w * p.cm.A * (p.cm.refY + p.cm.dy) : Wy + p.w * p.cm.A * (p.cm.refY + p.cm.dy);
+  });
+  const { at: yp, Q: Qa } = balancingCut(parts, ox, ymin, ymax, W / 2, Wy / W);
   let S = 0;
   parts.forEach((p, k) => {
     const s = p.w * p.cm.A * (p.cm.dy - (yp - p.cm.refY));
