@@ -269,19 +269,17 @@ export function momentsAboveAbout(plan: CutPlan, yc: number, ox: number): HalfPl
 
 /**
  * One loop that the line crosses: its pieces above the line integrated into acc, and its share
- * of the cut width returned. Straight segments are split inline (no piece records); arcs go
- * through splitSegment. Where the boundary enters the upper side a closing piece of the cut
- * line ends; where it leaves, one starts. All six G carry a factor y, so closing pieces on y = 0
- * add no moment, only width.
+ * of the cut width returned. Each segment is split into PIECES (a straight one inline, an arc
+ * through splitSegment) and its pieces taken in order. Where the boundary enters the upper side
+ * a closing piece of the cut line ends; where it leaves, one starts. All six G carry a factor y,
+ * so closing pieces on y = 0 add no moment, only width. The walk's state stays in locals and
+ * the pieces are read by offset: this runs for every segment of every crossed loop of every
+ * cut, where numbers passed to a call or kept in an object cost the garbage collector.
  */
 function crossedLoop(c: Contour, ox: number, yc: number, acc: Float64Array): number {
   const xy = c.xy, bulge = c.bulge;
   const n = xy.length >> 1;
-  walk.width = 0;
-  walk.started = false;
-  walk.firstAbove = false;
-  walk.firstX = 0;
-  walk.prevAbove = false;
+  let width = 0, started = false, firstAbove = false, firstX = 0, prevAbove = false;
   for (let i = 0; i < n; i++) {
     const j = i + 1 === n ? 0 : i + 1;
     const ax = xy[2 * i] - ox, ay = xy[2 * i + 1] - yc, bx = xy[2 * j] - ox, by = xy[2 * j + 1] - yc;
@@ -298,38 +296,27 @@ function crossedLoop(c: Contour, ox: number, yc: number, acc: Float64Array): num
       putPiece(0, ay > 0, ax, ay, xm, 0, 0);
       count = putPiece(1, by > 0, xm, 0, bx, by, 0);
     } else count = putPiece(0, ay + by > 0, ax, ay, bx, by, 0);
-    for (let o = 0; o < 6 * count; o += 6) piece(acc, o);
+    for (let o = 0; o < 6 * count; o += 6) {
+      const above = PIECES[o] === 1, x0 = PIECES[o + 1];
+      if (!started) {
+        started = true;
+        firstAbove = above;
+        firstX = x0;
+      } else if (above && !prevAbove) width += x0;
+      else if (!above && prevAbove) width -= x0;
+      prevAbove = above;
+      if (!above) continue;
+      lineDx(o, acc);
+      // An arc adds the exact area moments of its segment loop (arc a->b, then chord b->a).
+      if (PIECES[o + 5] !== 0) addCircularSegment(x0, PIECES[o + 2], PIECES[o + 3], PIECES[o + 4], PIECES[o + 5], acc);
+    }
   }
   // The first piece's own transition, against the last piece.
-  let width = walk.width;
-  if (walk.started) {
-    if (walk.firstAbove && !walk.prevAbove) width += walk.firstX;
-    else if (!walk.firstAbove && walk.prevAbove) width -= walk.firstX;
+  if (started) {
+    if (firstAbove && !prevAbove) width += firstX;
+    else if (!firstAbove && prevAbove) width -= firstX;
   }
   return width;
-}
-
-/**
- * The walk along one crossed loop: the width so far and the side of the previous piece. One
- * shared record (a loop is walked to its end before the next starts) rather than a closure per
- * loop, since a plastic axis costs a few dozen cuts.
- */
-const walk = { width: 0, started: false, firstAbove: false, firstX: 0, prevAbove: false };
-
-/** One piece of a crossed loop (PIECES from offset o): the width where the boundary enters or leaves, and its moments when above. */
-function piece(acc: Float64Array, o: number): void {
-  const above = PIECES[o] === 1, x0 = PIECES[o + 1];
-  if (!walk.started) {
-    walk.started = true;
-    walk.firstAbove = above;
-    walk.firstX = x0;
-  } else if (above && !walk.prevAbove) walk.width += x0;
-  else if (!above && walk.prevAbove) walk.width -= x0;
-  walk.prevAbove = above;
-  if (!above) return;
-  const y0 = PIECES[o + 2], x1 = PIECES[o + 3], y1 = PIECES[o + 4], sweep = PIECES[o + 5];
-  if (sweep === 0) lineDx(x0, y0, x1, y1, acc);
-  else arcDx(x0, y0, x1, y1, sweep, acc);
 }
 
 /**
@@ -343,11 +330,12 @@ export function momentsAbove(region: Region, yc: number): HalfPlaneMoments {
   return { ...shiftMoments(h, ox, yc), width: h.width };
 }
 
-/** −∫ G dx along the straight piece, for each of the six G. Exact (Gauss–Legendre, 3 nodes, degree ≤ 5). */
-function lineDx(x0: number, y0: number, x1: number, y1: number, acc: Float64Array): void {
-  const dx = x1 - x0;
+/** −∫ G dx along the straight piece at PIECES[o], for each of the six G. Exact (Gauss–Legendre, 3 nodes, degree ≤ 5). */
+function lineDx(o: number, acc: Float64Array): void {
+  const x0 = PIECES[o + 1], y0 = PIECES[o + 2];
+  const dx = PIECES[o + 3] - x0;
   if (dx === 0) return;
-  const dy = y1 - y0;
+  const dy = PIECES[o + 4] - y0;
   // G is a polynomial of degree ≤ 3 along the line: 3-point Gauss–Legendre is exact to degree 5.
   for (let q = 0; q < 3; q++) {
     const t = GL_T[q], w = GL_W[q] * dx;
@@ -362,14 +350,3 @@ function lineDx(x0: number, y0: number, x1: number, y1: number, acc: Float64Arra
 }
 const GL_T = [0.5 - Math.sqrt(15) / 10, 0.5, 0.5 + Math.sqrt(15) / 10];
 const GL_W = [5 / 18, 8 / 18, 5 / 18];
-
-/**
- * −∫ G dx along an arc piece: the chord in dx form plus the circular segment between chord and
- * arc (the closed segment loop arc + reversed chord has −∮G dx = its area moments, which the
- * kernel's closed forms give exactly).
- */
-function arcDx(x0: number, y0: number, x1: number, y1: number, phi: number, acc: Float64Array): void {
-  lineDx(x0, y0, x1, y1, acc);
-  // Plus the exact area moments of the segment loop (arc a->b, then chord b->a).
-  addCircularSegment(x0, y0, x1, y1, phi, acc);
-}
