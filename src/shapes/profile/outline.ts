@@ -11,7 +11,7 @@
  * Orientation: the outer boundary always runs CCW and holes run CW (a mirror reverses the
  * traversal, so mirrored paths are written backwards). Every path ends exactly at its start.
  */
-import { sweepThrough } from '../../geometry/contour';
+import { lengthOf, sweepThrough } from '../../geometry/contour';
 import type { Point } from '../base';
 import type { PathSegment, PathShape } from '../path';
 import { validateProfile, type ProfileIssue } from './fields';
@@ -82,14 +82,13 @@ function roundedLoop(corners: readonly Corner[], scale: number): Loop {
   const start = rounded[0].tout;
   const segments: PathSegment[] = [];
   let cur = start;
-  const lineTo = (q: Point) => {
-    if (Math.hypot(q[0] - cur[0], q[1] - cur[1]) <= minLength) return;
-    segments.push({ to: q });
-    cur = q;
-  };
   for (let k = 1; k <= n; k++) {
     const r = rounded[k % n];
-    lineTo(r.tin);
+    const q = r.tin;
+    if (lengthOf(q[0] - cur[0], q[1] - cur[1]) > minLength) {
+      segments.push({ to: q });
+      cur = q;
+    }
     if (r.via) {
       segments.push({ to: r.tout, via: r.via });
       cur = r.tout;
@@ -249,20 +248,16 @@ function cosSinDegrees(deg: number): [number, number] {
 }
 
 function placeLoop(loop: Loop, mirror: boolean, cs: number, sn: number, ax: number, ay: number): Loop {
-  const f = (q: Point): Point => {
-    const x = mirror ? -q[0] : q[0], y = q[1];
-    return [cs * x - sn * y + ax, sn * x + cs * y + ay];
-  };
-  const start = f(loop.start);
+  const start = placePoint(loop.start, mirror, cs, sn, ax, ay);
   const segments: PathSegment[] = [];
   let lp = loop.start, wp = start;
   for (const g of loop.segments) {
-    const to = f(g.to);
+    const to = placePoint(g.to, mirror, cs, sn, ax, ay);
     if (g.via) {
       // Far from the origin a tiny arc may lose its shape in rounding; then a chord is as exact
       // as the coordinates allow. The placed arc must keep the local sweep (sign flipped by a mirror).
       const want = sweepThrough(lp[0], lp[1], g.via[0], g.via[1], g.to[0], g.to[1]) * (mirror ? -1 : 1);
-      const via = f(g.via);
+      const via = placePoint(g.via, mirror, cs, sn, ax, ay);
       const got = sweepThrough(wp[0], wp[1], via[0], via[1], to[0], to[1]);
       segments.push(Math.abs(got - want) <= 1e-6 ? { to, via } : { to });
     } else segments.push({ to });
@@ -271,6 +266,12 @@ function placeLoop(loop: Loop, mirror: boolean, cs: number, sn: number, ax: numb
   }
   // A mirror reverses the traversal; write it backwards so the orientation is kept.
   return mirror ? reverseLoop({ start, segments }) : { start, segments };
+}
+
+/** A local point placed: mirrored (if so), turned by (cs, sn), moved by (ax, ay). */
+function placePoint(q: Point, mirror: boolean, cs: number, sn: number, ax: number, ay: number): Point {
+  const x = mirror ? -q[0] : q[0], y = q[1];
+  return [cs * x - sn * y + ax, sn * x + cs * y + ay];
 }
 
 function toPathShape(p: ProfileShape, id: string, loop: Loop): PathShape {
