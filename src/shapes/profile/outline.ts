@@ -100,7 +100,7 @@ function roundedLoop(corners: readonly Corner[], scale: number): Loop {
 }
 
 function unit(x: number, y: number): [number, number] {
-  const L = Math.hypot(x, y);
+  const L = lengthOf(x, y);
   return [x / L, y / L];
 }
 
