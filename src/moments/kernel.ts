@@ -292,7 +292,27 @@ export interface CentralMoments {
  * summary is kept by the contour's identity: in a drag frame of a plate with thousands of holes,
  * only the loops that moved are integrated again.
  */
-export class ContourSummary {
+/** Four numbers of an array read as a box: xmin, xmax, ymin, ymax from slot `at`. */
+class BoxView implements Bounds {
+  constructor(
+    readonly v: number[],
+    private readonly at: number,
+  ) {}
+  get xmin(): number {
+    return this.v[this.at];
+  }
+  get xmax(): number {
+    return this.v[this.at + 1];
+  }
+  get ymin(): number {
+    return this.v[this.at + 2];
+  }
+  get ymax(): number {
+    return this.v[this.at + 3];
+  }
+}
+
+export class ContourSummary extends BoxView {
   /**
    * All the numbers in one array (a plate with thousands of holes keeps one summary per hole):
    * 0–5 the sums about the first vertex, 6–11 about (gx, gy), then xmin, xmax, ymin, ymax, gx,
@@ -300,7 +320,9 @@ export class ContourSummary {
    * past the size V8 keeps a typed array's data on its own heap, and a separate buffer per loop
    * cost the garbage collector more than the sums did at thousands of holes.
    */
-  constructor(readonly v: number[]) {}
+  constructor(v: number[]) {
+    super(v, 12);
+  }
   /** A, ∫x, ∫y, ∫x², ∫y², ∫xy about the first vertex (xy[0], xy[1]). */
   get first(): number[] {
     return this.v.slice(0, 6);
@@ -308,18 +330,6 @@ export class ContourSummary {
   /** The same sums about (gx, gy). */
   get central(): number[] {
     return this.v.slice(6, 12);
-  }
-  get xmin(): number {
-    return this.v[12];
-  }
-  get xmax(): number {
-    return this.v[13];
-  }
-  get ymin(): number {
-    return this.v[14];
-  }
-  get ymax(): number {
-    return this.v[15];
   }
   /** The point the second set of sums is taken about: the centroid, or the first vertex. */
   get gx(): number {
@@ -346,25 +356,9 @@ function sumsInto(c: Contour, ox: number, oy: number, out: number[], at: number)
   for (let i = 0; i < 6; i++) out[at + i] = SCRATCH[i];
 }
 
-/** A contour's box kept alone (before its summary is asked for): four doubles in one array. */
-class KeptBox {
-  constructor(readonly v: number[]) {}
-  get xmin(): number {
-    return this.v[0];
-  }
-  get xmax(): number {
-    return this.v[1];
-  }
-  get ymin(): number {
-    return this.v[2];
-  }
-  get ymax(): number {
-    return this.v[3];
-  }
-}
-
 const SUMMARIES = new WeakMap<Contour, ContourSummary>();
-const BOXES = new WeakMap<Contour, KeptBox>();
+/** A contour's box kept alone (before its summary is asked for): four doubles in one array. */
+const BOXES = new WeakMap<Contour, BoxView>();
 
 /** A contour's exact box, kept by identity (the summary's, or computed alone when asked first). */
 export function contourBox(c: Contour): Bounds | null {
@@ -375,7 +369,7 @@ export function contourBox(c: Contour): Bounds | null {
   const v = [NaN, NaN, NaN, NaN];
   contourBoundsInto(c, v, 0);
   if (!(v[0] <= v[1])) return null;
-  const b = new KeptBox(v);
+  const b = new BoxView(v, 0);
   BOXES.set(c, b);
   return b;
 }
