@@ -35,23 +35,13 @@ function putPiece(k: number, above: boolean, x0: number, y0: number, x1: number,
   return k + 1;
 }
 
-/** Split segment i of contour c at the crossings of y = oy into PIECES; returns the piece count. */
-function splitSegment(c: Contour, i: number, ox: number, oy: number): number {
-  const n = c.xy.length >> 1;
-  const j = i + 1 === n ? 0 : i + 1;
+/**
+ * Split the arc a->b of sweep phi (coordinates relative to the cut line, which is y = 0) where it
+ * crosses the line, into PIECES; returns the piece count. Straight segments are split inline by
+ * crossedLoop.
+ */
+function splitArc(ax: number, ay: number, bx: number, by: number, phi: number): number {
   const yc = 0;
-  const ax = c.xy[2 * i] - ox, ay = c.xy[2 * i + 1] - oy, bx = c.xy[2 * j] - ox, by = c.xy[2 * j + 1] - oy;
-  const b = c.bulge ? c.bulge[i] : 0;
-  if (b === 0) {
-    if ((ay - yc) * (by - yc) < 0) {
-      const t = (yc - ay) / (by - ay);
-      const xm = ax + t * (bx - ax);
-      putPiece(0, ay > yc, ax, ay, xm, yc, 0);
-      return putPiece(1, by > yc, xm, yc, bx, by, 0);
-    }
-    return putPiece(0, (ay + by) / 2 > yc, ax, ay, bx, by, 0);
-  }
-  const phi = 4 * Math.atan(b);
   if (Math.abs(phi) < 0.02) return splitFlatArc(ax, ay, bx, by, phi, yc);
   const { cx, cy, r } = arcFromChord(ax, ay, bx, by, phi);
   const t0 = Math.atan2(ay - cy, ax - cx);
@@ -270,7 +260,7 @@ export function momentsAboveAbout(plan: CutPlan, yc: number, ox: number): HalfPl
 /**
  * One loop that the line crosses: its pieces above the line integrated into acc, and its share
  * of the cut width returned. Each segment is split into PIECES (a straight one inline, an arc
- * through splitSegment) and its pieces taken in order. Where the boundary enters the upper side
+ * through splitArc) and its pieces taken in order. Where the boundary enters the upper side
  * a closing piece of the cut line ends; where it leaves, one starts. All six G carry a factor y,
  * so closing pieces on y = 0 add no moment, only width. The walk's state stays in locals and
  * the pieces are read by offset: this runs for every segment of every crossed loop of every
@@ -290,7 +280,7 @@ function crossedLoop(c: Contour, ox: number, yc: number, acc: Float64Array): num
       const h = (lengthOf(bx - ax, by - ay) / 2) * Math.abs(bulge[i]) * (1 + 1e-12);
       if (Math.abs(bulge[i]) <= 1 && Math.min(ay, by) - h > 0) count = putPiece(0, true, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
       else if (Math.abs(bulge[i]) <= 1 && Math.max(ay, by) + h < 0) count = putPiece(0, false, ax, ay, bx, by, 4 * Math.atan(bulge[i]));
-      else count = splitSegment(c, i, ox, yc);
+      else count = splitArc(ax, ay, bx, by, 4 * Math.atan(bulge[i]));
     } else if (ay * by < 0) {
       const xm = ax + (-ay / (by - ay)) * (bx - ax);
       putPiece(0, ay > 0, ax, ay, xm, 0, 0);
