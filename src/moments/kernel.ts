@@ -285,13 +285,6 @@ export interface CentralMoments {
   Ixy: number;
 }
 
-/**
- * What the properties need of one contour, computed once: its six sums about its first vertex,
- * about its own centroid (where second moments do not cancel), its exact box and its length.
- * Contours are values (nothing in the engine or the app writes into their arrays), so the
- * summary is kept by the contour's identity: in a drag frame of a plate with thousands of holes,
- * only the loops that moved are integrated again.
- */
 /** Four numbers of an array read as a box: xmin, xmax, ymin, ymax from slot `at`. */
 class BoxView implements Bounds {
   constructor(
@@ -312,32 +305,26 @@ class BoxView implements Bounds {
   }
 }
 
+/**
+ * What the properties need of one contour, computed once: its six sums about its first vertex,
+ * about its own centroid (where second moments do not cancel), its exact box and its length.
+ * Contours are values (nothing in the engine or the app writes into their arrays), so the
+ * summary is kept by the contour's identity: in a drag frame of a plate with thousands of holes,
+ * only the loops that moved are integrated again.
+ */
 export class ContourSummary extends BoxView {
   /**
    * All the numbers in one array (a plate with thousands of holes keeps one summary per hole):
-   * 0–5 the sums about the first vertex, 6–11 about (gx, gy), then xmin, xmax, ymin, ymax, gx,
-   * gy and the length. A plain array of doubles, not a Float64Array: 19 numbers (152 bytes) are
-   * past the size V8 keeps a typed array's data on its own heap, and a separate buffer per loop
-   * cost the garbage collector more than the sums did at thousands of holes.
+   * 0–5 the sums A, ∫x, ∫y, ∫x², ∫y², ∫xy about the first vertex, 6–11 the same about (gx, gy)
+   * (the centroid, or the first vertex), then xmin, xmax, ymin, ymax, gx, gy and the length.
+   * A plain array of doubles, not a Float64Array: 19 numbers (152 bytes) are past the size V8
+   * keeps a typed array's data on its own heap, and a separate buffer per loop cost the garbage
+   * collector more than the sums did at thousands of holes.
    */
   constructor(v: number[]) {
     super(v, 12);
   }
-  /** A, ∫x, ∫y, ∫x², ∫y², ∫xy about the first vertex (xy[0], xy[1]). */
-  get first(): number[] {
-    return this.v.slice(0, 6);
-  }
-  /** The same sums about (gx, gy). */
-  get central(): number[] {
-    return this.v.slice(6, 12);
-  }
-  /** The point the second set of sums is taken about: the centroid, or the first vertex. */
-  get gx(): number {
-    return this.v[16];
-  }
-  get gy(): number {
-    return this.v[17];
-  }
+  /** The loop's length (slot 18); the callers that need the sums read `v` by slot. */
   get length(): number {
     return this.v[18];
   }
