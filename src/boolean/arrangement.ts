@@ -2,10 +2,10 @@
  * Steps 1 and 2: exact carriers from the source contours, then every contact between carriers
  * (crossings, touches, overlaps) computed once and shared as an exact node by both sides.
  */
-import { arcFromBulge, pushArc } from '../geometry/contour';
+import { arcFromBulge, lengthOf, pushArc } from '../geometry/contour';
 import {
   ARC, curveIntersections, distToCarrier, implicitAt, makeArc, makeLine, paramOf, polishIntersection,
-  sameCurve, hyp, type Carrier,
+  sameCurve, type Carrier,
 } from './carriers';
 import { type Ctx, type SourceGroup, find, union, newNode, nodeCarriers, SAG_MAX, SAG_FLOOR, FLAT_RADIUS } from './context';
 import { forEachNearPair } from './spatial';
@@ -53,7 +53,7 @@ export function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
       for (let i = 0; i < m0; i++) {
         const x = xy[2 * i], y = xy[2 * i + 1];
         const bi = bl ? bl[i] : 0;
-        if (m > 0 && hyp(x - v[m - 1], y - v[VY + m - 1]) <= eps) {
+        if (m > 0 && lengthOf(x - v[m - 1], y - v[VY + m - 1]) <= eps) {
           v[VB + m - 1] = bi; // the zero-length edge goes; the next edge starts at the kept vertex
           continue;
         }
@@ -63,7 +63,7 @@ export function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
         m++;
       }
       // Closing duplicates; the surviving last vertex keeps its own outgoing bulge only if distinct.
-      while (m > 1 && hyp(v[m - 1] - v[0], v[VY + m - 1] - v[VY + 0]) <= eps) m--;
+      while (m > 1 && lengthOf(v[m - 1] - v[0], v[VY + m - 1] - v[VY + 0]) <= eps) m--;
       if (m < 2) continue;
       // Node i joins carriers i − 1 and i (ids are consecutive from the first).
       const first = ctx.carriers.length, node0 = ctx.nx.length;
@@ -81,7 +81,7 @@ export function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
         // A nearly flat arc (radius far beyond the extent, where centre-based formulas lose
         // their digits) is traced as its chord and gets its sweep back on output.
         const phi = b !== 0 ? 4 * Math.atan(b) : 0;
-        const rr = phi !== 0 ? hyp(bx - ax, by - ay) / (2 * Math.sin(Math.abs(phi) / 2)) : Infinity;
+        const rr = phi !== 0 ? lengthOf(bx - ax, by - ay) / (2 * Math.sin(Math.abs(phi) / 2)) : Infinity;
         if (phi !== 0 && rr <= FLAT_RADIUS * ctx.ext) {
           const { cx, cy, r } = arcFromBulge(ax, ay, bx, by, b);
           car = makeArc(ctx.store, id, g.group, ax, ay, bx, by, cx, cy, r, phi, b);
@@ -107,7 +107,7 @@ export function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
 }
 
 function endpointNode(ctx: Ctx, c: Carrier, x: number, y: number): number {
-  const d0 = hyp(x - c.ax, y - c.ay), d1 = hyp(x - c.bx, y - c.by);
+  const d0 = lengthOf(x - c.ax, y - c.ay), d1 = lengthOf(x - c.bx, y - c.by);
   if (d0 <= ctx.eps && d0 <= d1) return c.n0;
   if (d1 <= ctx.eps) return c.n1;
   return -1;
@@ -197,9 +197,9 @@ function touchEnd(ctx: Ctx, on: Carrier, of: Carrier, x: number, y: number): voi
 function distExact(c: Carrier, x: number, y: number): number {
   if (c.kind === ARC || c.flat === 0) return distToCarrier(c, x, y);
   const u = paramOf(c, x, y);
-  if (u < 0 || u > 1) return Math.min(hyp(x - c.ax, y - c.ay), hyp(x - c.bx, y - c.by));
+  if (u < 0 || u > 1) return Math.min(lengthOf(x - c.ax, y - c.ay), lengthOf(x - c.bx, y - c.by));
   const [f, gx, gy] = implicitAt(c, x, y);
-  return Math.abs(f) / hyp(gx, gy);
+  return Math.abs(f) / lengthOf(gx, gy);
 }
 
 /**
@@ -220,7 +220,7 @@ function demand(ctx: Ctx, c: Carrier, side: number, gap: number): void {
 
 /** Nested, nearly tangent circles (the inner within a sagitta of the outer). */
 function refineNested(ctx: Ctx, a: Carrier, b: Carrier): void {
-  const D = hyp(a.cx - b.cx, a.cy - b.cy);
+  const D = lengthOf(a.cx - b.cx, a.cy - b.cy);
   const gap = Math.abs(a.r - b.r) - D;
   const outer = a.r >= b.r ? a : b, inner = outer === a ? b : a;
   if (!(gap > 0) || gap >= 2 * SAG_MAX * outer.r) return;
@@ -232,7 +232,7 @@ function refineNested(ctx: Ctx, a: Carrier, b: Carrier): void {
 function refineNearVertex(ctx: Ctx, a: Carrier, b: Carrier): void {
   for (let k = 0; k < 2; k++) {
     const x = k === 0 ? b.ax : b.bx, y = k === 0 ? b.ay : b.by;
-    const d = hyp(x - a.cx, y - a.cy);
+    const d = lengthOf(x - a.cx, y - a.cy);
     const gap = Math.abs(a.r - d);
     if (!(gap > ctx.eps) || gap >= 1.5 * SAG_MAX * a.r || !(d > 0)) continue;
     const u = paramOf(a, x, y);

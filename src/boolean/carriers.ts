@@ -5,9 +5,6 @@
  */
 import { arcPointAtAngle, lengthOf } from '../geometry/contour';
 
-/** Length of (dx, dy) (on every vertex's path: see lengthOf). */
-export const hyp = lengthOf;
-
 export const LINE = 0;
 export const ARC = 1;
 
@@ -191,7 +188,7 @@ export function wrapAngle(d: number): number {
 /** The implicit function of c at (x, y) and its gradient. */
 export function implicitAt(c: Carrier, x: number, y: number): [number, number, number] {
   const px = x - c.mx, py = y - c.my;
-  const hl = hyp(c.bx - c.ax, c.by - c.ay) / 2;
+  const hl = lengthOf(c.bx - c.ax, c.by - c.ay) / 2;
   const f = c.ks * (px * px + py * py - hl * hl) + c.kc * (px * c.nx + py * c.ny);
   return [f, 2 * c.ks * px + c.kc * c.nx, 2 * c.ks * py + c.kc * c.ny];
 }
@@ -205,7 +202,7 @@ export function polishIntersection(a: Carrier, b: Carrier, x: number, y: number)
     const [fa, gax, gay] = implicitAt(a, x, y);
     const [fb, gbx, gby] = implicitAt(b, x, y);
     const det = gax * gby - gay * gbx;
-    if (!(Math.abs(det) > 1e-8 * hyp(gax, gay) * hyp(gbx, gby))) break;
+    if (!(Math.abs(det) > 1e-8 * lengthOf(gax, gay) * lengthOf(gbx, gby))) break;
     const dx = (-fa * gby + fb * gay) / det, dy = (-gax * fb + gbx * fa) / det;
     if (!Number.isFinite(dx) || !Number.isFinite(dy)) break;
     x += dx;
@@ -221,7 +218,7 @@ function makeCarrier(
   cx: number, cy: number, r: number, phi: number, flat: number, bulge: number,
 ): Carrier {
   const dx = bx - ax, dy = by - ay;
-  const L = hyp(dx, dy);
+  const L = lengthOf(dx, dy);
   const Ls = L || 1;
   const sw = kind === ARC ? phi : flat;
   const sg = sw >= 0 ? 1 : -1;
@@ -330,29 +327,29 @@ export function distToCurve(c: Carrier, x: number, y: number): number {
   if (c.kind === LINE) {
     const dx = c.bx - c.ax, dy = c.by - c.ay;
     const L = c.len;
-    if (L === 0) return hyp(x - c.ax, y - c.ay);
+    if (L === 0) return lengthOf(x - c.ax, y - c.ay);
     return Math.abs((x - c.ax) * dy - (y - c.ay) * dx) / L;
   }
-  return Math.abs(hyp(x - c.cx, y - c.cy) - c.r);
+  return Math.abs(lengthOf(x - c.cx, y - c.cy) - c.r);
 }
 
 /** Distance from (x, y) to the carrier itself (its finite range). */
 export function distToCarrier(c: Carrier, x: number, y: number): number {
   const u = paramOf(c, x, y);
   if (u >= 0 && u <= 1) return distToCurve(c, x, y);
-  return Math.min(hyp(x - c.ax, y - c.ay), hyp(x - c.bx, y - c.by));
+  return Math.min(lengthOf(x - c.ax, y - c.ay), lengthOf(x - c.bx, y - c.by));
 }
 
 /** True when two carriers lie on the same line or the same circle (within tol). */
 export function sameCurve(a: Carrier, b: Carrier, tol: number): boolean {
   if (a.kind !== b.kind) return false;
-  if (a.kind === ARC) return Math.abs(a.r - b.r) <= tol && hyp(a.cx - b.cx, a.cy - b.cy) <= tol;
+  if (a.kind === ARC) return Math.abs(a.r - b.r) <= tol && lengthOf(a.cx - b.cx, a.cy - b.cy) <= tol;
   if (!(distToCurve(a, b.ax, b.ay) <= tol && distToCurve(a, b.bx, b.by) <= tol)) return false;
   if (a.flat === 0 && b.flat === 0) return true;
   // A flat arc is not its chord: the middle of b's true curve must lie on a's true curve too.
   const [mx, my] = curvePoint(b, 0.5);
   const [f, gx, gy] = implicitAt(a, mx, my);
-  return Math.abs(f) <= tol * hyp(gx, gy);
+  return Math.abs(f) <= tol * lengthOf(gx, gy);
 }
 
 /**
@@ -389,7 +386,7 @@ function lineCircle(l: Carrier, cx: number, cy: number, r: number, tanTol: numbe
   if (L === 0) return [];
   const ux = dx / L, uy = dy / L;
   // Foot of the perpendicular from the centre, measured from the nearer endpoint.
-  const useA = hyp(cx - l.ax, cy - l.ay) <= hyp(cx - l.bx, cy - l.by);
+  const useA = lengthOf(cx - l.ax, cy - l.ay) <= lengthOf(cx - l.bx, cy - l.by);
   const ox = useA ? l.ax : l.bx, oy = useA ? l.ay : l.by;
   const t0 = (cx - ox) * ux + (cy - oy) * uy;
   const fx = ox + t0 * ux, fy = oy + t0 * uy;
@@ -403,7 +400,7 @@ function lineCircle(l: Carrier, cx: number, cy: number, r: number, tanTol: numbe
 
 function circleCircle(x1: number, y1: number, r1: number, x2: number, y2: number, r2: number, tanTol: number): number[] {
   const dx = x2 - x1, dy = y2 - y1;
-  const D = hyp(dx, dy);
+  const D = lengthOf(dx, dy);
   if (D <= tanTol) return [];
   if (D > r1 + r2 + tanTol) return [];
   if (D < Math.abs(r1 - r2) - tanTol) return [];
@@ -422,7 +419,7 @@ function circleCircle(x1: number, y1: number, r1: number, x2: number, y2: number
 export function nearestPoint(pts: number[], x: number, y: number): number {
   let best = -1, bd = Infinity;
   for (let k = 0; k < pts.length; k += 2) {
-    const d = hyp(pts[k] - x, pts[k + 1] - y);
+    const d = lengthOf(pts[k] - x, pts[k + 1] - y);
     if (d < bd) {
       bd = d;
       best = k;
@@ -449,7 +446,7 @@ export function windingOf(c: Carrier, x: number, y: number): number {
     if (by > y && side > 0) w++;
   } else if (by <= y && side < 0) w--;
   if (c.kind === ARC) {
-    const d = hyp(x - c.cx, y - c.cy);
+    const d = lengthOf(x - c.cx, y - c.cy);
     const inCircle = d < c.r || (d === c.r && (y < c.cy || (y === c.cy && x < c.cx)));
     // Inside the circle and on the arc's side of the chord (for phi > 0 the arc bulges to the
     // right of a->b): inside the circular segment.

@@ -6,9 +6,9 @@
  * say whether it is a loop of the result (kept whole, or a crack cut out of it), or whether one
  * of its pieces bounds the result, which the trace then takes for the shared chord.
  */
-import { reverseContour, type Contour } from '../geometry/contour';
+import { lengthOf, reverseContour, type Contour } from '../geometry/contour';
 import { regionMomentsAbout } from '../moments/kernel';
-import { ARC, curvePoint, paramOf, sameCurve, wrapAngle, hyp, type Carrier } from './carriers';
+import { ARC, curvePoint, paramOf, sameCurve, wrapAngle, type Carrier } from './carriers';
 import { find, type Ctx } from './context';
 import { classify } from './spatial';
 
@@ -66,7 +66,7 @@ function settle(ctx: Ctx, c1: number, c2: number, n1: number, n2: number): void 
   const [bx, by] = pieceMiddle(ctx, ctx.carriers[c2], n1, n2);
   const dx = ax - bx, dy = ay - by;
   // Thinner than the coordinates resolve: nothing to settle.
-  if (!(hyp(dx, dy) > 64 * Number.EPSILON * (ctx.ext + Math.abs(ctx.ox) + Math.abs(ctx.oy)))) return;
+  if (!(lengthOf(dx, dy) > 64 * Number.EPSILON * (ctx.ext + Math.abs(ctx.ox) + Math.abs(ctx.oy)))) return;
   const inside = classify(ctx, (ax + bx) / 2, (ay + by) / 2);
   const out1 = classify(ctx, ax + dx, ay + dy);
   const out2 = classify(ctx, bx - dx, by - dy);
@@ -116,8 +116,8 @@ export function digonPick(ctx: Ctx, cands: readonly number[], px: number, py: nu
   const tol = 8 * ctx.unit;
   for (const g of ctx.digonsOf.get(cands[0]) ?? []) {
     if (g.pick < 0 || !cands.includes(g.c1) || !cands.includes(g.c2)) continue;
-    const d1 = hyp(ctx.nx[g.n1] - px, ctx.ny[g.n1] - py) + hyp(ctx.nx[g.n2] - qx, ctx.ny[g.n2] - qy);
-    const d2 = hyp(ctx.nx[g.n2] - px, ctx.ny[g.n2] - py) + hyp(ctx.nx[g.n1] - qx, ctx.ny[g.n1] - qy);
+    const d1 = lengthOf(ctx.nx[g.n1] - px, ctx.ny[g.n1] - py) + lengthOf(ctx.nx[g.n2] - qx, ctx.ny[g.n2] - qy);
+    const d2 = lengthOf(ctx.nx[g.n2] - px, ctx.ny[g.n2] - py) + lengthOf(ctx.nx[g.n1] - qx, ctx.ny[g.n1] - qy);
     if (Math.min(d1, d2) <= 2 * tol) return g.pick;
   }
   return -1;

@@ -15,9 +15,9 @@
  */
 import ClipperLib from 'clipper-lib';
 import type { IntPoint } from 'clipper-lib';
-import type { Contour, Region } from '../geometry/contour';
+import { lengthOf, type Contour, type Region } from '../geometry/contour';
 import { buildArrangement, buildCarriers } from './arrangement';
-import { CarrierStore, hyp } from './carriers';
+import { CarrierStore } from './carriers';
 import { buildPaths, resetPaths } from './chords';
 import { INT_RANGE, REL_EPS, type Ctx, type Mode, type SourceGroup } from './context';
 import { digonLoops, findDigons } from './digons';
@@ -46,7 +46,7 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
         const b = c.bulge ? c.bulge[i] : 0;
         if (b !== 0 && Number.isFinite(b)) {
           const j = i + 1 === n ? 0 : i + 1;
-          const L = hyp(xy[2 * j] - x, xy[2 * j + 1] - y);
+          const L = lengthOf(xy[2 * j] - x, xy[2 * j + 1] - y);
           // Height of the arc above its chord, or its whole diameter for a sweep over 180 deg.
           h = Math.abs(b) <= 1 ? (Math.abs(b) * L) / 2 : (L / 2) * (Math.abs(b) + 1 / Math.abs(b));
           if (!Number.isFinite(h)) h = 0;

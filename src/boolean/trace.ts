@@ -4,11 +4,11 @@
  * carrier become one exact segment, and run ends land on exact nodes or carrier intersections.
  */
 import type { IntPoint } from 'clipper-lib';
-import { pushArc, type Contour } from '../geometry/contour';
+import { lengthOf, pushArc, type Contour } from '../geometry/contour';
 import { regionMomentsAbout } from '../moments/kernel';
 import {
   ARC, LINE, curveIntersections, curvePoint, distToCurve, nearestPoint, paramOf, polishIntersection,
-  sameCurve, wrapAngle, hyp, type Carrier,
+  sameCurve, wrapAngle, type Carrier,
 } from './carriers';
 import { type Ctx, find, nodeCarriers } from './context';
 import { digonPick, pieceSweep } from './digons';
@@ -83,7 +83,7 @@ function resolveTie(ctx: Ctx, all: number[], px: number, py: number, qx: number,
   // A digon (two pieces on one chord, digons.ts) knows exactly which of its pieces bounds.
   const pick = digonPick(ctx, cands, px, py, qx, qy);
   if (pick >= 0) return pick;
-  const L = hyp(qx - px, qy - py);
+  const L = lengthOf(qx - px, qy - py);
   if (!(L > 0)) return cands[0];
   const nx = -(qy - py) / L, ny = (qx - px) / L; // left normal; the tangent at a piece middle is parallel to q - p
   const mids = cands.map((c) => pieceMid(cs[c], px, py, qx, qy));
@@ -93,7 +93,7 @@ function resolveTie(ctx: Ctx, all: number[], px: number, py: number, qx: number,
     let delta = 0.25 * L;
     for (let o = 0; o < cands.length; o++) {
       if (o === k) continue;
-      const d = hyp(mids[o][0] - mx, mids[o][1] - my);
+      const d = lengthOf(mids[o][0] - mx, mids[o][1] - my);
       if (d > 100 * ctx.eps) delta = Math.min(delta, 0.25 * d);
     }
     if (!(delta > 10 * ctx.eps)) continue;
@@ -180,7 +180,7 @@ function placeVertex(ctx: Ctx, a: number, b: number, px: number, py: number, rec
   for (const na of [ca.n0, ca.n1]) {
     const ra = find(ctx, na);
     if (ra !== find(ctx, cb.n0) && ra !== find(ctx, cb.n1)) continue;
-    const d = hyp(ctx.nx[ra] - px, ctx.ny[ra] - py);
+    const d = lengthOf(ctx.nx[ra] - px, ctx.ny[ra] - py);
     if (d <= bd) {
       bd = d;
       best = ra;
@@ -199,18 +199,18 @@ function placeVertex(ctx: Ctx, a: number, b: number, px: number, py: number, rec
       let lim = 8 * ctx.unit;
       if (ca.kind === ARC) lim += 0.2 * ca.r;
       if (cb.kind === ARC) lim += 0.2 * cb.r;
-      if (hyp(x - px, y - py) <= lim) return [x, y];
+      if (lengthOf(x - px, y - py) <= lim) return [x, y];
     }
     // Near-tangent circles with no common point: the point of closest approach.
     if (ca.kind === ARC && cb.kind === ARC) {
-      const d = hyp(cb.cx - ca.cx, cb.cy - ca.cy);
+      const d = lengthOf(cb.cx - ca.cx, cb.cy - ca.cy);
       if (d > 0) {
         // Apart: towards the other centre. Nested: the small circle's far side, the big one's near side.
         const nested = d < Math.abs(ca.r - cb.r) + ctx.eps;
         const sgn = !nested || ca.r >= cb.r ? 1 : -1;
         const ux = (cb.cx - ca.cx) / d, uy = (cb.cy - ca.cy) / d;
         const x = ca.cx + sgn * ca.r * ux, y = ca.cy + sgn * ca.r * uy;
-        if (hyp(x - px, y - py) <= 0.2 * Math.min(ca.r, cb.r) + 8 * ctx.unit) return [x, y];
+        if (lengthOf(x - px, y - py) <= 0.2 * Math.min(ca.r, cb.r) + 8 * ctx.unit) return [x, y];
       }
     }
   }
@@ -226,7 +226,7 @@ function projectOnto(c: Carrier, x: number, y: number): [number, number] {
     const u = paramOf(c, x, y);
     return [c.ax + u * (c.bx - c.ax), c.ay + u * (c.by - c.ay)];
   }
-  const d = hyp(x - c.cx, y - c.cy);
+  const d = lengthOf(x - c.cx, y - c.cy);
   if (d === 0) return [c.ax, c.ay];
   return [c.cx + ((x - c.cx) * c.r) / d, c.cy + ((y - c.cy) * c.r) / d];
 }
@@ -420,7 +420,7 @@ export function tracePath(ctx: Ctx, path: IntPoint[]): Contour | null {
   for (let k = 0; k < R; k++) {
     const k2 = (k + 1) % R;
     const ax = vx[k], ay = vy[k], bx = vx[k2], by = vy[k2];
-    if (hyp(bx - ax, by - ay) <= ctx.eps) continue;
+    if (lengthOf(bx - ax, by - ay) <= ctx.eps) continue;
     const c = ctx.carriers[runC[k]];
     oxy.push(ax, ay);
     const d = pieceSweep(c, ax, ay, bx, by);
