@@ -132,8 +132,12 @@ export function snapPoints(shapes: readonly ShapeResult[], intersections: boolea
     own.forEach((o, i) =>
       o.boxes.forEach((b, k) => {
         const pad = 1e-8 * Math.max(b[2] - b[0], b[3] - b[1]);
-        const id = index.add(b[0] - pad, b[1] - pad, b[2] + pad, b[3] + pad);
-        padded.set([b[0] - pad, b[1] - pad, b[2] + pad, b[3] + pad], 4 * id);
+        const x0 = b[0] - pad, y0 = b[1] - pad, x1 = b[2] + pad, y1 = b[3] + pad;
+        const id = index.add(x0, y0, x1, y1);
+        padded[4 * id] = x0;
+        padded[4 * id + 1] = y0;
+        padded[4 * id + 2] = x1;
+        padded[4 * id + 3] = y1;
         shapeOf[id] = i;
         segOf[id] = k;
       }),
