@@ -14,9 +14,20 @@ import { type Ctx, find, nodeCarriers } from './context';
 import { digonPick, pieceSweep } from './digons';
 import { carrierIndex, carriersInBox, classify } from './spatial';
 
-/** Whether two short lists share an element (no allocation). */
-function shareAny(a: readonly number[], b: readonly number[]): boolean {
-  for (let i = 0; i < a.length; i++) if (b.includes(a[i])) return true;
+/**
+ * True when the clipper edge p -> q lies along a carrier that both its ends are on (no
+ * allocation). Two nodes can share an arc that the edge does not follow: where a circle crosses
+ * two fillets, the edge between the crossings runs along the fillets and the straight edge
+ * between them, not along the circle. Two points of one straight edge, or an end on one carrier
+ * only (a chord point, which starts the edge along that carrier), need no such check.
+ */
+function sharedCarrierFits(ctx: Ctx, a: readonly number[], b: readonly number[], px: number, py: number, qx: number, qy: number): boolean {
+  const nodes = a.length > 1 && b.length > 1;
+  for (let i = 0; i < a.length; i++) {
+    if (!b.includes(a[i])) continue;
+    const c = ctx.carriers[a[i]];
+    if (!nodes || (c.kind !== ARC && c.flat === 0) || fitsEdge(ctx, c, px, py, qx, qy)) return true;
+  }
   return false;
 }
 
@@ -191,14 +202,32 @@ function placeVertex(ctx: Ctx, a: number, b: number, px: number, py: number, rec
   for (const r of recs) {
     if (ctx.rExact[r] && ctx.rCar[r].includes(a) && ctx.rCar[r].includes(b)) return [ctx.rx[r], ctx.ry[r]];
   }
+  let lim = 8 * ctx.unit;
+  if (ca.kind === ARC) lim += 0.2 * ca.r;
+  if (cb.kind === ARC) lim += 0.2 * cb.r;
+  // A crossing clipper made of two chords near a node of both carriers (a near-tangent crossing
+  // puts it units away): the arrangement's node, the nearest one if they meet twice. Computing
+  // the crossing again would take a crossing within the looser tolerance below for a tangent.
+  const sa = ctx.splits[a];
+  if (sa) {
+    best = -1;
+    bd = lim;
+    for (const s of sa) {
+      const r = find(ctx, s);
+      if (!nodeCarriers(ctx, r).includes(b)) continue;
+      const d = lengthOf(ctx.nx[r] - px, ctx.ny[r] - py);
+      if (d <= bd) {
+        bd = d;
+        best = r;
+      }
+    }
+    if (best >= 0) return [ctx.nx[best], ctx.ny[best]];
+  }
   if (!sameCurve(ca, cb, ctx.eps)) {
     const pts = curveIntersections(ca, cb, 1e3 * ctx.eps);
     const k = nearestPoint(pts, px, py);
     if (k >= 0) {
       const [x, y] = polishIntersection(ca, cb, pts[k], pts[k + 1]);
-      let lim = 8 * ctx.unit;
-      if (ca.kind === ARC) lim += 0.2 * ca.r;
-      if (cb.kind === ARC) lim += 0.2 * cb.r;
       if (lengthOf(x - px, y - py) <= lim) return [x, y];
     }
     // Near-tangent circles with no common point: the point of closest approach.
@@ -374,7 +403,7 @@ export function tracePath(ctx: Ctx, path: IntPoint[]): Contour | null {
     rec.push(trec[i]);
     sets.push(tsets[i]);
     const j = i + 1 === m0 ? 0 : i + 1;
-    if (shareAny(tsets[i], tsets[j])) continue;
+    if (sharedCarrierFits(ctx, tsets[i], tsets[j], tx[i], ty[i], tx[j], ty[j])) continue;
     for (const nd of droppedBetween(ctx, tsets[i], tsets[j], tx[i], ty[i], tx[j], ty[j])) {
       px.push(ctx.nx[nd]);
       py.push(ctx.ny[nd]);
