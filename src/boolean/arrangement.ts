@@ -4,10 +4,11 @@
  */
 import { arcFromBulge, lengthOf, pushArc } from '../geometry/contour';
 import {
-  ARC, curveIntersections, distToCarrier, implicitAt, makeArc, makeLine, paramOf, polishIntersection,
-  sameCurve, type Carrier,
+  ARC, curveIntersections, distToCarrier, distToCurve, implicitAt, makeArc, makeLine, paramOf, polishIntersection,
+  sameCurve, wrapAngle, type Carrier,
 } from './carriers';
 import { type Ctx, type SourceGroup, find, union, newNode, nodeCarriers, SAG_MAX, SAG_FLOOR, FLAT_RADIUS } from './context';
+import { NODE_UNITS } from './grid';
 import { forEachNearPair } from './spatial';
 
 /** Step 1: carriers and vertex nodes from the source contours. */
@@ -79,19 +80,22 @@ export function buildCarriers(ctx: Ctx, groups: readonly SourceGroup[]): void {
         const id = first + i;
         let car: Carrier;
         // A nearly flat arc (radius far beyond the extent, where centre-based formulas lose
-        // their digits) is traced as its chord and gets its sweep back on output.
-        const phi = b !== 0 ? 4 * Math.atan(b) : 0;
+        // their digits) is traced as its chord and gets its sweep back on output. One that rises
+        // less than 1e-20 of the extent above its chord is a straight edge here (a bulge of 4e-323
+        // is a subnormal number with a digit or two, and its square is zero): the area between
+        // them is far below round-off.
+        const flatOut = b !== 0 && Math.abs(b) * lengthOf(bx - ax, by - ay) < 2e-20 * ctx.ext;
+        const phi = b !== 0 && !flatOut ? 4 * Math.atan(b) : 0;
         const rr = phi !== 0 ? lengthOf(bx - ax, by - ay) / (2 * Math.sin(Math.abs(phi) / 2)) : Infinity;
         if (phi !== 0 && rr <= FLAT_RADIUS * ctx.ext) {
           const { cx, cy, r } = arcFromBulge(ax, ay, bx, by, b);
           car = makeArc(ctx.store, id, g.group, ax, ay, bx, by, cx, cy, r, phi, b);
-        } else car = makeLine(ctx.store, id, g.group, ax, ay, bx, by, phi, b);
+        } else car = makeLine(ctx.store, id, g.group, ax, ay, bx, by, phi, phi === 0 ? 0 : b);
         car.n0 = node0 + i;
         car.n1 = node0 + j;
         ctx.carriers.push(car);
         ctx.splits.push(null);
-        ctx.sag.push(car.kind === ARC ? SAG_MAX * car.r : 0);
-        ctx.side.push(0);
+        ctx.near.push(null);
         ctx.chordSag.push(0);
         ids[i] = id;
       }
@@ -155,9 +159,6 @@ function intersectPair(ctx: Ctx, a: Carrier, b: Carrier): void {
     if (distToCarrier(b, a.bx, a.by) <= eps) sharePoint(ctx, a, b, a.bx, a.by);
     return;
   }
-  if (a.kind === ARC && b.kind === ARC) refineNested(ctx, a, b);
-  if (a.kind === ARC) refineNearVertex(ctx, a, b);
-  if (b.kind === ARC) refineNearVertex(ctx, b, a);
   const pts = curveIntersections(a, b, eps);
   for (let k = 0; k < pts.length; k += 2) {
     let x = pts[k], y = pts[k + 1];
@@ -204,28 +205,97 @@ function distExact(c: Carrier, x: number, y: number): number {
 
 /**
  * Which side an arc's chords must keep to. Inscribed chords cut inside the circle by up to the
- * sagitta, circumscribed ones (tangent segments) stay outside it. Features that come closer to
- * an arc than the sagitta, without meeting it, demand a side: a nested circle just inside wants
- * the outer arc circumscribed and the inner one inscribed; a vertex just inside wants the arc
- * circumscribed, one just outside wants it inscribed. Both demands at once: finer chords.
+ * sagitta, circumscribed ones (tangent segments) stay outside it. Whatever comes closer to an
+ * arc than that demands a side of the pieces near it: what lies just inside wants them
+ * circumscribed, what lies just outside wants them inscribed, each with its distance from the
+ * arc (its gap). A piece with both demands keeps to the side whose gap is the larger, with chords
+ * fine enough to stay within that gap (chords.ts).
+ *
+ * A nested circle is near all round; a vertex, a straight edge that runs just outside, or a
+ * circle alongside is near some pieces; a nearly equal circle that crosses the arc is inside it
+ * along one lune and outside along the other, so each piece takes the side of its own lune.
  */
 export const INSCRIBE = 1;
 export const CIRCUMSCRIBE = 2;
 
-function demand(ctx: Ctx, c: Carrier, side: number, gap: number): void {
-  ctx.side[c.id] |= side;
-  const want = Math.max(gap / 2.5, SAG_FLOOR * c.r);
-  if (want < ctx.sag[c.id]) ctx.sag[c.id] = want;
+/** The sagitta allowed for chords that must pass between an arc and a feature `gap` away. */
+export function sagFor(c: Carrier, gap: number): number {
+  return Math.max(gap / 2.5, SAG_FLOOR * c.r);
 }
 
-/** Nested, nearly tangent circles (the inner within a sagitta of the outer). */
+/** Numbers per record of ctx.near, and the two kinds of record. */
+export const NEAR_SIZE = 6;
+/**
+ * [NEAR_ZONE, angle, half, side, gap, 0]: something `gap` from the arc within `half` radians of
+ * the direction `angle` from its centre; it demands `side` of every piece that reaches into
+ * that zone.
+ */
+export const NEAR_ZONE = 0;
+/**
+ * [NEAR_CIRCLE, cx, cy, r, tIn, tOut]: a nearly equal circle that crosses the arc's circle. A
+ * piece inside it borders the lune of thickness tIn (the other circle is just outside the arc
+ * there: inscribe), a piece outside it the lune of thickness tOut (circumscribe).
+ */
+export const NEAR_CIRCLE = 1;
+/**
+ * How near (times the radius) something must come to an arc to demand a side: beyond the
+ * chords' reach, SAG_MAX r inside and up to 2.3 SAG_MAX r outside, with a margin.
+ */
+export const LUNE_MAX = 4 * SAG_MAX;
+
+function nearDemand(ctx: Ctx, c: Carrier, kind: number, a: number, b: number, d: number, e: number, f: number): void {
+  const list = (ctx.near[c.id] ??= []);
+  list.push(kind, a, b, d, e, f);
+}
+
+/** Nested, nearly tangent circles (the inner within a sagitta of the outer): a's side all round. */
 function refineNested(ctx: Ctx, a: Carrier, b: Carrier): void {
   const D = lengthOf(a.cx - b.cx, a.cy - b.cy);
   const gap = Math.abs(a.r - b.r) - D;
-  const outer = a.r >= b.r ? a : b, inner = outer === a ? b : a;
-  if (!(gap > 0) || gap >= 2 * SAG_MAX * outer.r) return;
-  demand(ctx, outer, CIRCUMSCRIBE, gap);
-  demand(ctx, inner, INSCRIBE, gap);
+  if (!(gap > 0) || gap >= 2 * SAG_MAX * Math.max(a.r, b.r)) return;
+  nearDemand(ctx, a, NEAR_ZONE, 0, Math.PI, a.r >= b.r ? CIRCUMSCRIBE : INSCRIBE, gap, 0);
+}
+
+/**
+ * Circles that cross, or pass each other, closer than the chords' reach.
+ *
+ * Nearly equal circles with nearly the same centre: the two lunes between them (each bounded by
+ * one piece of either arc between the crossings) are thin. Along each lune the outer piece must
+ * be circumscribed and the inner one inscribed.
+ *
+ * Circles side by side that nearly touch, or overlap in a thin lens: each arc keeps inside its
+ * own circle near the other one (inscribed chords on both never meet, the lens's common chord
+ * lies between them).
+ */
+function refineCrossing(ctx: Ctx, a: Carrier, b: Carrier): void {
+  const D = lengthOf(a.cx - b.cx, a.cy - b.cy);
+  if (!(D > Math.abs(a.r - b.r))) return; // nested: refineNested
+  if (D < a.r + b.r) {
+    // Along the side of a facing b's centre, b reaches D + rb - ra beyond a; on the far side,
+    // a reaches D + ra - rb beyond b.
+    const tIn = D + b.r - a.r, tOut = D + a.r - b.r;
+    if (Math.min(tIn, tOut) < LUNE_MAX * Math.max(a.r, b.r)) {
+      if (!hasCircle(ctx, a, b)) nearDemand(ctx, a, NEAR_CIRCLE, b.cx, b.cy, b.r, tIn, tOut);
+      return;
+    }
+  }
+  const lim = LUNE_MAX * a.r, gap = Math.abs(D - a.r - b.r);
+  if (!(gap < lim)) return;
+  // The zone of a within lim of b's circle: the angle θ from the centre line where
+  // ra^2 + D^2 - 2 ra D cos θ = (rb + lim)^2.
+  const cosA = (a.r * a.r + D * D - (b.r + lim) * (b.r + lim)) / (2 * a.r * D);
+  const half = Math.acos(Math.max(-1, Math.min(1, cosA)));
+  nearDemand(ctx, a, NEAR_ZONE, Math.atan2(b.cy - a.cy, b.cx - a.cx), half, INSCRIBE, gap, 0);
+}
+
+/** True when arc c already has a demand from o's circle (another arc of it, a half circle's other half). */
+function hasCircle(ctx: Ctx, c: Carrier, o: Carrier): boolean {
+  const list = ctx.near[c.id];
+  if (!list) return false;
+  for (let k = 0; k < list.length; k += NEAR_SIZE) {
+    if (list[k] === NEAR_CIRCLE && list[k + 1] === o.cx && list[k + 2] === o.cy && list[k + 3] === o.r) return true;
+  }
+  return false;
 }
 
 /** Vertices of b within a sagitta of arc a, inside or outside. */
@@ -237,8 +307,97 @@ function refineNearVertex(ctx: Ctx, a: Carrier, b: Carrier): void {
     if (!(gap > ctx.eps) || gap >= 1.5 * SAG_MAX * a.r || !(d > 0)) continue;
     const u = paramOf(a, x, y);
     if (u <= 0 || u >= 1) continue;
-    demand(ctx, a, d < a.r ? CIRCUMSCRIBE : INSCRIBE, gap);
+    // The piece under the vertex, and a piece that starts within two gaps of it along the arc.
+    const half = (2 * gap + 3 * ctx.unit) / a.r;
+    nearDemand(ctx, a, NEAR_ZONE, Math.atan2(y - a.cy, x - a.cx), half, d < a.r ? CIRCUMSCRIBE : INSCRIBE, gap, 0);
   }
+}
+
+/**
+ * A straight edge b that passes just outside arc a (or crosses its circle at a shallow angle):
+ * where b runs outside the circle within the chords' reach, a's chords must keep inside it.
+ * (Inside the circle b's ends are nearest to the arc: refineNearVertex.)
+ */
+function refineNearLine(ctx: Ctx, a: Carrier, b: Carrier): void {
+  const L = b.len;
+  if (!(L > 0)) return;
+  const ux = (b.bx - b.ax) / L, uy = (b.by - b.ay) / L;
+  const s0 = -((a.cx - b.ax) * ux + (a.cy - b.ay) * uy); // b's start, measured from the foot
+  const h = Math.abs((a.cx - b.ax) * uy - (a.cy - b.ay) * ux);
+  const lim = LUNE_MAX * a.r;
+  if (!(h < a.r + lim)) return;
+  const fx = b.ax - s0 * ux, fy = b.ay - s0 * uy; // foot of the perpendicular from the centre
+  const far = Math.sqrt((a.r + lim - h) * (a.r + lim + h));
+  const near = h < a.r ? Math.sqrt((a.r - h) * (a.r + h)) : 0; // inside the circle for |s| < near
+  // Outside: b's distance from the arc. Crossing at angle θ (sin θ = near / r): b's distance from
+  // the circle a fifth of the radius along from the crossing; closer to it, chords that cross b
+  // on clipper's side still hand over at that crossing (trace.ts, placeVertex).
+  const gap = h >= a.r ? h - a.r : 0.2 * near;
+  for (const sg of [-1, 1]) {
+    // The part of b with near <= sg·s <= far.
+    const lo = Math.max(near, sg > 0 ? s0 : -(s0 + L)), hi = Math.min(far, sg > 0 ? s0 + L : -s0);
+    if (!(hi >= lo)) continue;
+    const t1 = Math.atan2(fy + sg * lo * uy - a.cy, fx + sg * lo * ux - a.cx);
+    const t2 = Math.atan2(fy + sg * hi * uy - a.cy, fx + sg * hi * ux - a.cx);
+    const d = wrapAngle(t2 - t1);
+    nearDemand(ctx, a, NEAR_ZONE, t1 + d / 2, Math.abs(d) / 2, INSCRIBE, gap, 0);
+  }
+}
+
+/**
+ * What comes near the carriers of the loops that go to clipper (contacts need boxes that meet;
+ * this needs boxes that come near, so it has a broad phase of its own, and loops that skip
+ * clipper skip it):
+ * - the sides each arc's chords must keep to (see INSCRIBE above), from every carrier within the
+ *   chords' reach of it (its box widened by twice LUNE_MAX r);
+ * - ctx.nearGap, the smallest distance from a vertex to a carrier it does not touch, which asks
+ *   grid.ts for a finer grid when it is below a few grid units: two edges that cross at an angle
+ *   of 1e-8 part by less than a unit over most of their length, and only a finer grid shows
+ *   clipper the slivers between them.
+ */
+export function demandSides(ctx: Ctx, loops: readonly number[]): void {
+  const cs = ctx.carriers;
+  const ids: number[] = [];
+  const grow = new Float64Array(cs.length);
+  const g = NODE_UNITS * ctx.unit;
+  for (const l of loops) {
+    for (const id of ctx.loops[l].ids) {
+      ids.push(id);
+      grow[id] = cs[id].kind === ARC ? Math.max(g, 2 * LUNE_MAX * cs[id].r) : g;
+    }
+  }
+  forEachNearPair(ctx, (a, b) => {
+    if (ctx.trustLoops && ctx.loopLo[a.id] === ctx.loopLo[b.id]) {
+      // Neighbours on a loop meet at their shared vertex, which demands nothing.
+      const d = Math.abs(a.id - b.id);
+      if (d === 1 || d === ctx.loopHi[a.id] - ctx.loopLo[a.id]) return;
+    }
+    noteGap(ctx, a, b.ax, b.ay, g);
+    noteGap(ctx, a, b.bx, b.by, g);
+    noteGap(ctx, b, a.ax, a.ay, g);
+    noteGap(ctx, b, a.bx, a.by, g);
+    if ((a.kind !== ARC && b.kind !== ARC) || sameCurve(a, b, ctx.eps)) return;
+    if (a.kind === ARC) demandsOf(ctx, a, b);
+    if (b.kind === ARC) demandsOf(ctx, b, a);
+  }, ids, grow);
+}
+
+/** A vertex (x, y) within g of carrier c but not on it: ctx.nearGap. */
+function noteGap(ctx: Ctx, c: Carrier, x: number, y: number, g: number): void {
+  if (x < c.xmin - g || x > c.xmax + g || y < c.ymin - g || y > c.ymax + g) return;
+  // The whole line or circle first (no angle to compute): the piece is no nearer than that.
+  if (c.flat === 0 && distToCurve(c, x, y) > g) return;
+  const d = distExact(c, x, y);
+  if (d > ctx.eps && d < ctx.nearGap) ctx.nearGap = d;
+}
+
+/** The demands that carrier b makes of arc a. */
+function demandsOf(ctx: Ctx, a: Carrier, b: Carrier): void {
+  if (b.kind === ARC) {
+    refineNested(ctx, a, b);
+    refineCrossing(ctx, a, b);
+  } else refineNearLine(ctx, a, b);
+  refineNearVertex(ctx, a, b);
 }
 
 /** Step 2: all pairwise contacts; the broad phase is spatial.ts forEachNearPair. */

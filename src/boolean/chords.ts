@@ -3,9 +3,10 @@
  * short chords, and every point is tagged (Z = record index + 1) with its vertex record.
  */
 import type { IntPoint } from 'clipper-lib';
-import { ARC, paramOf, pointAt } from './carriers';
-import { CIRCUMSCRIBE, INSCRIBE } from './arrangement';
-import { type Ctx, find, FREE_STEP, MAX_STEP, nodeCarriers, SAG_MAX } from './context';
+import { lengthOf } from '../geometry/contour';
+import { ARC, curvePoint, paramOf, pointAt, wrapAngle, type Carrier } from './carriers';
+import { CIRCUMSCRIBE, INSCRIBE, LUNE_MAX, NEAR_SIZE, NEAR_ZONE, sagFor } from './arrangement';
+import { type Ctx, find, FREE_STEP, MAX_STEP, nodeCarriers } from './context';
 import { NODE_UNITS } from './grid';
 
 function pushVertex(ctx: Ctx, path: IntPoint[], x: number, y: number, exact: boolean, car: number[]): void {
@@ -36,6 +37,62 @@ function mergeRecord(ctx: Ctx, id: number, x: number, y: number, exact: boolean,
   ctx.rCar[id] = merged;
 }
 
+/** Largest height (integer units) of a flat arc's piece above the chord clipper is given for it. */
+const FLAT_UNITS = 0.5;
+
+/**
+ * What ctx.near demands of one piece (set by pieceDemands): the sides (INSCRIBE | CIRCUMSCRIBE),
+ * the smallest gap to something inside the arc (which circumscribed chords never reach, and
+ * inscribed ones must not) and to something outside (the other way round), and whether the
+ * piece runs between two crossings with a circle within a few grid units of it.
+ */
+let pieceSide = 0;
+let pieceGapIn = Infinity;
+let pieceGapOut = Infinity;
+let pieceHug = false;
+
+/**
+ * The demands of ctx.near that apply to the piece [ua, ub] of arc c: a zone's when the piece
+ * reaches into it, a crossing circle's by which side of that circle the piece lies on (its
+ * middle, and its ends where they are clear of the circle: a piece that passes from one side
+ * to the other, where the circles cross outside the other arc's range, takes both).
+ */
+function pieceDemands(ctx: Ctx, c: Carrier, near: readonly number[], ua: number, ub: number): void {
+  pieceSide = 0;
+  pieceGapIn = Infinity;
+  pieceGapOut = Infinity;
+  pieceHug = false;
+  for (let k = 0; k < near.length; k += NEAR_SIZE) {
+    if (near[k] === NEAR_ZONE) {
+      // The piece's angular range (from the centre) meets the zone's.
+      const mid = c.t0 + c.phi * ((ua + ub) / 2), half = (Math.abs(c.phi) * (ub - ua)) / 2;
+      if (!(Math.abs(wrapAngle(mid - near[k + 1])) <= near[k + 2] + half)) continue;
+      demandOfPiece(near[k + 3], near[k + 4]);
+      continue;
+    }
+    const ox = near[k + 1], oy = near[k + 2], or = near[k + 3], lim = LUNE_MAX * Math.max(c.r, or);
+    let on = 0;
+    for (let s = 0; s < 3; s++) {
+      const u = s === 0 ? (ua + ub) / 2 : s === 1 ? ua : ub;
+      const t = c.t0 + c.phi * u;
+      const d = lengthOf(c.cx + c.r * Math.cos(t) - ox, c.cy + c.r * Math.sin(t) - oy) - or;
+      if (!(Math.abs(d) > 3 * ctx.unit)) {
+        on++; // on the other circle as far as the grid can tell (at a crossing, or a lune below the grid)
+        continue;
+      }
+      const gap = d < 0 ? near[k + 4] : near[k + 5];
+      if (gap < lim) demandOfPiece(d < 0 ? INSCRIBE : CIRCUMSCRIBE, gap);
+    }
+    if (on === 3) pieceHug = true;
+  }
+}
+
+function demandOfPiece(side: number, gap: number): void {
+  pieceSide |= side;
+  if (side === INSCRIBE) pieceGapOut = Math.min(pieceGapOut, gap);
+  else pieceGapIn = Math.min(pieceGapIn, gap);
+}
+
 /** Forgets the records and pieces of a first build of the paths (before a finer grid). */
 export function resetPaths(ctx: Ctx): void {
   for (const a of [ctx.rx, ctx.ry, ctx.rX, ctx.rY, ctx.rExact, ctx.rCar, ctx.rAll, ctx.rAlt, ctx.chordPieces]) a.length = 0;
@@ -54,7 +111,10 @@ export function buildPaths(ctx: Ctx, loops: readonly number[]): { subj: IntPoint
       const c = cs[id];
       const r0 = find(ctx, c.n0), r1 = find(ctx, c.n1);
       if (r0 === r1) continue; // collapsed by merging
-      if (c.kind !== ARC && !ctx.splits[id]) {
+      // A flat arc (kept as its chord, carriers.ts) whose height above the chord clipper would
+      // see: its pieces get chords of their own, so no feature within that height is misplaced.
+      const flatUnits = c.flat === 0 ? 0 : (c.len / 2) * Math.abs(Math.tan(c.flat / 4)) * ctx.scale;
+      if (c.kind !== ARC && !ctx.splits[id] && flatUnits <= FLAT_UNITS) {
         // A straight edge with no node inside: its start vertex is all clipper needs.
         pushVertex(ctx, path, ctx.nx[r0], ctx.ny[r0], true, nodeCarriers(ctx, r0));
         ctx.chordPieces.push(id, r0, r1);
@@ -76,23 +136,47 @@ export function buildPaths(ctx: Ctx, loops: readonly number[]): { subj: IntPoint
         const nd = seq[k].n;
         pushVertex(ctx, path, ctx.nx[nd], ctx.ny[nd], true, nodeCarriers(ctx, nd));
         if (c.kind !== ARC) {
-          ctx.chordPieces.push(id, nd, seq[k + 1].n);
+          const ua = seq[k].u, ub = seq[k + 1].u;
+          // Height of the piece above its own chord: the arc's height times the square of its share.
+          const cnt = flatUnits === 0 ? 1 : Math.ceil(Math.sqrt((flatUnits * (ub - ua) * (ub - ua)) / FLAT_UNITS));
+          if (cnt <= 1) ctx.chordPieces.push(id, nd, seq[k + 1].n);
+          for (let j = 1; j < cnt; j++) {
+            const [x, y] = curvePoint(c, ua + ((ub - ua) * j) / cnt);
+            pushVertex(ctx, path, x, y, false, own);
+          }
           continue;
         }
         const ua = seq[k].u, ub = seq[k + 1].u;
         const dphi = Math.abs(c.phi) * (ub - ua);
-        // Finer chords only when both sides are demanded (see arrangement.ts).
-        const both = ctx.side[id] === (INSCRIBE | CIRCUMSCRIBE);
-        const sr = both ? ctx.sag[id] / c.r : SAG_MAX;
-        const step = !ctx.crowded[id] && ctx.side[id] === 0 ? FREE_STEP : sr >= SAG_MAX ? MAX_STEP : 2 * Math.acos(1 - sr);
+        const near = ctx.near[id];
+        let side = 0, hug = false, circ = false, sr = Infinity;
+        if (near) {
+          pieceDemands(ctx, c, near, ua, ub);
+          side = pieceSide;
+          hug = pieceHug && dphi <= MAX_STEP;
+          circ = side === CIRCUMSCRIBE;
+          if (side === (INSCRIBE | CIRCUMSCRIBE)) {
+            // Both: the side with the larger gap, with chords that stay within it.
+            circ = pieceGapOut > pieceGapIn;
+            sr = sagFor(c, circ ? pieceGapOut : pieceGapIn) / c.r;
+          }
+        }
+        // Inscribed chords never reach what lies outside the circle, however long they are.
+        // Circumscribed ones reach out 1.5 r (1 / cos(half step) - 1), the end corners 1.5 times that.
+        let step = MAX_STEP;
+        if (!ctx.crowded[id] && (side & CIRCUMSCRIBE) === 0) step = FREE_STEP;
+        else if (sr < 1) step = Math.min(MAX_STEP, circ ? 2 * Math.acos(1 / (1 + sr / 2.25)) : 2 * Math.acos(1 - sr));
         let cnt = Math.ceil(dphi / step);
-        // At least two chords while the piece is visibly curved at the integer scale.
-        if (cnt < 2 && c.r * (1 - Math.cos(dphi / 2)) * ctx.scale > 0.5) cnt = 2;
+        // At least two chords while the piece is visibly curved at the integer scale; one when
+        // it hugs another circle closer than the grid shows, so that the two pieces form a
+        // digon that the exact geometry settles (digons.ts).
+        if (hug) cnt = 1;
+        else if (cnt < 2 && c.r * (1 - Math.cos(dphi / 2)) * ctx.scale > 0.5) cnt = 2;
         if (cnt <= 1) ctx.chordPieces.push(id, nd, seq[k + 1].n);
         const half = dphi / Math.max(cnt, 1) / 2;
-        const dev = ctx.side[id] === CIRCUMSCRIBE ? 1.5 * c.r * (1 / Math.cos(half) - 1) : c.r * (1 - Math.cos(half));
+        const dev = circ ? 1.5 * c.r * (1 / Math.cos(half) - 1) : c.r * (1 - Math.cos(half));
         if (dev > ctx.chordSag[id]) ctx.chordSag[id] = dev;
-        if (ctx.side[id] === CIRCUMSCRIBE && cnt >= 1) {
+        if (circ && cnt >= 1) {
           // Tangent segments: corners at the middle angles, pushed out to r / cos(half step).
           // The first and last corners go out a little further, so the end segments leave the
           // end tangents (a tangent neighbour line would make the node collinear for clipper).

@@ -83,15 +83,19 @@ export interface Ctx {
   ncar: (number[] | null)[];
   parent: number[];
   splits: (number[] | null)[];
-  /** Per carrier: largest chord sagitta allowed (absolute). */
-  sag: number[];
   /** Per carrier: 1 when its box meets a carrier other than its loop neighbours (arrangement.ts). */
   crowded: Uint8Array;
-  /** Per carrier: sides demanded for its chords (INSCRIBE | CIRCUMSCRIBE bits, arrangement.ts). */
-  side: number[];
+  /**
+   * Per arc carrier: the sides its chords must keep to near what comes close to it
+   * (arrangement.ts, NEAR_SIZE numbers per demand), which chords.ts applies piece by piece;
+   * null when there are none.
+   */
+  near: (number[] | null)[];
   /** Per carrier: largest distance between its chords and the exact arc (set when chording). */
   chordSag: number[];
   contact: boolean;
+  /** Smallest distance from a vertex to a carrier it does not touch (arrangement.ts, demandSides). */
+  nearGap: number;
   // Vertex records (one per clipper input point); Z = index + 1.
   rx: number[];
   ry: number[];

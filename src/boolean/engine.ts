@@ -4,8 +4,10 @@
  *   1. Carriers: every source segment becomes an exact line or arc (arcs over 180 degrees are split).
  *   2. Arrangement: exact intersections, touches and overlaps between carriers are computed once and
  *      shared as nodes, so both operands pass through the same exact point.
- *   3. Chording: each carrier is cut at its nodes; arc pieces become short chords; all points are
- *      scaled to integers around the inputs' centre and tagged (Z) with their vertex record.
+ *   3. Chording: each carrier is cut at its nodes; arc pieces become short chords, inside or
+ *      outside their circle as whatever comes near demands (arrangement.ts, demandSides); all
+ *      points are scaled to integers around the inputs' centre and tagged (Z) with their vertex
+ *      record.
  *   4. Clipper runs; new crossings get Z through ZFillFunction (side table of crossing edges).
  *   5. Tracing: each output edge is traced to its carrier; runs on one carrier become one exact
  *      segment; run ends are placed on exact nodes or exact carrier intersections.
@@ -16,7 +18,7 @@
 import ClipperLib from 'clipper-lib';
 import type { IntPoint } from 'clipper-lib';
 import { lengthOf, type Contour, type Region } from '../geometry/contour';
-import { buildArrangement, buildCarriers } from './arrangement';
+import { buildArrangement, buildCarriers, demandSides } from './arrangement';
 import { CarrierStore } from './carriers';
 import { buildPaths, resetPaths } from './chords';
 import { INT_RANGE, REL_EPS, type Ctx, type Mode, type SourceGroup } from './context';
@@ -63,7 +65,7 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
   const scale = INT_RANGE / ext;
   const ctx: Ctx = {
     mode, ext, eps: REL_EPS * ext, unit: 1 / scale, ox: (xmin + xmax) / 2, oy: (ymin + ymax) / 2, scale,
-    carriers: [], store: new CarrierStore(vertices + 16), loops: [], loopOf: [], touched: [], index: null, maxTol: -1, crowded: new Uint8Array(0), nx: [], ny: [], ncar: [], parent: [], splits: [], sag: [], side: [], chordSag: [], contact: false, loopLo: [], loopHi: [], trustLoops: mode !== 'evenodd',
+    carriers: [], store: new CarrierStore(vertices + 16), loops: [], loopOf: [], touched: [], index: null, maxTol: -1, crowded: new Uint8Array(0), nx: [], ny: [], ncar: [], parent: [], splits: [], near: [], chordSag: [], contact: false, nearGap: Infinity, loopLo: [], loopHi: [], trustLoops: mode !== 'evenodd',
     rx: [], ry: [], rX: [], rY: [], rExact: [], rCar: [], rAll: [], rAlt: [], chordPieces: [], digons: [], digonsOf: new Map(), zf: [],
   };
   buildCarriers(ctx, groups);
@@ -71,7 +73,9 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
   const { clipped, free, box } = partitionLoops(ctx);
   const region: Contour[] = [];
   if (clipped.length) {
+    demandSides(ctx, clipped);
     coarseGrid(ctx);
+    refineGrid(ctx, ctx.nearGap);
     let paths = buildPaths(ctx, clipped);
     if (refineGrid(ctx, paths.closest)) {
       resetPaths(ctx);

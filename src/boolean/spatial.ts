@@ -91,18 +91,27 @@ function bound(s: Float64Array, v: number, after: boolean): number {
  * but a row of holes or a comb of long edges makes it quadratic: the cost of a sweep along x
  * and along y is counted first (binary searches over the sorted box starts), and when both are
  * large the index answers one box query per carrier instead.
+ *
+ * `ids` limits the pairs to those carriers (all by default); `grow`, per carrier id, widens
+ * each box further (none by default).
  */
-export function forEachNearPair(ctx: Ctx, visit: (a: Carrier, b: Carrier) => void): void {
-  const cs = ctx.carriers, n = cs.length, eps = ctx.eps;
+export function forEachNearPair(
+  ctx: Ctx, visit: (a: Carrier, b: Carrier) => void, ids: readonly number[] | null = null, grow: Float64Array | null = null,
+): void {
+  const cs = ctx.carriers, n = ids ? ids.length : cs.length, eps = ctx.eps;
   if (n < 2) return;
   const xlo = new Float64Array(n), xhi = new Float64Array(n), ylo = new Float64Array(n), yhi = new Float64Array(n);
+  let gmax = 0;
   for (let i = 0; i < n; i++) {
-    const c = cs[i];
-    xlo[i] = c.xmin;
-    xhi[i] = c.xmax;
-    ylo[i] = c.ymin;
-    yhi[i] = c.ymax;
+    const c = cs[ids ? ids[i] : i];
+    const g = grow ? grow[c.id] : 0;
+    if (g > gmax) gmax = g;
+    xlo[i] = c.xmin - g;
+    xhi[i] = c.xmax + g;
+    ylo[i] = c.ymin - g;
+    yhi[i] = c.ymax + g;
   }
+  const at = (i: number): Carrier => cs[ids ? ids[i] : i];
   // Cost of a sweep along an axis: for each box, the boxes that start within its extent.
   const sweep = (lo: Float64Array, hi: Float64Array): { order: Uint32Array; cost: number } => {
     const order = sortIndex(lo);
@@ -144,15 +153,26 @@ export function forEachNearPair(ctx: Ctx, visit: (a: Carrier, b: Carrier) => voi
       for (let q = p + 1; q < n; q++) {
         if (sLo[q] > end) break;
         if (sOlo[q] > top || sOhi[q] < bottom) continue;
-        visit(cs[order[p]], cs[order[q]]);
+        visit(at(order[p]), at(order[q]));
       }
     }
     return;
   }
+  // The index holds every carrier's own box: ask with this box widened by the largest growth
+  // too, then keep the pairs whose widened boxes meet (and, for a subset, are in it).
   const idx = carrierIndex(ctx);
+  let pos: Int32Array | null = null;
+  if (ids) {
+    pos = new Int32Array(cs.length).fill(-1);
+    for (let i = 0; i < n; i++) pos[ids[i]] = i;
+  }
   for (let a = 0; a < n; a++) {
-    for (const b of idx.search(xlo[a] - eps, ylo[a] - eps, xhi[a] + eps, yhi[a] + eps)) {
-      if (b > a) visit(cs[a], cs[b]);
+    const ca = at(a), w = eps + gmax;
+    for (const k of idx.search(xlo[a] - w, ylo[a] - w, xhi[a] + w, yhi[a] + w)) {
+      const b = pos ? pos[k] : k;
+      if (b <= a) continue;
+      if (grow && (xlo[b] > xhi[a] + eps || xhi[b] < xlo[a] - eps || ylo[b] > yhi[a] + eps || yhi[b] < ylo[a] - eps)) continue;
+      visit(ca, at(b));
     }
   }
 }
