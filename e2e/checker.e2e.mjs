@@ -138,7 +138,11 @@ export const tests = [
       assert.equal(await page.$('[data-testid="title-dialog"]'), null, 'one dialog at a time');
       await page.click('[data-command="doc.addRevision"]');
       assert.equal(await page.inputValue('[data-revision-row="0"] [data-revision-field="revision"]'), 'B', 'the mark after the title block’s A');
-      await page.fill('[data-revision-row="0"] [data-revision-field="date"]', '2026-12-03');
+      // The new row is dated today: type another date, so that the edit is a step of its own
+      // whatever day the test runs on.
+      const today = await page.inputValue('[data-revision-row="0"] [data-revision-field="date"]');
+      const typed = today === '2026-11-30' ? '2026-11-29' : '2026-11-30';
+      await page.fill('[data-revision-row="0"] [data-revision-field="date"]', typed);
       await page.press('[data-revision-row="0"] [data-revision-field="date"]', 'Tab');
       await page.fill('[data-revision-row="0"] [data-revision-field="description"]', 'Conduit opening moved to mid-depth');
       await page.press('[data-revision-row="0"] [data-revision-field="description"]', 'Enter');
@@ -151,7 +155,7 @@ export const tests = [
       await page.fill('[data-checker-field="checked-date"]', '2026-12-04'); // ... and leaving a field commits it
       await page.press('[data-checker-field="checked-date"]', 'Enter');
       const d = await doc();
-      assert.deepEqual(d.revisions, [{ revision: 'B', date: '2026-12-03', description: 'Conduit opening moved to mid-depth', by: 'AD' }]);
+      assert.deepEqual(d.revisions, [{ revision: 'B', date: typed, description: 'Conduit opening moved to mid-depth', by: 'AD' }]);
       assert.equal(d.notes, 'Opening edges ground smooth.\nWeb buckling at the opening checked separately.');
       assert.deepEqual(d.checked, { by: 'B. Checker', date: '2026-12-04' });
       // add, date, description, by, add, delete, notes, checked by, checked date: one step each.
@@ -169,7 +173,7 @@ export const tests = [
       await page.click('[data-command="report.open"]');
       const file = path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'kern-checker-')), 'report.pdf');
       const { text } = await printReport(context, page, file);
-      for (const s of ['Revisions, notes and check', 'Conduit opening moved to mid-depth', '2026-12-03', 'AD', 'Opening edges ground smooth.', 'Web buckling at the opening checked separately.', 'B. Checker', '2026-12-04']) {
+      for (const s of ['Revisions, notes and check', 'Conduit opening moved to mid-depth', typed, 'AD', 'Opening edges ground smooth.', 'Web buckling at the opening checked separately.', 'B. Checker', '2026-12-04']) {
         assert.ok(text.includes(s), `the PDF holds "${s}"`);
       }
       const pages = Number(/Pages:\s+(\d+)/.exec(execFileSync('pdfinfo', [file], { encoding: 'utf8' }))[1]);
