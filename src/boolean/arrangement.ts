@@ -254,6 +254,7 @@ function refineNested(ctx: Ctx, a: Carrier, b: Carrier): void {
   const gap = Math.abs(a.r - b.r) - D;
   if (!(gap > 0) || gap >= 2 * SAG_MAX * Math.max(a.r, b.r)) return;
   nearDemand(ctx, a, NEAR_ZONE, 0, Math.PI, a.r >= b.r ? CIRCUMSCRIBE : INSCRIBE, gap, 0);
+  noteNear(ctx, gap);
 }
 
 /**
@@ -281,6 +282,7 @@ function refineCrossing(ctx: Ctx, a: Carrier, b: Carrier): void {
   }
   const lim = LUNE_MAX * a.r, gap = Math.abs(D - a.r - b.r);
   if (!(gap < lim)) return;
+  if (D > a.r + b.r) noteNear(ctx, gap);
   // The zone of a within lim of b's circle: the angle θ from the centre line where
   // ra^2 + D^2 - 2 ra D cos θ = (rb + lim)^2.
   const cosA = (a.r * a.r + D * D - (b.r + lim) * (b.r + lim)) / (2 * a.r * D);
@@ -333,6 +335,11 @@ function refineNearLine(ctx: Ctx, a: Carrier, b: Carrier): void {
   // the circle a fifth of the radius along from the crossing; closer to it, chords that cross b
   // on clipper's side still hand over at that crossing (trace.ts, placeVertex).
   const gap = h >= a.r ? h - a.r : 0.2 * near;
+  // Passing outside: its closest approach, where the foot lies on both.
+  if (h >= a.r && s0 <= 0 && s0 + L >= 0) {
+    const u = paramOf(a, fx, fy);
+    if (u >= 0 && u <= 1) noteNear(ctx, gap);
+  }
   for (const sg of [-1, 1]) {
     // The part of b with near <= sg·s <= far.
     const lo = Math.max(near, sg > 0 ? s0 : -(s0 + L)), hi = Math.min(far, sg > 0 ? s0 + L : -s0);
@@ -350,10 +357,11 @@ function refineNearLine(ctx: Ctx, a: Carrier, b: Carrier): void {
  * clipper skip it):
  * - the sides each arc's chords must keep to (see INSCRIBE above), from every carrier within the
  *   chords' reach of it (its box widened by twice LUNE_MAX r);
- * - ctx.nearGap, the smallest distance from a vertex to a carrier it does not touch, which asks
- *   grid.ts for a finer grid when it is below a few grid units: two edges that cross at an angle
- *   of 1e-8 part by less than a unit over most of their length, and only a finer grid shows
- *   clipper the slivers between them.
+ * - ctx.nearGap, the smallest distance from a vertex to a carrier it does not touch, or between
+ *   two curves that pass each other (an edge outside a circle, two circles), which asks grid.ts
+ *   for a finer grid when it is below a few grid units: two edges that cross at an angle of
+ *   1e-8 part by less than a unit over most of their length, and a circle that passes 4e-8
+ *   inside an edge leaves a neck that thin, and only a finer grid shows them to clipper.
  */
 export function demandSides(ctx: Ctx, loops: readonly number[]): void {
   const cs = ctx.carriers;
@@ -380,6 +388,11 @@ export function demandSides(ctx: Ctx, loops: readonly number[]): void {
     if (a.kind === ARC) demandsOf(ctx, a, b);
     if (b.kind === ARC) demandsOf(ctx, b, a);
   }, ids, grow);
+}
+
+/** Two curves that pass within `gap` of each other without meeting: ctx.nearGap. */
+function noteNear(ctx: Ctx, gap: number): void {
+  if (gap > ctx.eps && gap < ctx.nearGap) ctx.nearGap = gap;
 }
 
 /** A vertex (x, y) within g of carrier c but not on it: ctx.nearGap. */
