@@ -352,42 +352,25 @@ function refineNearLine(ctx: Ctx, a: Carrier, b: Carrier): void {
 }
 
 /**
- * What comes near the carriers of the loops that go to clipper (contacts need boxes that meet;
- * this needs boxes that come near, so it has a broad phase of its own, and loops that skip
- * clipper skip it):
+ * What comes near, for carriers a and b that are not neighbours on a loop (their boxes, widened
+ * by nearReach, meet; their contacts are found apart from this):
  * - the sides each arc's chords must keep to (see INSCRIBE above), from every carrier within the
- *   chords' reach of it (its box widened by twice LUNE_MAX r);
- * - ctx.nearGap, the smallest distance from a vertex to a carrier it does not touch, or between
- *   two curves that pass each other (an edge outside a circle, two circles), which asks grid.ts
- *   for a finer grid when it is below a few grid units: two edges that cross at an angle of
- *   1e-8 part by less than a unit over most of their length, and a circle that passes 4e-8
- *   inside an edge leaves a neck that thin, and only a finer grid shows them to clipper.
+ *   chords' reach of it;
+ * - ctx.nearGap, the smallest distance from a vertex to a carrier it does not touch where the
+ *   two run nearly parallel, or between two curves that pass each other (an edge outside a
+ *   circle, two circles), which asks grid.ts for a finer grid when it is below a few grid units:
+ *   two edges that cross at an angle of 1e-8 part by less than a unit over most of their length,
+ *   and a circle that passes 4e-8 inside an edge leaves a neck that thin, and only a finer grid
+ *   shows them to clipper.
  */
-export function demandSides(ctx: Ctx, loops: readonly number[]): void {
-  const cs = ctx.carriers;
-  const ids: number[] = [];
-  const grow = new Float64Array(cs.length);
-  const g = NODE_UNITS * ctx.unit;
-  for (const l of loops) {
-    for (const id of ctx.loops[l].ids) {
-      ids.push(id);
-      grow[id] = cs[id].kind === ARC ? Math.max(g, 2 * LUNE_MAX * cs[id].r) : g;
-    }
-  }
-  forEachNearPair(ctx, (a, b) => {
-    if (ctx.trustLoops && ctx.loopLo[a.id] === ctx.loopLo[b.id]) {
-      // Neighbours on a loop meet at their shared vertex, which demands nothing.
-      const d = Math.abs(a.id - b.id);
-      if (d === 1 || d === ctx.loopHi[a.id] - ctx.loopLo[a.id]) return;
-    }
-    noteGap(ctx, a, b.ax, b.ay, g);
-    noteGap(ctx, a, b.bx, b.by, g);
-    noteGap(ctx, b, a.ax, a.ay, g);
-    noteGap(ctx, b, a.bx, a.by, g);
-    if ((a.kind !== ARC && b.kind !== ARC) || sameCurve(a, b, ctx.eps)) return;
-    if (a.kind === ARC) demandsOf(ctx, a, b);
-    if (b.kind === ARC) demandsOf(ctx, b, a);
-  }, ids, grow);
+function nearPair(ctx: Ctx, a: Carrier, b: Carrier, g: number): void {
+  noteGap(ctx, a, b, b.ax, b.ay, g);
+  noteGap(ctx, a, b, b.bx, b.by, g);
+  noteGap(ctx, b, a, a.ax, a.ay, g);
+  noteGap(ctx, b, a, a.bx, a.by, g);
+  if ((a.kind !== ARC && b.kind !== ARC) || sameCurve(a, b, ctx.eps)) return;
+  if (a.kind === ARC) demandsOf(ctx, a, b);
+  if (b.kind === ARC) demandsOf(ctx, b, a);
 }
 
 /** Two curves that pass within `gap` of each other without meeting: ctx.nearGap. */
@@ -395,13 +378,35 @@ function noteNear(ctx: Ctx, gap: number): void {
   if (gap > ctx.eps && gap < ctx.nearGap) ctx.nearGap = gap;
 }
 
-/** A vertex (x, y) within g of carrier c but not on it: ctx.nearGap. */
-function noteGap(ctx: Ctx, c: Carrier, x: number, y: number, g: number): void {
+/** How far beyond its box something can come near carrier c (nearPair): the chords' reach of an arc, a few grid units. */
+function nearReach(ctx: Ctx, c: Carrier): number {
+  const g = NODE_UNITS * ctx.unit;
+  return c.kind === ARC ? Math.max(g, 2 * LUNE_MAX * c.r) : g;
+}
+
+/**
+ * The end (x, y) of carrier `of`, within g of carrier c but not on it, where the two run nearly
+ * parallel (at under 1/8 rad): ctx.nearGap. Where they cross at a larger angle they part within
+ * a few grid units, and clipper's crossing of them is as good as the exact one.
+ */
+function noteGap(ctx: Ctx, c: Carrier, of: Carrier, x: number, y: number, g: number): void {
   if (x < c.xmin - g || x > c.xmax + g || y < c.ymin - g || y > c.ymax + g) return;
   // The whole line or circle first (no angle to compute): the piece is no nearer than that.
   if (c.flat === 0 && distToCurve(c, x, y) > g) return;
   const d = distExact(c, x, y);
-  if (d > ctx.eps && d < ctx.nearGap) ctx.nearGap = d;
+  if (!(d > ctx.eps && d < ctx.nearGap)) return;
+  const [ux, uy] = directionAt(c, x, y), [vx, vy] = directionAt(of, x, y);
+  if (Math.abs(ux * vy - uy * vx) < 0.125) ctx.nearGap = d;
+}
+
+/** Unit direction of carrier c at (or beside) the point (x, y): the chord's, or the tangent's of an arc. */
+function directionAt(c: Carrier, x: number, y: number): [number, number] {
+  if (c.kind === ARC) {
+    const dx = x - c.cx, dy = y - c.cy, L = lengthOf(dx, dy) || 1;
+    return [-dy / L, dx / L];
+  }
+  const L = c.len || 1;
+  return [(c.bx - c.ax) / L, (c.by - c.ay) / L];
 }
 
 /** The demands that carrier b makes of arc a. */
@@ -413,9 +418,15 @@ function demandsOf(ctx: Ctx, a: Carrier, b: Carrier): void {
   refineNearVertex(ctx, a, b);
 }
 
-/** Step 2: all pairwise contacts; the broad phase is spatial.ts forEachNearPair. */
+/**
+ * Step 2: all pairwise contacts, and what comes near without touching (nearPair); the broad
+ * phase is spatial.ts forEachNearPair, with boxes widened by what comes near.
+ */
 export function buildArrangement(ctx: Ctx): void {
-  ctx.crowded = new Uint8Array(ctx.carriers.length);
+  const cs = ctx.carriers, eps = ctx.eps, g = NODE_UNITS * ctx.unit;
+  ctx.crowded = new Uint8Array(cs.length);
+  const grow = new Float64Array(cs.length);
+  for (let i = 0; i < cs.length; i++) grow[i] = nearReach(ctx, cs[i]);
   forEachNearPair(ctx, (a, b) => {
     if (ctx.loopLo[a.id] === ctx.loopLo[b.id]) {
       const d = Math.abs(a.id - b.id);
@@ -432,10 +443,13 @@ export function buildArrangement(ctx: Ctx): void {
         return;
       }
     }
-    ctx.crowded[a.id] = 1;
-    ctx.crowded[b.id] = 1;
-    intersectPair(ctx, a, b);
-  });
+    if (!(a.xmin > b.xmax + eps || b.xmin > a.xmax + eps || a.ymin > b.ymax + eps || b.ymin > a.ymax + eps)) {
+      ctx.crowded[a.id] = 1;
+      ctx.crowded[b.id] = 1;
+      intersectPair(ctx, a, b);
+    }
+    nearPair(ctx, a, b, g);
+  }, null, grow);
   // Merged nodes: the representative carries every member's carriers.
   const nn = ctx.nx.length;
   for (let i = 0; i < nn; i++) {

@@ -94,7 +94,7 @@ export interface Ctx {
   /** Per carrier: largest distance between its chords and the exact arc (set when chording). */
   chordSag: number[];
   contact: boolean;
-  /** Smallest gap between a vertex and a carrier, or two curves, that do not touch (arrangement.ts, demandSides). */
+  /** Smallest gap between a vertex and a carrier, or two curves, that do not touch (arrangement.ts, nearPair). */
   nearGap: number;
   // Vertex records (one per clipper input point); Z = index + 1.
   rx: number[];

@@ -5,7 +5,7 @@
  *   2. Arrangement: exact intersections, touches and overlaps between carriers are computed once and
  *      shared as nodes, so both operands pass through the same exact point.
  *   3. Chording: each carrier is cut at its nodes; arc pieces become short chords, inside or
- *      outside their circle as whatever comes near demands (arrangement.ts, demandSides); all
+ *      outside their circle as whatever comes near demands (arrangement.ts, nearPair); all
  *      points are scaled to integers around the inputs' centre and tagged (Z) with their vertex
  *      record.
  *   4. Clipper runs; new crossings get Z through ZFillFunction (side table of crossing edges).
@@ -18,7 +18,7 @@
 import ClipperLib from 'clipper-lib';
 import type { IntPoint } from 'clipper-lib';
 import { lengthOf, type Contour, type Region } from '../geometry/contour';
-import { buildArrangement, buildCarriers, demandSides } from './arrangement';
+import { buildArrangement, buildCarriers } from './arrangement';
 import { CarrierStore } from './carriers';
 import { buildPaths, resetPaths } from './chords';
 import { INT_RANGE, REL_EPS, type Ctx, type Mode, type SourceGroup } from './context';
@@ -73,7 +73,6 @@ export function runBoolean(groups: readonly SourceGroup[], mode: Mode): { region
   const { clipped, free, box } = partitionLoops(ctx);
   const region: Contour[] = [];
   if (clipped.length) {
-    demandSides(ctx, clipped);
     coarseGrid(ctx);
     refineGrid(ctx, ctx.nearGap);
     let paths = buildPaths(ctx, clipped);
