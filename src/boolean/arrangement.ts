@@ -190,6 +190,10 @@ function touchEnds(ctx: Ctx, a: Carrier, b: Carrier): void {
 
 /** The end (x, y) of carrier `of`, when it lies on carrier `on` away from their shared vertex. */
 function touchEnd(ctx: Ctx, on: Carrier, of: Carrier, x: number, y: number): void {
+  // Within eps of the carrier means within its box widened by eps (boxes hold the whole curve):
+  // most far ends of a neighbour are ruled out by four comparisons.
+  const w = 2 * ctx.eps;
+  if (x < on.xmin - w || x > on.xmax + w || y < on.ymin - w || y > on.ymax + w) return;
   if (endpointNode(ctx, on, x, y) >= 0) return; // the shared vertex (or a merged one)
   if (distExact(on, x, y) <= ctx.eps) sharePoint(ctx, on, of, x, y);
 }

@@ -138,6 +138,9 @@ function onCarrier(ctx: Ctx, c: Carrier, x: number, y: number): boolean {
  * accuracy (this tells an arc from a line that joins the same two points).
  */
 function fitsEdge(ctx: Ctx, c: Carrier, px: number, py: number, qx: number, qy: number): boolean {
+  // On a straight carrier the middle's parameter and distance are the means of the ends' (both
+  // are linear along the edge), so the ends decide.
+  if (c.kind !== ARC && c.flat === 0) return onCarrier(ctx, c, px, py) && onCarrier(ctx, c, qx, qy);
   return onCarrier(ctx, c, (px + qx) / 2, (py + qy) / 2) && onCarrier(ctx, c, px, py) && onCarrier(ctx, c, qx, qy);
 }
 
@@ -188,9 +191,10 @@ function placeVertex(ctx: Ctx, a: number, b: number, px: number, py: number, rec
   const ca = ctx.carriers[a], cb = ctx.carriers[b];
   // Carriers that share a source vertex (or a merged node) meet there exactly: the nearest such.
   let best = -1, bd = 8 * ctx.unit;
-  for (const na of [ca.n0, ca.n1]) {
-    const ra = find(ctx, na);
-    if (ra !== find(ctx, cb.n0) && ra !== find(ctx, cb.n1)) continue;
+  const b0 = find(ctx, cb.n0), b1 = find(ctx, cb.n1);
+  for (let k = 0; k < 2; k++) {
+    const ra = find(ctx, k === 0 ? ca.n0 : ca.n1);
+    if (ra !== b0 && ra !== b1) continue;
     const d = lengthOf(ctx.nx[ra] - px, ctx.ny[ra] - py);
     if (d <= bd) {
       bd = d;
