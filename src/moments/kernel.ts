@@ -218,9 +218,9 @@ export function regionMomentsAbout(region: Region, ox: number, oy: number): RawM
     const x0 = c.xy[0], y0 = c.xy[1];
     // The kept summary's sums about the first vertex when there is one; else one pass (a whole
     // summary is two passes and the length, wasted on a loop asked only for its area).
-    const kept = SUMMARIES.get(c);
+    const kept = KEPT.get(c);
     let first: ArrayLike<number>;
-    if (kept) first = kept.v;
+    if (kept instanceof ContourSummary) first = kept.v;
     else {
       const acc = new Float64Array(6);
       accumulateContour(c, x0, y0, acc);
@@ -229,6 +229,19 @@ export function regionMomentsAbout(region: Region, ox: number, oy: number): RawM
     out = addMoments(out, shiftMoments(asMoments(first), x0 - ox, y0 - oy));
   }
   return out;
+}
+
+/**
+ * Signed area of one contour, summed about its first vertex (as regionMomentsAbout sums it), in
+ * one pass with nothing allocated: what orients a new loop and drops a sliver, asked of every
+ * loop a shape or a boolean makes.
+ */
+const AREA = new Float64Array(6);
+export function contourArea(c: Contour): number {
+  if (c.xy.length < 4) return 0;
+  AREA.fill(0);
+  accumulateContour(c, c.xy[0], c.xy[1], AREA);
+  return AREA[0];
 }
 
 /** A reference point near the region: its first vertex. */
@@ -343,21 +356,22 @@ function sumsInto(c: Contour, ox: number, oy: number, out: number[], at: number)
   for (let i = 0; i < 6; i++) out[at + i] = SCRATCH[i];
 }
 
-const SUMMARIES = new WeakMap<Contour, ContourSummary>();
-/** A contour's box kept alone (before its summary is asked for): four doubles in one array. */
-const BOXES = new WeakMap<Contour, BoxView>();
+/**
+ * What is kept per contour, by identity: its summary, or its box alone (four doubles) while no
+ * summary has been asked for. One map, so a new contour costs one lookup on each question (a
+ * cold evaluation asks about every loop it meets, and each lookup in a WeakMap costs).
+ */
+const KEPT = new WeakMap<Contour, BoxView>();
 
 /** A contour's exact box, kept by identity (the summary's, or computed alone when asked first). */
 export function contourBox(c: Contour): Bounds | null {
-  const s = SUMMARIES.get(c);
-  if (s) return s;
-  const hit = BOXES.get(c);
+  const hit = KEPT.get(c);
   if (hit) return hit;
   const v = [NaN, NaN, NaN, NaN];
   contourBoundsInto(c, v, 0);
   if (!(v[0] <= v[1])) return null;
   const b = new BoxView(v, 0);
-  BOXES.set(c, b);
+  KEPT.set(c, b);
   return b;
 }
 
@@ -376,19 +390,18 @@ export function regionBox(region: Region): Bounds | null {
 }
 
 export function contourSummary(c: Contour): ContourSummary {
-  const hit = SUMMARIES.get(c);
-  if (hit) return hit;
+  const hit = KEPT.get(c);
+  if (hit instanceof ContourSummary) return hit;
   const xy = c.xy, n = xy.length >> 1;
   const x0 = n ? xy[0] : 0, y0 = n ? xy[1] : 0;
   const v = summaryNumbers();
   sumsInto(c, x0, y0, v, 0);
   // The box kept for this contour, if any; else computed here and kept in the summary only.
-  const kept = BOXES.get(c);
-  if (kept) {
-    v[12] = kept.xmin;
-    v[13] = kept.xmax;
-    v[14] = kept.ymin;
-    v[15] = kept.ymax;
+  if (hit) {
+    v[12] = hit.xmin;
+    v[13] = hit.xmax;
+    v[14] = hit.ymin;
+    v[15] = hit.ymax;
   } else contourBoundsInto(c, v, 12);
   if (!(v[12] <= v[13])) {
     v[12] = v[13] = x0;
@@ -412,7 +425,7 @@ export function contourSummary(c: Contour): ContourSummary {
   v[17] = gy;
   v[18] = contourLength(c);
   const out = new ContourSummary(v);
-  SUMMARIES.set(c, out);
+  KEPT.set(c, out);
   return out;
 }
 
