@@ -32,7 +32,9 @@ export type Vec2 = readonly [number, number];
  */
 export function lengthOf(dx: number, dy: number): number {
   const s = dx * dx + dy * dy;
-  return s < 1e300 && s > 1e-300 ? Math.sqrt(s) : Math.hypot(dx, dy);
+  if (s < 1e300 && s > 1e-300) return Math.sqrt(s);
+  // A shared vertex is 0 from itself: no call (Math.hypot's result is a new heap number).
+  return dx === 0 && dy === 0 ? 0 : Math.hypot(dx, dy);
 }
 
 /** Build a contour from interleaved vertices and optional per-segment bulges. */
