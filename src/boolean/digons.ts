@@ -7,7 +7,7 @@
  * of its pieces bounds the result, which the trace then takes for the shared chord.
  */
 import { lengthOf, reverseContour, type Contour } from '../geometry/contour';
-import { regionMomentsAbout } from '../moments/kernel';
+import { contourArea } from '../moments/kernel';
 import { ARC, curvePoint, paramOf, sameCurve, wrapAngle, type Carrier } from './carriers';
 import { find, type Ctx } from './context';
 import { classify } from './spatial';
@@ -103,7 +103,7 @@ export function digonLoops(ctx: Ctx): Contour[] {
     const s1 = pieceSweep(ctx.carriers[g.c1], x1, y1, x2, y2);
     const s2 = pieceSweep(ctx.carriers[g.c2], x2, y2, x1, y1);
     const c: Contour = { xy: Float64Array.of(x1, y1, x2, y2), bulge: Float64Array.of(Math.tan(s1 / 4), Math.tan(s2 / 4)) };
-    const A = regionMomentsAbout([c], x1, y1).m00;
+    const A = contourArea(c); // about its first vertex, (x1, y1)
     if (!(A !== 0) || !Number.isFinite(A)) continue;
     // Inside in the result: a loop of its own (area positive); else a crack (area negative).
     out.push(A > 0 === g.inside ? c : reverseContour(c));

@@ -5,7 +5,7 @@
  */
 import type { IntPoint } from 'clipper-lib';
 import { lengthOf, pushArc, type Contour } from '../geometry/contour';
-import { regionMomentsAbout } from '../moments/kernel';
+import { contourArea } from '../moments/kernel';
 import {
   ARC, LINE, curveIntersections, curvePoint, distToCurve, nearestPoint, paramOf, polishIntersection,
   sameCurve, wrapAngle, type Carrier,
@@ -463,12 +463,14 @@ export function tracePath(ctx: Ctx, path: IntPoint[]): Contour | null {
   const n = ob.length;
   if (n < 2) return null;
   let anyArc = false;
-  for (const b of ob) if (b !== 0 && Number.isFinite(b)) anyArc = true;
+  for (let k = 0; k < n; k++) if (ob[k] !== 0 && Number.isFinite(ob[k])) anyArc = true;
   if (n === 2 && !anyArc) return null;
-  const ct: Contour = { xy: Float64Array.from(oxy), bulge: anyArc ? Float64Array.from(ob) : null };
-  for (const v of ct.xy) if (!Number.isFinite(v)) return null;
-  if (ct.bulge) for (const v of ct.bulge) if (!Number.isFinite(v)) return null;
-  const A = regionMomentsAbout([ct], ct.xy[0], ct.xy[1]).m00;
+  // Indexed loops and the array constructor: for-of and from() go through an iterator, which
+  // allocated on every output loop.
+  for (let k = 0; k < oxy.length; k++) if (!Number.isFinite(oxy[k])) return null;
+  if (anyArc) for (let k = 0; k < n; k++) if (!Number.isFinite(ob[k])) return null;
+  const ct: Contour = { xy: new Float64Array(oxy), bulge: anyArc ? new Float64Array(ob) : null };
+  const A = contourArea(ct);
   if (!(Math.abs(A) > 4 * ctx.unit * ctx.unit)) return null; // zero-area sliver
   return ct;
 }

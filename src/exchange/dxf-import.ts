@@ -19,7 +19,7 @@
 import DxfParser from 'dxf-parser';
 import type { Contour, Region } from '../geometry/contour';
 import { circleContour, contourFrom, pushArc, reverseContour } from '../geometry/contour';
-import { regionMomentsAbout } from '../moments/kernel';
+import { contourArea } from '../moments/kernel';
 import type { CircleShape, PathSegment, PathShape, Point, Shape, Units } from '../document/types';
 import { UNIT_IN_METRES } from '../document/types';
 import { describeSource, joinPieces, type JoinedLoop, type Piece, type PieceSource } from './chains';
@@ -193,7 +193,7 @@ function importUnsafe(text: string, opts: DxfImportOptions): DxfImport {
   for (const loop of joined.loops) {
     let c = contourFrom(loop.xy, loop.bulge);
     const n = c.xy.length >> 1;
-    const a = n >= 2 ? regionMomentsAbout([c], c.xy[0], c.xy[1]).m00 : 0;
+    const a = n >= 2 ? contourArea(c) : 0;
     if (!(Math.abs(a) > 1e-12 * extent * extent)) {
       for (const s of loop.sources) problems.push({ source: s, message: 'is part of a closed outline that encloses no area, so it was left out', points: loop.xy.slice() });
       continue;

@@ -3,7 +3,7 @@
  * arc's midpoint), for "merge into one outline" and "convert to outline".
  */
 import { arcFromChord, type Contour, type Region } from '../geometry/contour';
-import { regionMomentsAbout } from '../moments/kernel';
+import { contourArea } from '../moments/kernel';
 import { newShapeId } from './ids';
 import type { Shape } from './shape';
 import type { Point } from './base';
@@ -49,7 +49,7 @@ export function regionToPaths(region: Region, used: ReadonlySet<string>): PathSh
   const outers: PathShape[] = [], holes: PathShape[] = [];
   for (const c of region) {
     if ((c.xy.length >> 1) < 2) continue;
-    if (regionMomentsAbout([c], c.xy[0], c.xy[1]).m00 >= 0) outers.push(contourToPath(c, nextId(), 'add'));
+    if (contourArea(c) >= 0) outers.push(contourToPath(c, nextId(), 'add'));
     else holes.push(contourToPath(c, nextId(), 'subtract'));
   }
   return [...outers, ...holes];

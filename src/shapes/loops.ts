@@ -1,6 +1,6 @@
 /** Small helpers that several kinds need when they build their contours. */
 import { contourFrom, reverseContour, type Contour } from '../geometry/contour';
-import { regionMomentsAbout } from '../moments/kernel';
+import { contourArea } from '../moments/kernel';
 
 /** A contour from interleaved vertices and bulges, without straight segments of zero length (arcs kept). */
 export function dropZeroLengthLines(xy: readonly number[], bulge: readonly number[]): Contour {
@@ -17,6 +17,6 @@ export function dropZeroLengthLines(xy: readonly number[], bulge: readonly numbe
 
 /** The contour with the requested orientation (+1 CCW, −1 CW). */
 export function orient(c: Contour, sign: 1 | -1): Contour {
-  const a = regionMomentsAbout([c], c.xy[0], c.xy[1]).m00;
+  const a = contourArea(c);
   return Math.sign(a) === sign || a === 0 ? c : reverseContour(c);
 }
