@@ -31,11 +31,16 @@ export function partitionLoops(ctx: Ctx): { clipped: number[]; free: number[]; b
       if (c.xmax > x1) x1 = c.xmax;
       if (c.ymax > y1) y1 = c.ymax;
     }
-    box.set([x0, y0, x1, y1], 4 * l);
+    box[4 * l] = x0;
+    box[4 * l + 1] = y0;
+    box[4 * l + 2] = x1;
+    box[4 * l + 3] = y1;
   }
   const touched: number[] = [];
   for (let l = 0; l < L; l++) if (ctx.touched[l]) touched.push(l);
   if (touched.length === 0) return { clipped: [], free: [...Array(L).keys()], box };
+  // Every loop touched (a cluster of shapes that meet): nothing left to test, no index to build.
+  if (touched.length === L) return { clipped: touched, free: [], box };
   const idx = new Flatbush(touched.length);
   for (const l of touched) idx.add(box[4 * l], box[4 * l + 1], box[4 * l + 2], box[4 * l + 3]);
   idx.finish();
@@ -129,6 +134,7 @@ const SCAN_LIMIT = 256;
  */
 export function settleFreeLoops(ctx: Ctx, free: readonly number[], box: Float64Array): Contour[] {
   const out: Contour[] = [];
+  if (free.length === 0) return out;
   const L = ctx.loops.length;
   const loopIdx = new Flatbush(Math.max(1, L));
   for (let l = 0; l < L; l++) loopIdx.add(box[4 * l], box[4 * l + 1], box[4 * l + 2], box[4 * l + 3]);
