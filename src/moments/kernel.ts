@@ -231,12 +231,12 @@ export function regionMomentsAbout(region: Region, ox: number, oy: number): RawM
   return out;
 }
 
+const AREA = new Float64Array(6);
 /**
  * Signed area of one contour, summed about its first vertex (as regionMomentsAbout sums it), in
  * one pass with nothing allocated: what orients a new loop and drops a sliver, asked of every
  * loop a shape or a boolean makes.
  */
-const AREA = new Float64Array(6);
 export function contourArea(c: Contour): number {
   if (c.xy.length < 4) return 0;
   AREA.fill(0);
