@@ -94,7 +94,8 @@ function passThrough(r: Region): Region {
  * A test "does the box (x0, y0)–(x1, y1) meet any box of the list but number `skip`": a scan for
  * a few boxes or a few questions, a flatbush index for many of both (a run of thousands of shapes
  * would otherwise compare every pair). A plate with thousands of holes asks once, for its one
- * outline: one scan costs less than sorting the boxes into an index.
+ * outline: one scan costs less than sorting the boxes into an index. The index is built once the
+ * scans have read 32 boxes per box in the list (a few dozen shapes asking of each other: never).
  */
 type BoxTest = (x0: number, y0: number, x1: number, y1: number, skip: number) => boolean;
 function boxFinder(boxes: BoxList): BoxTest {
@@ -104,12 +105,12 @@ function boxFinder(boxes: BoxList): BoxTest {
     return false;
   };
   if (n <= 16) return scan;
-  let idx: Flatbush | null = null; // built on the ninth question
-  let asked = 0;
+  let idx: Flatbush | null = null;
+  let read = 0;
   let skipping = -1;
   const keep = (j: number) => j !== skipping && boxes.has(j);
   return (x0, y0, x1, y1, skip) => {
-    if (!idx && ++asked <= 8) return scan(x0, y0, x1, y1, skip);
+    if (!idx && (read += n) <= 32 * n) return scan(x0, y0, x1, y1, skip);
     if (!idx) {
       idx = new Flatbush(n);
       const v = boxes.v;

@@ -41,9 +41,15 @@ export function partitionLoops(ctx: Ctx): { clipped: number[]; free: number[]; b
   if (touched.length === 0) return { clipped: [], free: [...Array(L).keys()], box };
   // Every loop touched (a cluster of shapes that meet): nothing left to test, no index to build.
   if (touched.length === L) return { clipped: touched, free: [], box };
-  const idx = new Flatbush(touched.length);
-  for (const l of touched) idx.add(box[4 * l], box[4 * l + 1], box[4 * l + 2], box[4 * l + 3]);
-  idx.finish();
+  // An index of the touched loops' boxes when the questions are many; else each untouched loop
+  // reads every touched box (a cluster of a few dozen loops: cheaper than sorting an index).
+  let idx: Flatbush | null = null;
+  if (touched.length * (L - touched.length) > SCAN_PAIRS) {
+    idx = new Flatbush(touched.length);
+    for (const l of touched) idx.add(box[4 * l], box[4 * l + 1], box[4 * l + 2], box[4 * l + 3]);
+    idx.finish();
+  }
+  const all = idx ? null : touched.map((_, k) => k);
   const clipped: number[] = [], free: number[] = [];
   for (let l = 0; l < L; l++) {
     if (ctx.touched[l]) {
@@ -54,7 +60,7 @@ export function partitionLoops(ctx: Ctx): { clipped: number[]; free: number[]; b
     // Enclosing needs the other box inside this one; then one vertex of it tells.
     const x0 = box[4 * l], y0 = box[4 * l + 1], x1 = box[4 * l + 2], y1 = box[4 * l + 3];
     let encloses = false;
-    for (const k of idx.search(x0, y0, x1, y1)) {
+    for (const k of idx ? idx.search(x0, y0, x1, y1) : all!) {
       const t = touched[k];
       if (box[4 * t] < x0 || box[4 * t + 1] < y0 || box[4 * t + 2] > x1 || box[4 * t + 3] > y1) continue;
       const c = ctx.carriers[ctx.loops[t].ids[0]];
@@ -121,6 +127,12 @@ function loopArea(ctx: Ctx, l: number): number {
 
 /** Loops with more carriers than this are not scanned whole for one point (see below). */
 const SCAN_LIMIT = 256;
+/**
+ * Up to this many (question, box) pairs the boxes are read one by one; beyond it they go into a
+ * flatbush index first. Sorting a few dozen boxes into an index cost more than reading them for
+ * the few questions a cluster of shapes asks; a plate with thousands of holes still gets its index.
+ */
+const SCAN_PAIRS = 4096;
 
 /**
  * The free loops that bound the result, each oriented with the result on its left. The other
@@ -136,10 +148,13 @@ export function settleFreeLoops(ctx: Ctx, free: readonly number[], box: Float64A
   const out: Contour[] = [];
   if (free.length === 0) return out;
   const L = ctx.loops.length;
-  const loopIdx = new Flatbush(Math.max(1, L));
-  for (let l = 0; l < L; l++) loopIdx.add(box[4 * l], box[4 * l + 1], box[4 * l + 2], box[4 * l + 3]);
-  if (L === 0) loopIdx.add(0, 0, 0, 0);
-  loopIdx.finish();
+  let loopIdx: Flatbush | null = null;
+  if (L * free.length > SCAN_PAIRS) {
+    loopIdx = new Flatbush(Math.max(1, L));
+    for (let l = 0; l < L; l++) loopIdx.add(box[4 * l], box[4 * l + 1], box[4 * l + 2], box[4 * l + 3]);
+    if (L === 0) loopIdx.add(0, 0, 0, 0);
+    loopIdx.finish();
+  }
   const big = new Uint8Array(L);
   // The loops whose boxes hold (x, y) are visited inside the index search (the filter adds their
   // windings and keeps nothing), so the thousands of questions of a perforated plate build no
@@ -170,7 +185,8 @@ export function settleFreeLoops(ctx: Ctx, free: readonly number[], box: Float64A
     w0 = 0;
     w1 = 0;
     anyBig = false;
-    loopIdx.search(x, y, x, y, visit);
+    if (loopIdx) loopIdx.search(x, y, x, y, visit);
+    else for (let o = 0; o < L; o++) if (box[4 * o] <= x && box[4 * o + 2] >= x && box[4 * o + 1] <= y && box[4 * o + 3] >= y) visit(o);
     if (anyBig) {
       const [b0, b1] = windingsAt(ctx, x, y, (k) => !big[ctx.loopOf[k.id]]);
       w0 += b0;

@@ -65,10 +65,11 @@ export class RegionSegments {
 
   /**
    * The flatbush index of the segments' boxes once it pays: never for a few segments, and only
-   * after the first few questions (one clip against a large outline costs no index).
+   * after the first 32 questions (one clip against a large outline costs no index, nor do the
+   * holes of one part; sorting a few hundred boxes cost more than reading them that often).
    */
   private indexed(): Flatbush | null {
-    if (!this.index && (this.length <= 32 || ++this.asked <= 16)) return null;
+    if (!this.index && (this.length <= 32 || ++this.asked <= 32)) return null;
     if (!this.index) {
       const n = this.length, b = this.boxes;
       const idx = new Flatbush(n);
