@@ -48,7 +48,7 @@ class BoxList {
 
 /**
  * The exact bounds of region r into boxes (slot k), and whether it is clean. A clean loop's box
- * is the one kept by identity (contourBox); a loop with unusable numbers is bounded as it is.
+ * is its summary's when it has one (contourBox); a loop with unusable numbers is bounded as it is.
  */
 function boxOf(r: Region, boxes: BoxList, k: number): boolean {
   let xmin = Infinity, xmax = -Infinity, ymin = Infinity, ymax = -Infinity;
@@ -70,6 +70,20 @@ function boxOf(r: Region, boxes: BoxList, k: number): boolean {
   v[4 * k + 2] = xmax;
   v[4 * k + 3] = ymax;
   return clean;
+}
+
+/** The box around every box of a list (xmin = +∞ when none has one), in flatbush's order. */
+function unionOf(list: BoxList): [number, number, number, number] {
+  let xmin = Infinity, ymin = Infinity, xmax = -Infinity, ymax = -Infinity;
+  const v = list.v;
+  for (let k = 0; k < list.length; k++) {
+    if (!list.has(k)) continue;
+    xmin = Math.min(xmin, v[4 * k]);
+    ymin = Math.min(ymin, v[4 * k + 1]);
+    xmax = Math.max(xmax, v[4 * k + 2]);
+    ymax = Math.max(ymax, v[4 * k + 3]);
+  }
+  return xmin <= xmax ? [xmin, ymin, xmax, ymax] : [Infinity, Infinity, -Infinity, -Infinity];
 }
 
 /** True when every number is finite and every bulge within [-1, 1] (safe to hand back as is). */
@@ -146,8 +160,12 @@ export function booleanRegions(subject: Region, clips: Region[], op: BoolOp): Re
   const cleanClip = new Uint8Array(cl.length);
   cl.forEach((c, k) => (cleanClip[k] = boxOf(c, boxes, k) ? 1 : 0));
   let clean = cleanClip.every((f) => f === 1);
+  // The subject's loops' boxes, each found once, and the subject's box around them.
+  const subjBoxes = new BoxList(subject.length);
+  let subjClean = true;
+  subject.forEach((c, k) => (subjClean = boxOf([c], subjBoxes, k) && subjClean));
   const subjBox = new BoxList(1);
-  const subjClean = boxOf(subject, subjBox, 0);
+  subjBox.v.set(unionOf(subjBoxes));
   if (op !== 'union') {
     // Clips that cannot touch the subject change nothing.
     const sb = subjBox.v;
@@ -166,21 +184,10 @@ export function booleanRegions(subject: Region, clips: Region[], op: BoolOp): Re
   const kept: Contour[] = [];
   let subj: Region = subject;
   if (op !== 'intersection' && subjClean && clean) {
-    let xmin = Infinity, ymin = Infinity, xmax = -Infinity, ymax = -Infinity;
-    for (const list of [subjBox, boxes]) {
-      const v = list.v;
-      for (let k = 0; k < list.length; k++) {
-        if (!list.has(k)) continue;
-        xmin = Math.min(xmin, v[4 * k]);
-        ymin = Math.min(ymin, v[4 * k + 1]);
-        xmax = Math.max(xmax, v[4 * k + 2]);
-        ymax = Math.max(ymax, v[4 * k + 3]);
-      }
-    }
+    const [sx0, sy0, sx1, sy1] = subjBox.v, [cx0, cy0, cx1, cy1] = unionOf(boxes);
+    const xmin = Math.min(sx0, cx0), ymin = Math.min(sy0, cy0), xmax = Math.max(sx1, cx1), ymax = Math.max(sy1, cy1);
     const tol = xmin <= xmax ? 1e-9 * Math.max(xmax - xmin, ymax - ymin) : 0;
     boxes.widen(tol);
-    const subjBoxes = new BoxList(subject.length);
-    subject.forEach((c, k) => boxOf([c], subjBoxes, k));
     subjBoxes.widen(tol);
     const clipsNear = boxFinder(boxes), subjNear = boxFinder(subjBoxes);
     const active: Contour[] = [];

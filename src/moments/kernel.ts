@@ -12,7 +12,7 @@
  * the centroid for centroidal ones) by the parallel-axis theorem in the direction that adds:
  * centroidal moments are never formed as m02 − A·ȳ² of origin moments, which cancels far out.
  */
-import { contourBoundsInto, contourLength, lengthOf, type Bounds, type Contour, type Region } from '../geometry/contour';
+import { contourBounds, contourBoundsInto, contourLength, lengthOf, type Bounds, type Contour, type Region } from '../geometry/contour';
 
 /** Raw moments about the document origin: m00 = A, m10 = ∫x, m01 = ∫y, m20 = ∫x², m02 = ∫y², m11 = ∫xy. */
 export interface RawMoments {
@@ -218,9 +218,9 @@ export function regionMomentsAbout(region: Region, ox: number, oy: number): RawM
     const x0 = c.xy[0], y0 = c.xy[1];
     // The kept summary's sums about the first vertex when there is one; else one pass (a whole
     // summary is two passes and the length, wasted on a loop asked only for its area).
-    const kept = KEPT.get(c);
+    const kept = SUMMARIES.get(c);
     let first: ArrayLike<number>;
-    if (kept instanceof ContourSummary) first = kept.v;
+    if (kept) first = kept.v;
     else {
       const acc = new Float64Array(6);
       accumulateContour(c, x0, y0, acc);
@@ -357,22 +357,16 @@ function sumsInto(c: Contour, ox: number, oy: number, out: number[], at: number)
 }
 
 /**
- * What is kept per contour, by identity: its summary, or its box alone (four doubles) while no
- * summary has been asked for. One map, so a new contour costs one lookup on each question (a
- * cold evaluation asks about every loop it meets, and each lookup in a WeakMap costs).
+ * The summaries, kept by identity. A box alone is not kept: putting a new key in a WeakMap cost
+ * about 0.3 µs here, more than bounding a loop of a few arcs, and a cold evaluation meets every
+ * loop once; the loops a drag frame asks about again are those of the last result, which have
+ * their summaries.
  */
-const KEPT = new WeakMap<Contour, BoxView>();
+const SUMMARIES = new WeakMap<Contour, ContourSummary>();
 
-/** A contour's exact box, kept by identity (the summary's, or computed alone when asked first). */
+/** A contour's exact box: its summary's when it has one, else computed. */
 export function contourBox(c: Contour): Bounds | null {
-  const hit = KEPT.get(c);
-  if (hit) return hit;
-  const v = [NaN, NaN, NaN, NaN];
-  contourBoundsInto(c, v, 0);
-  if (!(v[0] <= v[1])) return null;
-  const b = new BoxView(v, 0);
-  KEPT.set(c, b);
-  return b;
+  return SUMMARIES.get(c) ?? contourBounds(c);
 }
 
 /** A region's exact bounds from its contours' boxes (kept by identity). */
@@ -390,19 +384,13 @@ export function regionBox(region: Region): Bounds | null {
 }
 
 export function contourSummary(c: Contour): ContourSummary {
-  const hit = KEPT.get(c);
-  if (hit instanceof ContourSummary) return hit;
+  const hit = SUMMARIES.get(c);
+  if (hit) return hit;
   const xy = c.xy, n = xy.length >> 1;
   const x0 = n ? xy[0] : 0, y0 = n ? xy[1] : 0;
   const v = summaryNumbers();
   sumsInto(c, x0, y0, v, 0);
-  // The box kept for this contour, if any; else computed here and kept in the summary only.
-  if (hit) {
-    v[12] = hit.xmin;
-    v[13] = hit.xmax;
-    v[14] = hit.ymin;
-    v[15] = hit.ymax;
-  } else contourBoundsInto(c, v, 12);
+  contourBoundsInto(c, v, 12);
   if (!(v[12] <= v[13])) {
     v[12] = v[13] = x0;
     v[14] = v[15] = y0;
@@ -425,7 +413,7 @@ export function contourSummary(c: Contour): ContourSummary {
   v[17] = gy;
   v[18] = contourLength(c);
   const out = new ContourSummary(v);
-  KEPT.set(c, out);
+  SUMMARIES.set(c, out);
   return out;
 }
 
