@@ -252,9 +252,8 @@ function nearDemand(ctx: Ctx, c: Carrier, kind: number, a: number, b: number, d:
   list.push(kind, a, b, d, e, f);
 }
 
-/** Nested, nearly tangent circles (the inner within a sagitta of the outer): a's side all round. */
-function refineNested(ctx: Ctx, a: Carrier, b: Carrier): void {
-  const D = lengthOf(a.cx - b.cx, a.cy - b.cy);
+/** Nested, nearly tangent circles (the inner within a sagitta of the outer), centres D apart: a's side all round. */
+function refineNested(ctx: Ctx, a: Carrier, b: Carrier, D: number): void {
   const gap = Math.abs(a.r - b.r) - D;
   if (!(gap > 0) || gap >= 2 * SAG_MAX * Math.max(a.r, b.r)) return;
   nearDemand(ctx, a, NEAR_ZONE, 0, Math.PI, a.r >= b.r ? CIRCUMSCRIBE : INSCRIBE, gap, 0);
@@ -272,8 +271,7 @@ function refineNested(ctx: Ctx, a: Carrier, b: Carrier): void {
  * own circle near the other one (inscribed chords on both never meet, the lens's common chord
  * lies between them).
  */
-function refineCrossing(ctx: Ctx, a: Carrier, b: Carrier): void {
-  const D = lengthOf(a.cx - b.cx, a.cy - b.cy);
+function refineCrossing(ctx: Ctx, a: Carrier, b: Carrier, D: number): void {
   if (!(D > Math.abs(a.r - b.r))) return; // nested: refineNested
   if (D < a.r + b.r) {
     // Along the side of a facing b's centre, b reaches D + rb - ra beyond a; on the far side,
@@ -416,8 +414,9 @@ function directionAt(c: Carrier, x: number, y: number): [number, number] {
 /** The demands that carrier b makes of arc a. */
 function demandsOf(ctx: Ctx, a: Carrier, b: Carrier): void {
   if (b.kind === ARC) {
-    refineNested(ctx, a, b);
-    refineCrossing(ctx, a, b);
+    const D = lengthOf(a.cx - b.cx, a.cy - b.cy); // the centres' distance
+    refineNested(ctx, a, b, D);
+    refineCrossing(ctx, a, b, D);
   } else refineNearLine(ctx, a, b);
   refineNearVertex(ctx, a, b);
 }
@@ -453,7 +452,7 @@ export function buildArrangement(ctx: Ctx): void {
       intersectPair(ctx, a, b);
     }
     nearPair(ctx, a, b, g);
-  }, null, grow);
+  }, grow);
   // Merged nodes: the representative carries every member's carriers.
   const nn = ctx.nx.length;
   for (let i = 0; i < nn; i++) {

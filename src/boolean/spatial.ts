@@ -92,26 +92,22 @@ function bound(s: Float64Array, v: number, after: boolean): number {
  * and along y is counted first (binary searches over the sorted box starts), and when both are
  * large the index answers one box query per carrier instead.
  *
- * `ids` limits the pairs to those carriers (all by default); `grow`, per carrier id, widens
- * each box further (none by default).
+ * `grow`, per carrier id, widens each box further (none by default).
  */
-export function forEachNearPair(
-  ctx: Ctx, visit: (a: Carrier, b: Carrier) => void, ids: readonly number[] | null = null, grow: Float64Array | null = null,
-): void {
-  const cs = ctx.carriers, n = ids ? ids.length : cs.length, eps = ctx.eps;
+export function forEachNearPair(ctx: Ctx, visit: (a: Carrier, b: Carrier) => void, grow: Float64Array | null = null): void {
+  const cs = ctx.carriers, n = cs.length, eps = ctx.eps;
   if (n < 2) return;
   const xlo = new Float64Array(n), xhi = new Float64Array(n), ylo = new Float64Array(n), yhi = new Float64Array(n);
   let gmax = 0;
   for (let i = 0; i < n; i++) {
-    const c = cs[ids ? ids[i] : i];
-    const g = grow ? grow[c.id] : 0;
+    const c = cs[i];
+    const g = grow ? grow[i] : 0;
     if (g > gmax) gmax = g;
     xlo[i] = c.xmin - g;
     xhi[i] = c.xmax + g;
     ylo[i] = c.ymin - g;
     yhi[i] = c.ymax + g;
   }
-  const at = (i: number): Carrier => cs[ids ? ids[i] : i];
   // Cost of a sweep along an axis: for each box, the boxes that start within its extent.
   const sweep = (lo: Float64Array, hi: Float64Array): { order: Uint32Array; cost: number } => {
     const order = sortIndex(lo);
@@ -153,26 +149,20 @@ export function forEachNearPair(
       for (let q = p + 1; q < n; q++) {
         if (sLo[q] > end) break;
         if (sOlo[q] > top || sOhi[q] < bottom) continue;
-        visit(at(order[p]), at(order[q]));
+        visit(cs[order[p]], cs[order[q]]);
       }
     }
     return;
   }
   // The index holds every carrier's own box: ask with this box widened by the largest growth
-  // too, then keep the pairs whose widened boxes meet (and, for a subset, are in it).
+  // too, then keep the pairs whose widened boxes meet.
   const idx = carrierIndex(ctx);
-  let pos: Int32Array | null = null;
-  if (ids) {
-    pos = new Int32Array(cs.length).fill(-1);
-    for (let i = 0; i < n; i++) pos[ids[i]] = i;
-  }
+  const w = eps + gmax;
   for (let a = 0; a < n; a++) {
-    const ca = at(a), w = eps + gmax;
-    for (const k of idx.search(xlo[a] - w, ylo[a] - w, xhi[a] + w, yhi[a] + w)) {
-      const b = pos ? pos[k] : k;
+    for (const b of idx.search(xlo[a] - w, ylo[a] - w, xhi[a] + w, yhi[a] + w)) {
       if (b <= a) continue;
       if (grow && (xlo[b] > xhi[a] + eps || xhi[b] < xlo[a] - eps || ylo[b] > yhi[a] + eps || yhi[b] < ylo[a] - eps)) continue;
-      visit(ca, at(b));
+      visit(cs[a], cs[b]);
     }
   }
 }
